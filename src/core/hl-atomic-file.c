@@ -1,0 +1,120 @@
+/* hl-atomic-file.c — write a file so that it is complete or not there at all
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-atomic-file"
+
+#include "hl-atomic-file.h"
+
+#include <errno.h>
+#include <fcntl.h>
+#include <glib/gstdio.h>
+#include <string.h>
+#include <unistd.h>
+
+
+static void
+set_errno_error (GError    **error,
+                 const char *what,
+                 const char *path,
+                 int         saved_errno)
+{
+  g_set_error (error, G_FILE_ERROR, g_file_error_from_errno (saved_errno),
+               "%s “%s”: %s", what, path, g_strerror (saved_errno));
+}
+
+gboolean
+hl_atomic_check_target (const char *path,
+                        GError    **error)
+{
+  g_autofree char *dir = NULL;
+
+  if (path == NULL || path[0] == '\0')
+    {
+      g_set_error_literal (error, G_FILE_ERROR, G_FILE_ERROR_INVAL, "no output file name given");
+      return FALSE;
+    }
+  if (g_file_test (path, G_FILE_TEST_IS_DIR))
+    {
+      g_set_error (error, G_FILE_ERROR, G_FILE_ERROR_ISDIR, "cannot write “%s”: it is a folder", path);
+      return FALSE;
+    }
+  dir = g_path_get_dirname (path);
+  if (!g_file_test (dir, G_FILE_TEST_IS_DIR))
+    {
+      g_set_error (error, G_FILE_ERROR, G_FILE_ERROR_NOENT, "cannot write “%s”: the folder “%s” does not exist", path, dir);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+gboolean
+hl_atomic_write (const char *path,
+                 const char *data,
+                 gssize      length,
+                 GError    **error)
+{
+  g_autoptr(GError) local = NULL;
+
+  if (!hl_atomic_check_target (path, error))
+    return FALSE;
+  if (!g_file_set_contents_full (path, data, length,
+                                 G_FILE_SET_CONTENTS_CONSISTENT | G_FILE_SET_CONTENTS_ONLY_EXISTING,
+                                 0644, &local))
+    {
+      g_set_error (error, local->domain, local->code, "cannot write “%s”: %s", path, local->message);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+char *
+hl_atomic_temp_name (const char *path)
+{
+  g_autofree char *dir = g_path_get_dirname (path);
+  g_autofree char *base = g_path_get_basename (path);
+  /* hidden, and unique per process and call */
+  static guint counter;
+
+  return g_strdup_printf ("%s%c.%s.%d-%u.tmp", dir, G_DIR_SEPARATOR, base, (int) getpid (),
+                          g_atomic_int_add (&counter, 1));
+}
+
+gboolean
+hl_atomic_commit (const char *temp,
+                  const char *path,
+                  GError    **error)
+{
+  int fd = g_open (temp, O_RDONLY, 0);
+
+  if (fd >= 0)
+    {
+      /* the data must be on disk before the name points at it */
+      if (fsync (fd) != 0)
+        {
+          int saved = errno;
+
+          close (fd);
+          hl_atomic_abandon (temp);
+          set_errno_error (error, "cannot write", path, saved);
+          return FALSE;
+        }
+      close (fd);
+    }
+  if (g_rename (temp, path) != 0)
+    {
+      int saved = errno;
+
+      hl_atomic_abandon (temp);
+      set_errno_error (error, "cannot write", path, saved);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+void
+hl_atomic_abandon (const char *temp)
+{
+  if (temp != NULL)
+    g_unlink (temp);
+}

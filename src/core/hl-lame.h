@@ -1,0 +1,84 @@
+/* hl-lame.h — Lamé thick-wall solution and the thin-wall membrane formulas
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-shell.h"
+
+G_BEGIN_DECLS
+
+/* One loaded wall, SI units.  A and B are the Lamé constants of the
+ * cylinder (radial = A - B/r^2) or C and D of the sphere
+ * (radial = C - D/r^3). */
+typedef struct
+{
+  HlForm form;
+  HlEnds ends;
+  double a, b;
+  double pi, po;
+  double E, nu;
+  double A, B;
+} HlLame;
+
+typedef struct
+{
+  double radial, hoop, axial;
+} HlStress;
+
+void     hl_lame_init            (HlLame       *lame,
+                                  HlForm        form,
+                                  HlEnds        ends,
+                                  double        a,
+                                  double        b,
+                                  double        pi,
+                                  double        po,
+                                  double        E,
+                                  double        nu);
+HlStress hl_lame_stress          (const HlLame *lame,
+                                  double        r);
+double   hl_lame_displacement    (const HlLame *lame,
+                                  double        r);
+/* axial (cylinder) strain; 0 for plane strain and spheres */
+double   hl_lame_axial_strain    (const HlLame *lame);
+/* Lamé hoop value of largest magnitude in the wall (it sits at a or b) */
+double   hl_lame_peak_hoop       (const HlLame *lame);
+/* peak equivalent stress in the wall; the equivalent stresses of the
+ * Lamé field depend on r only through B/r^2 (D/r^3) and grow with it,
+ * so the peak is on a surface and both surfaces are compared. */
+double   hl_lame_peak_equivalent (const HlLame *lame,
+                                  HlCriterion   criterion);
+
+double   hl_von_mises            (HlStress      s);
+double   hl_tresca               (HlStress      s);
+double   hl_equivalent           (HlStress      s,
+                                  HlCriterion   criterion);
+
+/* Thin-wall membrane theory, radial stress zero (common practice). */
+double   hl_thin_radius          (HlRadiusBasis basis,
+                                  double        a,
+                                  double        b);
+double   hl_thin_hoop            (HlForm        form,
+                                  double        net_pressure,
+                                  double        radius,
+                                  double        t);
+double   hl_thin_axial           (HlForm        form,
+                                  HlEnds        ends,
+                                  double        nu,
+                                  double        hoop);
+/* radial growth of the thin shell at @radius (Roark, thin vessels table) */
+double   hl_thin_growth          (HlForm        form,
+                                  HlEnds        ends,
+                                  double        net_pressure,
+                                  double        radius,
+                                  double        t,
+                                  double        E,
+                                  double        nu);
+
+/* 100 (thin - Lamé peak) / |Lamé peak| for the chosen measure; NaN when
+ * the Lamé peak is zero. */
+double   hl_thin_wall_error      (const HlLame    *lame,
+                                  HlRadiusBasis    basis,
+                                  HlVerdictMeasure measure);
+
+G_END_DECLS

@@ -1,0 +1,35 @@
+/* hl-material.h — material properties used by a shell
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-quantity.h"
+
+G_BEGIN_DECLS
+
+#define HL_ID_MAX   64
+#define HL_NAME_MAX 128
+
+typedef struct
+{
+  char       id[HL_ID_MAX];
+  char       name[HL_NAME_MAX];
+  HlQuantity elastic_modulus;   /* stress units */
+  double     poisson_ratio;
+  HlQuantity yield_strength;
+  HlQuantity allowable_stress;
+} HlMaterial;
+
+HlMaterial         hl_material_default   (void);
+gboolean           hl_material_equal     (const HlMaterial *a,
+                                          const HlMaterial *b);
+
+/* Generic materials with typical room-temperature properties.  They are
+ * starting points, to be checked against the material certificate and the
+ * design code's tables; the name says "typical". */
+guint              hl_material_builtin_count (void);
+const HlMaterial  *hl_material_builtin       (guint       index);
+const HlMaterial  *hl_material_builtin_find  (const char *id);
+
+G_END_DECLS

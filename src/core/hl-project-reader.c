@@ -1,0 +1,676 @@
+/* hl-project-reader.c — reading .hoop project files safely
+ *
+ * The file comes from anywhere, so the reader trusts nothing: size is
+ * capped before reading, DTDs and entity declarations are refused before
+ * parsing (no expansion bombs, no external entities), the parser never
+ * touches the network, depth is capped, the shape is checked against the
+ * RELAX NG schema and then every value is checked like a typed field.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-project-reader"
+
+#include "hl-project-file.h"
+#include "hl-shell-check.h"
+#include "hl-core-resources.h"
+
+#include <gio/gio.h>
+#include <libxml/parser.h>
+#include <libxml/relaxng.h>
+#include <libxml/xmlerror.h>
+#include <string.h>
+
+G_DEFINE_QUARK (hl-project-file-error-quark, hl_project_file_error)
+
+typedef struct
+{
+  const char *name;         /* file name for messages */
+  GPtrArray  *warnings;
+  GError     *error;        /* first error only */
+} Reader;
+
+static void
+fail (Reader     *rd,
+      int         code,
+      long        line,
+      const char *element,
+      const char *format,
+      ...) G_GNUC_PRINTF (5, 6);
+
+static void
+fail (Reader     *rd,
+      int         code,
+      long        line,
+      const char *element,
+      const char *format,
+      ...)
+{
+  g_autofree char *msg = NULL;
+  va_list args;
+
+  if (rd->error != NULL)
+    return;
+  va_start (args, format);
+  msg = g_strdup_vprintf (format, args);
+  va_end (args);
+  if (element != NULL)
+    g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s: %s", rd->name, MAX (line, 1), element, msg);
+  else
+    g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s", rd->name, MAX (line, 1), msg);
+}
+
+/* ---- before parsing ------------------------------------------------ */
+
+static long
+line_of_offset (const char *data,
+                gsize       offset)
+{
+  long line = 1;
+
+  for (gsize i = 0; i < offset; i++)
+    if (data[i] == '\n')
+      line++;
+  return line;
+}
+
+static gboolean
+refuse_declarations (Reader     *rd,
+                     const char *data,
+                     gsize       length)
+{
+  static const char *const forbidden[] = { "<!DOCTYPE", "<!ENTITY", "<!ELEMENT", "<!ATTLIST" };
+
+  for (guint f = 0; f < G_N_ELEMENTS (forbidden); f++)
+    {
+      const char *hit = g_strstr_len (data, length, forbidden[f]);
+
+      if (hit != NULL)
+        {
+          fail (rd, HL_PROJECT_FILE_ERROR_UNSAFE, line_of_offset (data, hit - data), NULL,
+                "document type declarations and entities are not allowed in a project file");
+          return FALSE;
+        }
+    }
+  if (memchr (data, '\0', length) != NULL)
+    {
+      const char *nul = memchr (data, '\0', length);
+
+      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, nul - data), NULL,
+            "the file contains a NUL byte: not a text project file");
+      return FALSE;
+    }
+  return TRUE;
+}
+
+/* ---- libxml2 error capture ---------------------------------------- */
+
+static void
+on_structured_error (void        *user_data,
+                     xmlErrorPtr  err)
+{
+  Reader *rd = user_data;
+  g_autofree char *msg = NULL;
+  const char *element = NULL;
+  int code = err->domain == XML_FROM_RELAXNGV || err->domain == XML_FROM_RELAXNGP
+               ? HL_PROJECT_FILE_ERROR_SCHEMA : HL_PROJECT_FILE_ERROR_SYNTAX;
+
+  if (err->level < XML_ERR_ERROR || rd->error != NULL)
+    return;
+  msg = g_strstrip (g_strdup (err->message != NULL ? err->message : "unknown XML error"));
+  if (err->node != NULL && ((xmlNodePtr) err->node)->type == XML_ELEMENT_NODE)
+    element = (const char *) ((xmlNodePtr) err->node)->name;
+  fail (rd, code, err->line, element, "%s", msg);
+}
+
+/* ---- tree checks --------------------------------------------------- */
+
+static gboolean
+check_depth (Reader    *rd,
+             xmlNodePtr node,
+             int        depth)
+{
+  for (xmlNodePtr n = node; n != NULL; n = n->next)
+    {
+      if (n->type != XML_ELEMENT_NODE)
+        continue;
+      if (depth > HL_PROJECT_FILE_MAX_DEPTH)
+        {
+          fail (rd, HL_PROJECT_FILE_ERROR_UNSAFE, xmlGetLineNo (n), (const char *) n->name,
+                "elements nested deeper than %d levels", HL_PROJECT_FILE_MAX_DEPTH);
+          return FALSE;
+        }
+      if (!check_depth (rd, n->children, depth + 1))
+        return FALSE;
+    }
+  return TRUE;
+}
+
+static const char *const known_project[] = {
+  "title", "engineer", "description", "display-units", "material", "shell", "revision", NULL
+};
+static const char *const known_material[] = {
+  "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
+};
+static const char *const known_shell[] = {
+  "name", "material-ref", "inner-diameter", "outer-diameter", "inner-radius", "outer-radius",
+  "wall-thickness", "corrosion-allowance", "internal-pressure", "external-pressure",
+  "joint-efficiency", "thin-radius-basis", "thin-tolerance", "verdict-measure",
+  "sizing-criterion", NULL
+};
+
+/* A newer minor format may add elements; this version skips them with a
+ * warning instead of refusing the file. */
+static void
+drop_unknown (Reader            *rd,
+              xmlNodePtr         parent,
+              const char *const *known)
+{
+  xmlNodePtr n = parent->children;
+
+  while (n != NULL)
+    {
+      xmlNodePtr next = n->next;
+
+      if (n->type == XML_ELEMENT_NODE)
+        {
+          if (!g_strv_contains (known, (const char *) n->name))
+            {
+              if (rd->warnings != NULL)
+                g_ptr_array_add (rd->warnings,
+                                 g_strdup_printf ("%s:%ld: %s: element of a newer format version, ignored",
+                                                  rd->name, xmlGetLineNo (n), n->name));
+              xmlUnlinkNode (n);
+              xmlFreeNode (n);
+            }
+          else if (known == known_project && xmlStrEqual (n->name, BAD_CAST "material"))
+            drop_unknown (rd, n, known_material);
+          else if (known == known_project && xmlStrEqual (n->name, BAD_CAST "shell"))
+            drop_unknown (rd, n, known_shell);
+        }
+      n = next;
+    }
+}
+
+static xmlRelaxNGPtr
+load_schema (Reader *rd)
+{
+  /* looked up in our own resource: a static library drops unreferenced
+   * constructors, so global registration cannot be relied on */
+  g_autoptr(GBytes) bytes = g_resource_lookup_data (hl_core_get_resource (),
+                                                    "/org/hoopline/core/hoopline-project.rng",
+                                                    G_RESOURCE_LOOKUP_FLAGS_NONE, NULL);
+  xmlRelaxNGParserCtxtPtr pctx;
+  xmlRelaxNGPtr schema;
+  gsize size;
+  const char *data;
+
+  if (bytes == NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema is missing from this build");
+      return NULL;
+    }
+  data = g_bytes_get_data (bytes, &size);
+  pctx = xmlRelaxNGNewMemParserCtxt (data, (int) size);
+  schema = xmlRelaxNGParse (pctx);
+  xmlRelaxNGFreeParserCtxt (pctx);
+  if (schema == NULL)
+    fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
+  return schema;
+}
+
+static gboolean
+validate (Reader   *rd,
+          xmlDocPtr doc)
+{
+  static xmlRelaxNGPtr schema; /* parsed once, read-only afterwards */
+  static gsize schema_once;
+  xmlRelaxNGValidCtxtPtr vctx;
+  int rc;
+
+  if (g_once_init_enter (&schema_once))
+    {
+      schema = load_schema (rd);
+      g_once_init_leave (&schema_once, 1);
+    }
+  if (schema == NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
+      return FALSE;
+    }
+  vctx = xmlRelaxNGNewValidCtxt (schema);
+  xmlRelaxNGSetValidStructuredErrors (vctx, on_structured_error, rd);
+  rc = xmlRelaxNGValidateDoc (vctx, doc);
+  xmlRelaxNGFreeValidCtxt (vctx);
+  if (rc != 0 && rd->error == NULL)
+    fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (xmlDocGetRootElement (doc)), NULL,
+          "the file does not follow the Hoopline project format");
+  return rc == 0;
+}
+
+/* ---- values -------------------------------------------------------- */
+
+static char *
+text_of (xmlNodePtr n)
+{
+  xmlChar *raw = xmlNodeGetContent (n);
+  char *text = g_strdup (raw != NULL ? (const char *) raw : "");
+
+  xmlFree (raw);
+  return text;
+}
+
+static xmlNodePtr
+child (xmlNodePtr  parent,
+       const char *name)
+{
+  for (xmlNodePtr n = parent->children; n != NULL; n = n->next)
+    if (n->type == XML_ELEMENT_NODE && xmlStrEqual (n->name, BAD_CAST name))
+      return n;
+  return NULL;
+}
+
+static gboolean
+read_number (Reader    *rd,
+             xmlNodePtr n,
+             double    *value)
+{
+  g_autofree char *text = text_of (n);
+  g_autoptr(GError) local = NULL;
+
+  if (!hl_parse_number (text, value, &local))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), (const char *) n->name, "%s", local->message);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+static gboolean
+read_quantity (Reader        *rd,
+               xmlNodePtr     parent,
+               const char    *name,
+               HlQuantityKind kind,
+               HlQuantity    *q)
+{
+  xmlNodePtr n = child (parent, name);
+  xmlChar *unit;
+  const char *canonical;
+  double value;
+
+  if (n == NULL)
+    return TRUE;  /* optional: the default stays */
+  if (!read_number (rd, n, &value))
+    return FALSE;
+  unit = xmlGetProp (n, BAD_CAST "unit");
+  canonical = unit != NULL ? hl_unit_canonical (kind, (const char *) unit)
+                           : hl_unit_default (kind, HL_UNIT_SYSTEM_SI);
+  if (canonical == NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name, "unknown unit “%s”", (const char *) unit);
+      xmlFree (unit);
+      return FALSE;
+    }
+  xmlFree (unit);
+  *q = hl_quantity_make (value, canonical);
+  return TRUE;
+}
+
+static void
+copy_text (xmlNodePtr  parent,
+           const char *name,
+           char       *dest,
+           gsize       size)
+{
+  xmlNodePtr n = child (parent, name);
+
+  if (n != NULL)
+    {
+      g_autofree char *text = text_of (n);
+
+      g_strlcpy (dest, g_strstrip (text), size);
+    }
+}
+
+static char *
+prop (xmlNodePtr  n,
+      const char *name)
+{
+  xmlChar *raw = xmlGetProp (n, BAD_CAST name);
+  char *value = raw != NULL ? g_strdup ((const char *) raw) : NULL;
+
+  xmlFree (raw);
+  return value;
+}
+
+static gboolean
+read_material (Reader    *rd,
+               HlProject *project,
+               xmlNodePtr n)
+{
+  HlMaterial m = hl_material_default ();
+  g_autofree char *id = prop (n, "id");
+  xmlNodePtr nu;
+
+  if (hl_project_find_material (project, id) != NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "material", "the id “%s” is used twice", id);
+      return FALSE;
+    }
+  g_strlcpy (m.id, id, sizeof m.id);
+  m.name[0] = '\0';
+  copy_text (n, "name", m.name, sizeof m.name);
+  if (!read_quantity (rd, n, "elastic-modulus", HL_KIND_MODULUS, &m.elastic_modulus)
+      || !read_quantity (rd, n, "yield-strength", HL_KIND_STRESS, &m.yield_strength)
+      || !read_quantity (rd, n, "allowable-stress", HL_KIND_STRESS, &m.allowable_stress))
+    return FALSE;
+  nu = child (n, "poisson-ratio");
+  if (nu != NULL && !read_number (rd, nu, &m.poisson_ratio))
+    return FALSE;
+  g_array_append_val (project->materials, m);
+  return TRUE;
+}
+
+static xmlNodePtr
+size_node (xmlNodePtr  shell,
+           HlSizeKind *kind)
+{
+  static const HlSizeKind kinds[] = {
+    HL_SIZE_INNER_DIAMETER, HL_SIZE_OUTER_DIAMETER, HL_SIZE_INNER_RADIUS, HL_SIZE_OUTER_RADIUS
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (kinds); i++)
+    {
+      xmlNodePtr n = child (shell, hl_size_kind_to_element (kinds[i]));
+
+      if (n != NULL)
+        {
+          *kind = kinds[i];
+          return n;
+        }
+    }
+  return NULL;
+}
+
+typedef gboolean (*ChoiceFunc) (const char *text, gpointer out);
+
+/* the schema has already limited these to their listed words */
+static void
+read_choice (xmlNodePtr  parent,
+             const char *name,
+             ChoiceFunc  from_string,
+             gpointer    out)
+{
+  xmlNodePtr n = child (parent, name);
+  g_autofree char *text = NULL;
+
+  if (n == NULL)
+    return;
+  text = text_of (n);
+  from_string (g_strstrip (text), out);
+}
+
+/* Line of the element a problem's field names, else of the shell. */
+static long
+field_line (xmlNodePtr  shell,
+            const char *field)
+{
+  xmlNodePtr n = child (shell, field);
+
+  return xmlGetLineNo (n != NULL ? n : shell);
+}
+
+static gboolean
+read_shell (Reader    *rd,
+            HlProject *project,
+            xmlNodePtr n)
+{
+  HlShellInputs s = hl_shell_inputs_default ();
+  g_autofree char *id = prop (n, "id");
+  g_autofree char *form = prop (n, "form");
+  g_autofree char *ends = prop (n, "ends");
+  g_autoptr(GPtrArray) problems = NULL;
+  const HlMaterial *material;
+  xmlNodePtr nsize, n_je;
+
+  if (hl_project_find_shell (project, id) != NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "the id “%s” is used twice", id);
+      return FALSE;
+    }
+  g_strlcpy (s.id, id, sizeof s.id);
+  g_strlcpy (s.name, id, sizeof s.name);
+  copy_text (n, "name", s.name, sizeof s.name);
+  if (form != NULL)
+    hl_form_from_string (form, &s.form);
+  if (ends != NULL)
+    hl_ends_from_string (ends, &s.ends);
+
+  copy_text (n, "material-ref", s.material_ref, sizeof s.material_ref);
+  material = hl_project_find_material (project, s.material_ref);
+  if (material == NULL)
+    material = hl_material_builtin_find (s.material_ref);
+  if (material == NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, "material-ref"), "material-ref",
+            "no material with the id “%s” in this project", s.material_ref);
+      return FALSE;
+    }
+  s.material = *material;
+
+  nsize = size_node (n, &s.size_kind);
+  if (nsize == NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "no size given");
+      return FALSE;
+    }
+  if (!read_quantity (rd, n, hl_size_kind_to_element (s.size_kind), HL_KIND_LENGTH, &s.size)
+      || !read_quantity (rd, n, "wall-thickness", HL_KIND_LENGTH, &s.wall_thickness)
+      || !read_quantity (rd, n, "corrosion-allowance", HL_KIND_LENGTH, &s.corrosion_allowance)
+      || !read_quantity (rd, n, "internal-pressure", HL_KIND_STRESS, &s.internal_pressure)
+      || !read_quantity (rd, n, "external-pressure", HL_KIND_STRESS, &s.external_pressure)
+      || !read_quantity (rd, n, "thin-tolerance", HL_KIND_PERCENT, &s.thin_tolerance))
+    return FALSE;
+  n_je = child (n, "joint-efficiency");
+  if (n_je != NULL && !read_number (rd, n_je, &s.joint_efficiency))
+    return FALSE;
+  read_choice (n, "thin-radius-basis", (ChoiceFunc) hl_basis_from_string, &s.thin_basis);
+  read_choice (n, "verdict-measure", (ChoiceFunc) hl_measure_from_string, &s.verdict_measure);
+  read_choice (n, "sizing-criterion", (ChoiceFunc) hl_criterion_from_string, &s.sizing_criterion);
+
+  problems = hl_shell_inputs_check (&s);
+  if (problems->len > 0)
+    {
+      HlProblem *p = g_ptr_array_index (problems, 0);
+      /* material fields live in the material element */
+      gboolean in_material = child (n, p->field) == NULL && hl_project_find_material (project, s.material_ref) != NULL;
+
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s%s", p->message,
+            in_material ? " (in the shell's material)" : "");
+      return FALSE;
+    }
+  g_array_append_val (project->shells, s);
+  return TRUE;
+}
+
+static gboolean
+read_revision (Reader    *rd,
+               HlProject *project,
+               xmlNodePtr n)
+{
+  g_autofree char *number = prop (n, "number");
+  g_autofree char *date = prop (n, "date");
+  g_autofree char *author = prop (n, "author");
+  g_autofree char *text = text_of (n);
+  guint64 value = 0;
+
+  if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, 1000000, &value, NULL))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
+      return FALSE;
+    }
+  hl_project_add_revision (project, (guint) value, g_strstrip (date), author, g_strstrip (text));
+  return TRUE;
+}
+
+static HlProject *
+build_project (Reader    *rd,
+               xmlNodePtr root)
+{
+  g_autoptr(HlProject) project = hl_project_new ();
+  g_autofree char *title = NULL, *engineer = NULL, *description = NULL, *units = NULL;
+  xmlNodePtr n;
+
+  if ((n = child (root, "title")) != NULL)
+    hl_project_set_title (project, g_strstrip (title = text_of (n)));
+  if ((n = child (root, "engineer")) != NULL)
+    hl_project_set_engineer (project, g_strstrip (engineer = text_of (n)));
+  if ((n = child (root, "description")) != NULL)
+    hl_project_set_description (project, g_strstrip (description = text_of (n)));
+  if ((n = child (root, "display-units")) != NULL)
+    project->display_units = strcmp (g_strstrip (units = text_of (n)), "us") == 0
+                               ? HL_UNIT_SYSTEM_US : HL_UNIT_SYSTEM_SI;
+
+  /* materials first: shells refer to them wherever they stand */
+  for (n = root->children; n != NULL; n = n->next)
+    if (n->type == XML_ELEMENT_NODE && xmlStrEqual (n->name, BAD_CAST "material")
+        && !read_material (rd, project, n))
+      return NULL;
+  for (n = root->children; n != NULL; n = n->next)
+    if (n->type == XML_ELEMENT_NODE && xmlStrEqual (n->name, BAD_CAST "shell")
+        && !read_shell (rd, project, n))
+      return NULL;
+  for (n = root->children; n != NULL; n = n->next)
+    if (n->type == XML_ELEMENT_NODE && xmlStrEqual (n->name, BAD_CAST "revision")
+        && !read_revision (rd, project, n))
+      return NULL;
+  return g_steal_pointer (&project);
+}
+
+static gboolean
+check_root (Reader    *rd,
+            xmlNodePtr root)
+{
+  g_autofree char *format = NULL;
+  char *end = NULL;
+  guint64 major;
+
+  if (root == NULL || !xmlStrEqual (root->name, BAD_CAST "hoopline-project"))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, root != NULL ? xmlGetLineNo (root) : 1, NULL,
+            "not a Hoopline project (the root element is <%s>, expected <hoopline-project>)",
+            root != NULL ? (const char *) root->name : "nothing");
+      return FALSE;
+    }
+  format = prop (root, "format");
+  if (format == NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (root), "hoopline-project", "the format attribute is missing");
+      return FALSE;
+    }
+  major = g_ascii_strtoull (format, &end, 10);
+  if (end == format || major != 1)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (root), "hoopline-project",
+            "format “%s” is not supported by this version (it reads format 1)", format);
+      return FALSE;
+    }
+  if (*end == '.')
+    drop_unknown (rd, root, known_project);
+  return TRUE;
+}
+
+HlProject *
+hl_project_load_bytes (const char  *data,
+                       gsize        length,
+                       const char  *display_name,
+                       GPtrArray  **warnings,
+                       GError     **error)
+{
+  Reader rd = { display_name != NULL ? display_name : "project", NULL, NULL };
+  xmlParserCtxtPtr ctxt;
+  xmlDocPtr doc = NULL;
+  HlProject *project = NULL;
+
+  g_return_val_if_fail (data != NULL || length == 0, NULL);
+  g_return_val_if_fail (error == NULL || *error == NULL, NULL);
+
+  if (warnings != NULL)
+    rd.warnings = g_ptr_array_new_with_free_func (g_free);
+  if (length > HL_PROJECT_FILE_MAX_BYTES)
+    fail (&rd, HL_PROJECT_FILE_ERROR_TOO_LARGE, 1, NULL, "the file is larger than %d MiB: not a project file",
+          HL_PROJECT_FILE_MAX_BYTES / (1024 * 1024));
+  else if (length == 0)
+    fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty");
+  else if (refuse_declarations (&rd, data, length))
+    {
+      ctxt = xmlNewParserCtxt ();
+      xmlSetStructuredErrorFunc (&rd, on_structured_error);
+      /* NONET: never fetch; no NOENT/DTDLOAD: never expand or load */
+      doc = xmlCtxtReadMemory (ctxt, data, (int) length, rd.name, NULL, XML_PARSE_NONET | XML_PARSE_NOCDATA);
+      xmlSetStructuredErrorFunc (NULL, NULL);
+      if (doc == NULL && rd.error == NULL)
+        fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "not a well-formed XML document");
+      xmlFreeParserCtxt (ctxt);
+    }
+
+  if (doc != NULL && rd.error == NULL
+      && check_depth (&rd, xmlDocGetRootElement (doc), 1)
+      && check_root (&rd, xmlDocGetRootElement (doc))
+      && validate (&rd, doc))
+    project = build_project (&rd, xmlDocGetRootElement (doc));
+  if (doc != NULL)
+    xmlFreeDoc (doc);
+
+  if (rd.error != NULL)
+    {
+      g_clear_pointer (&project, hl_project_free);
+      g_propagate_error (error, rd.error);
+      g_clear_pointer (&rd.warnings, g_ptr_array_unref);
+      return NULL;
+    }
+  if (warnings != NULL)
+    *warnings = rd.warnings;
+  return project;
+}
+
+HlProject *
+hl_project_load (const char  *path,
+                 GPtrArray  **warnings,
+                 GError     **error)
+{
+  g_autoptr(GFile) file = g_file_new_for_path (path);
+  g_autoptr(GFileInfo) info = NULL;
+  g_autoptr(GError) local = NULL;
+  g_autofree char *data = NULL;
+  g_autofree char *name = g_strdup (path);
+  gsize length = 0;
+
+  g_return_val_if_fail (path != NULL, NULL);
+
+  /* refuse a huge file before reading a byte of it */
+  info = g_file_query_info (file, G_FILE_ATTRIBUTE_STANDARD_SIZE "," G_FILE_ATTRIBUTE_STANDARD_TYPE,
+                            G_FILE_QUERY_INFO_NONE, NULL, &local);
+  if (info == NULL)
+    {
+      g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_IO, "%s:1: cannot open: %s", name, local->message);
+      return NULL;
+    }
+  if (g_file_info_get_file_type (info) != G_FILE_TYPE_REGULAR)
+    {
+      g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_IO, "%s:1: not a regular file", name);
+      return NULL;
+    }
+  if (g_file_info_get_size (info) > HL_PROJECT_FILE_MAX_BYTES)
+    {
+      g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_TOO_LARGE,
+                   "%s:1: the file is larger than %d MiB: not a project file", name,
+                   HL_PROJECT_FILE_MAX_BYTES / (1024 * 1024));
+      return NULL;
+    }
+  if (!g_file_get_contents (path, &data, &length, &local))
+    {
+      g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_IO, "%s:1: cannot read: %s", name, local->message);
+      return NULL;
+    }
+  return hl_project_load_bytes (data, length, name, warnings, error);
+}

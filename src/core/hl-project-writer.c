@@ -1,0 +1,130 @@
+/* hl-project-writer.c — writing .hoop project files
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-project-writer"
+
+#include "hl-project-file.h"
+#include "hl-atomic-file.h"
+
+#include <string.h>
+
+static void
+put_text (GString    *out,
+          int         indent,
+          const char *element,
+          const char *text)
+{
+  g_autofree char *escaped = g_markup_escape_text (text != NULL ? text : "", -1);
+
+  g_string_append_printf (out, "%*s<%s>%s</%s>\n", indent, "", element, escaped, element);
+}
+
+static void
+put_number (GString    *out,
+            int         indent,
+            const char *element,
+            double      value)
+{
+  g_autofree char *num = hl_format_exact (value);
+
+  g_string_append_printf (out, "%*s<%s>%s</%s>\n", indent, "", element, num, element);
+}
+
+static void
+put_quantity (GString    *out,
+              int         indent,
+              const char *element,
+              HlQuantity  q)
+{
+  g_autofree char *num = hl_format_exact (q.value);
+  g_autofree char *unit = g_markup_escape_text (q.unit, -1);
+
+  g_string_append_printf (out, "%*s<%s unit=\"%s\">%s</%s>\n", indent, "", element, unit, num, element);
+}
+
+static void
+put_material (GString          *out,
+              const HlMaterial *m)
+{
+  g_autofree char *id = g_markup_escape_text (m->id, -1);
+
+  g_string_append_printf (out, "  <material id=\"%s\">\n", id);
+  put_text (out, 4, "name", m->name);
+  put_quantity (out, 4, "elastic-modulus", m->elastic_modulus);
+  put_number (out, 4, "poisson-ratio", m->poisson_ratio);
+  put_quantity (out, 4, "yield-strength", m->yield_strength);
+  put_quantity (out, 4, "allowable-stress", m->allowable_stress);
+  g_string_append (out, "  </material>\n");
+}
+
+static void
+put_shell (GString             *out,
+           const HlShellInputs *s)
+{
+  g_autofree char *id = g_markup_escape_text (s->id, -1);
+
+  g_string_append_printf (out, "  <shell id=\"%s\" form=\"%s\" ends=\"%s\">\n", id,
+                          hl_form_to_string (s->form), hl_ends_to_string (s->ends));
+  put_text (out, 4, "name", s->name);
+  put_text (out, 4, "material-ref", s->material_ref);
+  put_quantity (out, 4, hl_size_kind_to_element (s->size_kind), s->size);
+  put_quantity (out, 4, "wall-thickness", s->wall_thickness);
+  put_quantity (out, 4, "corrosion-allowance", s->corrosion_allowance);
+  put_quantity (out, 4, "internal-pressure", s->internal_pressure);
+  put_quantity (out, 4, "external-pressure", s->external_pressure);
+  put_number (out, 4, "joint-efficiency", s->joint_efficiency);
+  put_text (out, 4, "thin-radius-basis", hl_basis_to_string (s->thin_basis));
+  put_quantity (out, 4, "thin-tolerance", s->thin_tolerance);
+  put_text (out, 4, "verdict-measure", hl_measure_to_string (s->verdict_measure));
+  put_text (out, 4, "sizing-criterion", hl_criterion_to_string (s->sizing_criterion));
+  g_string_append (out, "  </shell>\n");
+}
+
+char *
+hl_project_to_xml (const HlProject *project)
+{
+  GString *out = g_string_new ("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+
+  g_return_val_if_fail (project != NULL, NULL);
+
+  g_string_append (out, "<hoopline-project format=\"1\">\n");
+  put_text (out, 2, "title", project->title);
+  put_text (out, 2, "engineer", project->engineer);
+  put_text (out, 2, "description", project->description);
+  put_text (out, 2, "display-units", project->display_units == HL_UNIT_SYSTEM_US ? "us" : "si");
+  for (guint i = 0; i < project->materials->len; i++)
+    put_material (out, &g_array_index (project->materials, HlMaterial, i));
+  for (guint i = 0; i < project->shells->len; i++)
+    put_shell (out, &g_array_index (project->shells, HlShellInputs, i));
+  for (guint i = 0; i < project->revisions->len; i++)
+    {
+      const HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
+      g_autofree char *author = g_markup_escape_text (r->author, -1);
+      g_autofree char *text = g_markup_escape_text (r->text, -1);
+
+      g_string_append_printf (out, "  <revision number=\"%u\" date=\"%s\" author=\"%s\">%s</revision>\n",
+                              r->number, r->date, author, text);
+    }
+  g_string_append (out, "</hoopline-project>\n");
+  return g_string_free (out, FALSE);
+}
+
+gboolean
+hl_project_save (const HlProject *project,
+                 const char      *path,
+                 GError         **error)
+{
+  g_autofree char *xml = NULL;
+  g_autoptr(GError) local = NULL;
+
+  g_return_val_if_fail (project != NULL && path != NULL, FALSE);
+
+  xml = hl_project_to_xml (project);
+  if (!hl_atomic_write (path, xml, -1, &local))
+    {
+      g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_IO, "Cannot save: %s", local->message);
+      return FALSE;
+    }
+  return TRUE;
+}

@@ -1,0 +1,76 @@
+/* hl-project.h — a project: shells, materials, revision notes
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-shell.h"
+
+G_BEGIN_DECLS
+
+typedef struct
+{
+  guint number;
+  char  date[11];          /* YYYY-MM-DD */
+  char *author;
+  char *text;
+} HlRevision;
+
+typedef struct
+{
+  char        *title;
+  char        *engineer;
+  char        *description;
+  HlUnitSystem display_units;
+  GArray      *materials;   /* HlMaterial */
+  GArray      *shells;      /* HlShellInputs */
+  GArray      *revisions;   /* HlRevision, in file order */
+} HlProject;
+
+HlProject           *hl_project_new           (void);
+HlProject           *hl_project_copy          (const HlProject *project);
+void                 hl_project_free          (HlProject       *project);
+gboolean             hl_project_equal         (const HlProject *a,
+                                               const HlProject *b);
+
+void                 hl_project_set_title       (HlProject *project, const char *title);
+void                 hl_project_set_engineer    (HlProject *project, const char *engineer);
+void                 hl_project_set_description (HlProject *project, const char *description);
+
+guint                hl_project_n_shells      (const HlProject *project);
+HlShellInputs       *hl_project_shell         (const HlProject *project,
+                                               guint            index);
+const HlShellInputs *hl_project_find_shell    (const HlProject *project,
+                                               const char      *id);
+void                 hl_project_add_shell     (HlProject           *project,
+                                               const HlShellInputs *shell);
+void                 hl_project_insert_shell  (HlProject           *project,
+                                               guint                index,
+                                               const HlShellInputs *shell);
+void                 hl_project_remove_shell  (HlProject *project,
+                                               guint      index);
+/* an id of the form "<stem>-N" that no shell uses yet */
+char                *hl_project_unique_shell_id (const HlProject *project,
+                                                 const char      *stem);
+
+guint                hl_project_n_materials   (const HlProject *project);
+HlMaterial          *hl_project_material      (const HlProject *project,
+                                               guint            index);
+HlMaterial          *hl_project_find_material (const HlProject *project,
+                                               const char      *id);
+/* adds or replaces by id, and copies the new values into every shell
+ * that refers to it */
+void                 hl_project_put_material  (HlProject        *project,
+                                               const HlMaterial *material);
+
+void                 hl_project_add_revision  (HlProject  *project,
+                                               guint       number,
+                                               const char *date,
+                                               const char *author,
+                                               const char *text);
+/* highest-numbered revision, or NULL */
+const HlRevision    *hl_project_latest_revision (const HlProject *project);
+
+G_DEFINE_AUTOPTR_CLEANUP_FUNC (HlProject, hl_project_free)
+
+G_END_DECLS

@@ -1,0 +1,169 @@
+/* hl-result-rows.c — the scalar results of a solution as labelled rows
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-result-rows"
+
+#include "hl-result-rows.h"
+
+#include <math.h>
+
+static void
+row (GArray     *rows,
+     const char *key,
+     const char *label,
+     HlRowKind   kind,
+     HlResult    result,
+     const char *source)
+{
+  HlResultRow r = { key, label, kind, result, NULL, source };
+
+  g_array_append_val (rows, r);
+}
+
+static void
+word (GArray     *rows,
+      const char *key,
+      const char *label,
+      const char *value)
+{
+  HlResultRow r = { key, label, HL_ROW_WORD, { NAN, NULL }, value, NULL };
+
+  g_array_append_val (rows, r);
+}
+
+static HlResult
+value (double v)
+{
+  HlResult r = { v, NULL };
+
+  return r;
+}
+
+GArray *
+hl_result_rows (const HlSolution *s)
+{
+  GArray *rows = g_array_new (FALSE, TRUE, sizeof (HlResultRow));
+  const HlShellInputs *in = &s->inputs;
+  gboolean sphere = in->form == HL_FORM_SPHERE;
+
+  word (rows, "shell", "Shell", in->name);
+  word (rows, "id", "Id", in->id);
+  word (rows, "form", "Form", hl_form_to_string (in->form));
+  word (rows, "ends", "Ends", sphere ? "n/a (sphere)" : hl_ends_to_string (in->ends));
+  row (rows, "analysis_inner_radius", "Inner radius (analysis)", HL_ROW_LENGTH, value (s->a), NULL);
+  row (rows, "analysis_wall_thickness", "Wall thickness (analysis)", HL_ROW_LENGTH, value (s->t), NULL);
+  row (rows, "mean_radius_over_thickness", "Mean radius / thickness", HL_ROW_RATIO, value (s->mean_ratio), NULL);
+  row (rows, "thin_hoop_stress", sphere ? "Thin-wall membrane stress" : "Thin-wall hoop stress", HL_ROW_STRESS,
+       s->thin_hoop, sphere ? "p R / 2t" : "p R / t");
+  row (rows, "thin_axial_stress", "Thin-wall axial stress", HL_ROW_STRESS, s->thin_axial,
+       sphere ? "p R / 2t" : "p R / 2t (closed), 0 (open), nu hoop (plane strain)");
+  row (rows, "lame_hoop_stress_inner", "Lamé hoop stress, inner surface", HL_ROW_STRESS, s->lame_hoop_inner, "Lamé");
+  row (rows, "lame_hoop_stress_outer", "Lamé hoop stress, outer surface", HL_ROW_STRESS, s->lame_hoop_outer, "Lamé");
+  row (rows, "lame_radial_stress_inner", "Lamé radial stress, inner surface", HL_ROW_STRESS, s->lame_radial_inner, "Lamé");
+  row (rows, "lame_radial_stress_outer", "Lamé radial stress, outer surface", HL_ROW_STRESS, s->lame_radial_outer, "Lamé");
+  row (rows, "lame_axial_stress", "Lamé axial stress", HL_ROW_STRESS, s->lame_axial, "Lamé");
+  row (rows, "thin_wall_error", "Thin-wall error (hoop)", HL_ROW_PERCENT, s->thin_wall_error, NULL);
+  row (rows, "thin_wall_error_equivalent", "Thin-wall error (von Mises)", HL_ROW_PERCENT, s->thin_wall_error_equivalent, NULL);
+  word (rows, "thin_wall_verdict", "Thin-wall verdict", s->is_thin ? "thin" : "thick");
+  word (rows, "rule_of_thumb", "Rule of thumb (R/t >= 10)", s->rule_of_thumb ? "met" : "not met");
+  row (rows, "ratio_for_tolerance", "R/t where the error meets the tolerance", HL_ROW_RATIO, s->ratio_for_tolerance, NULL);
+  row (rows, "von_mises_max", "Peak von Mises stress", HL_ROW_STRESS, s->von_mises_max, "Lamé");
+  row (rows, "tresca_max", "Peak Tresca stress", HL_ROW_STRESS, s->tresca_max, "Lamé");
+  row (rows, "radial_displacement_inner", "Radial displacement, inner", HL_ROW_SMALL_LENGTH, s->displacement_inner, "Lamé");
+  row (rows, "radial_displacement_outer", "Radial displacement, outer", HL_ROW_SMALL_LENGTH, s->displacement_outer, "Lamé");
+  row (rows, "first_yield_pressure_von_mises", "First-yield pressure (von Mises)", HL_ROW_STRESS, s->first_yield_von_mises, NULL);
+  row (rows, "first_yield_pressure_tresca", "First-yield pressure (Tresca)", HL_ROW_STRESS, s->first_yield_tresca, NULL);
+  row (rows, "plastic_collapse_pressure", "Plastic collapse pressure (von Mises)", HL_ROW_STRESS, s->plastic_collapse,
+       "Hill 1950");
+  row (rows, "max_allowable_pressure_thin", "Max. allowable pressure, thin-wall", HL_ROW_STRESS, s->mawp_thin, NULL);
+  row (rows, "max_allowable_pressure_lame", "Max. allowable pressure, Lamé", HL_ROW_STRESS, s->mawp_lame,
+       in->sizing_criterion == HL_CRITERION_TRESCA ? "Lamé, Tresca" : "Lamé, von Mises");
+  row (rows, "required_thickness_thin", "Required thickness, thin-wall", HL_ROW_LENGTH, s->treq_thin, NULL);
+  row (rows, "required_thickness_lame", "Required thickness, Lamé", HL_ROW_LENGTH, s->treq_lame,
+       in->sizing_criterion == HL_CRITERION_TRESCA ? "Lamé, Tresca" : "Lamé, von Mises");
+  row (rows, "required_thickness_ug27", "Required thickness, ASME VIII-1", HL_ROW_LENGTH, s->treq_ug27, s->ug27_clause);
+  row (rows, "max_allowable_pressure_ug27", "Max. allowable pressure, ASME VIII-1", HL_ROW_STRESS, s->mawp_ug27, s->ug27_clause);
+  row (rows, "required_thickness_en13445", "Required thickness, EN 13445-3", HL_ROW_LENGTH, s->treq_en13445, s->en13445_clause);
+  row (rows, "max_allowable_pressure_en13445", "Max. allowable pressure, EN 13445-3", HL_ROW_STRESS, s->mawp_en13445,
+       s->en13445_clause);
+  row (rows, "max_allowable_pressure_barlow", "Barlow pressure (pipe)", HL_ROW_STRESS, s->barlow_pressure, "P = 2 S t / D");
+  row (rows, "thin_radial_growth_mean", "Thin-wall radial growth (mean radius)", HL_ROW_SMALL_LENGTH, s->thin_growth_mean,
+       "Roark");
+  row (rows, "bore_volume_strain", "Bore volume strain dV/V", HL_ROW_RATIO, s->volume_strain, "Lamé");
+  return rows;
+}
+
+const HlResultRow *
+hl_result_rows_find (GArray     *rows,
+                     const char *key)
+{
+  for (guint i = 0; i < rows->len; i++)
+    if (g_strcmp0 (g_array_index (rows, HlResultRow, i).key, key) == 0)
+      return &g_array_index (rows, HlResultRow, i);
+  return NULL;
+}
+
+const char *
+hl_row_unit (HlRowKind    kind,
+             HlUnitSystem system)
+{
+  gboolean us = system == HL_UNIT_SYSTEM_US;
+
+  switch (kind)
+    {
+    case HL_ROW_LENGTH:
+    case HL_ROW_SMALL_LENGTH:
+      return us ? "in" : "mm";
+    case HL_ROW_STRESS:
+      return us ? "psi" : "MPa";
+    case HL_ROW_PERCENT:
+      return "%";
+    case HL_ROW_RATIO:
+    case HL_ROW_WORD:
+    default:
+      return "";
+    }
+}
+
+double
+hl_row_convert (HlRowKind    kind,
+                HlUnitSystem system,
+                double       si)
+{
+  switch (kind)
+    {
+    case HL_ROW_LENGTH:
+    case HL_ROW_SMALL_LENGTH:
+      return si / hl_unit_factor (HL_KIND_LENGTH, hl_row_unit (kind, system));
+    case HL_ROW_STRESS:
+      return si / hl_unit_factor (HL_KIND_STRESS, hl_row_unit (kind, system));
+    case HL_ROW_PERCENT:
+    case HL_ROW_RATIO:
+    case HL_ROW_WORD:
+    default:
+      return si;
+    }
+}
+
+char *
+hl_row_format (const HlResultRow *r,
+               HlUnitSystem       system,
+               int                digits,
+               gboolean           c_locale)
+{
+  g_autofree char *num = NULL;
+  const char *unit;
+
+  if (r->kind == HL_ROW_WORD)
+    return g_strdup (r->word != NULL ? r->word : "");
+  if (r->result.reason != NULL || !isfinite (r->result.value))
+    return g_strdup_printf ("n/a (%s)", r->result.reason != NULL ? r->result.reason : "not computable");
+  {
+    double v = hl_row_convert (r->kind, system, r->result.value);
+
+    num = c_locale ? hl_format_significant (v, digits) : hl_format_display (v, digits);
+  }
+  unit = hl_row_unit (r->kind, system);
+  return unit[0] != '\0' ? g_strdup_printf ("%s %s", num, unit) : g_strdup (num);
+}

@@ -1,0 +1,36 @@
+/* hl-shell-check.h — validation of shell inputs, every problem with its field
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-shell.h"
+
+G_BEGIN_DECLS
+
+/* One problem: the field is the project-file element name of the value
+ * ("wall-thickness", "poisson-ratio", ...), so the window, the loader and
+ * the command line all point at the same thing. */
+typedef struct
+{
+  const char *field;
+  char       *message;
+} HlProblem;
+
+void       hl_problem_free        (HlProblem *problem);
+
+/* All problems of @in, in field order; an empty array when it is valid. */
+GPtrArray *hl_shell_inputs_check  (const HlShellInputs *in);
+
+/* Checks @q alone as the value of @field (used by the window per field). */
+char      *hl_check_quantity      (const char     *field,
+                                   HlQuantity      q,
+                                   HlQuantityKind  kind,
+                                   gboolean        zero_allowed);
+
+/* "field: message; field: message" — for GError texts */
+char      *hl_problems_join       (GPtrArray *problems);
+
+G_DEFINE_AUTOPTR_CLEANUP_FUNC (HlProblem, hl_problem_free)
+
+G_END_DECLS

@@ -1,0 +1,197 @@
+/* hl-sizing.c — limits found by root finding on the Lamé solution
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-sizing"
+
+#include "hl-sizing.h"
+#include "hl-roots.h"
+
+#include <math.h>
+
+#define RATIO_MIN 0.5000005   /* b/a about 1e6 */
+#define RATIO_MAX 1e8
+#define RATIO_GRID 96
+
+typedef struct
+{
+  const HlLame    *base;
+  HlRadiusBasis    basis;
+  HlVerdictMeasure measure;
+  double           tolerance;
+  HlCriterion      criterion;
+  double           limit;
+  gboolean         outer_fixed;
+} SizingProblem;
+
+static HlLame
+with_wall (const HlLame *base,
+           double        a,
+           double        b,
+           double        pi)
+{
+  HlLame l;
+
+  hl_lame_init (&l, base->form, base->ends, a, b, pi, base->po, base->E, base->nu);
+  return l;
+}
+
+static double
+error_excess (double   m,
+              gpointer data)
+{
+  const SizingProblem *sp = data;
+  /* m = (a+b)/2 / (b-a) with a = 1 gives b = (2m+1)/(2m-1) */
+  double b = (2 * m + 1) / (2 * m - 1);
+  HlLame l;
+
+  l = *sp->base;
+  hl_lame_init (&l, l.form, l.ends, 1.0, b, l.pi, l.po, l.E, l.nu);
+  return fabs (hl_thin_wall_error (&l, sp->basis, sp->measure)) - sp->tolerance;
+}
+
+gboolean
+hl_ratio_for_tolerance (const HlLame     *lame,
+                        HlRadiusBasis     basis,
+                        HlVerdictMeasure  measure,
+                        double            tolerance_percent,
+                        double           *ratio,
+                        const char      **reason)
+{
+  HlLame base = *lame;
+  SizingProblem sp = { &base, basis, measure, tolerance_percent, 0, 0, FALSE };
+  double step = log (RATIO_MAX / RATIO_MIN) / (RATIO_GRID - 1);
+  int last_bad = -1;
+
+  /* the error depends on the pressure ratio, not the level; with no load
+   * at all take internal pressure alone */
+  if (base.pi == 0.0 && base.po == 0.0)
+    base.pi = 1.0;
+  for (int i = 0; i < RATIO_GRID; i++)
+    {
+      double e = error_excess (RATIO_MIN * exp (step * i), &sp);
+
+      if (!(e <= 0.0))   /* NaN counts as outside the tolerance */
+        last_bad = i;
+    }
+  if (last_bad == RATIO_GRID - 1)
+    {
+      *reason = "no wall ratio brings the error within the tolerance";
+      return FALSE;
+    }
+  if (last_bad < 0)
+    {
+      *reason = "every wall ratio is within the tolerance";
+      return FALSE;
+    }
+  if (!hl_root_bracketed (error_excess, &sp, RATIO_MIN * exp (step * last_bad),
+                          RATIO_MIN * exp (step * (last_bad + 1)),
+                          HL_SIZING_REL_TOL, TRUE, ratio))
+    {
+      *reason = "the error could not be evaluated";
+      return FALSE;
+    }
+  return TRUE;
+}
+
+static double
+peak_excess_pressure (double   pi,
+                      gpointer data)
+{
+  const SizingProblem *sp = data;
+  HlLame l = with_wall (sp->base, sp->base->a, sp->base->b, pi);
+
+  return hl_lame_peak_equivalent (&l, sp->criterion) - sp->limit;
+}
+
+gboolean
+hl_lame_max_pressure (const HlLame *lame,
+                      HlCriterion   criterion,
+                      double        limit,
+                      double       *pressure,
+                      const char  **reason)
+{
+  SizingProblem sp = { lame, 0, 0, 0, criterion, limit, FALSE };
+  double lo, hi, scale;
+
+  /* the peak equivalent stress is convex in pi (a norm of an affine map),
+   * so the admissible pressures form one interval; its top end is the
+   * answer.  Find a point inside it, then bracket upwards. */
+  scale = MAX (MAX (lame->po, limit * 1e-6), 1.0);
+  lo = lame->po;
+  if (peak_excess_pressure (lo, &sp) > 0.0)
+    {
+      lo = 0.0;
+      if (peak_excess_pressure (lo, &sp) > 0.0)
+        {
+          *reason = "the external pressure alone exceeds the allowable";
+          return FALSE;
+        }
+    }
+  hi = MAX (lo, scale);
+  for (int i = 0; peak_excess_pressure (hi, &sp) <= 0.0; i++)
+    {
+      if (i > 200)
+        {
+          *reason = "no finite pressure reaches the allowable";
+          return FALSE;
+        }
+      hi *= 2.0;
+    }
+  if (!hl_root_bracketed (peak_excess_pressure, &sp, lo, hi, HL_SIZING_REL_TOL, FALSE, pressure))
+    {
+      *reason = "the pressure could not be bracketed";
+      return FALSE;
+    }
+  return TRUE;
+}
+
+static double
+peak_excess_wall (double   t,
+                  gpointer data)
+{
+  const SizingProblem *sp = data;
+  HlLame l = sp->outer_fixed
+               ? with_wall (sp->base, sp->base->b - t, sp->base->b, sp->base->pi)
+               : with_wall (sp->base, sp->base->a, sp->base->a + t, sp->base->pi);
+
+  return hl_lame_peak_equivalent (&l, sp->criterion) - sp->limit;
+}
+
+gboolean
+hl_lame_required_wall (const HlLame *lame,
+                       gboolean      outer_fixed,
+                       HlCriterion   criterion,
+                       double        limit,
+                       double       *thickness,
+                       const char  **reason)
+{
+  SizingProblem sp = { lame, 0, 0, 0, criterion, limit, outer_fixed };
+  double fixed = outer_fixed ? lame->b : lame->a;
+  /* from a film to a wall a million times the bore (or all of the
+   * outer radius but a millionth) */
+  double lo = fixed * 1e-9;
+  double hi = outer_fixed ? fixed * (1 - 1e-6) : fixed * 1e6;
+
+  if (lame->pi == lame->po)
+    {
+      *reason = "no pressure difference across the wall";
+      return FALSE;
+    }
+  if (peak_excess_wall (hi, &sp) > 0.0)
+    {
+      *reason = "the allowable is below what any thickness can carry";
+      return FALSE;
+    }
+  if (peak_excess_wall (lo, &sp) <= 0.0)
+    {
+      *thickness = lo;
+      return TRUE;
+    }
+  if (!hl_root_bracketed (peak_excess_wall, &sp, lo, hi, HL_SIZING_REL_TOL, TRUE, thickness))
+    {
+      *reason = "the thickness could not be bracketed";
+      return FALSE;
+    }
+  return TRUE;
+}

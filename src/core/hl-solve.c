@@ -1,0 +1,315 @@
+/* hl-solve.c — inputs in, complete solution out
+ *
+ * The only place formulas are combined into results; the window, the
+ * figure and the command line read the solution and never recompute.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-solve"
+
+#include "hl-solution.h"
+#include "hl-shell-check.h"
+#include "hl-sizing.h"
+#include "hl-design-codes.h"
+
+#include <math.h>
+
+#define RULE_OF_THUMB_RATIO 10.0   /* common practice: R/t >= 10 is thin */
+
+G_DEFINE_QUARK (hl-solve-error-quark, hl_solve_error)
+
+static HlResult
+ok (double value)
+{
+  HlResult r = { value, NULL };
+
+  if (!isfinite (value))
+    {
+      r.value = NAN;
+      r.reason = "not computable for this shell";
+    }
+  return r;
+}
+
+static HlResult
+na (const char *reason)
+{
+  HlResult r = { NAN, reason };
+
+  return r;
+}
+
+gboolean
+hl_result_ok (HlResult r)
+{
+  return r.reason == NULL && isfinite (r.value);
+}
+
+static void
+warn (HlSolution *s,
+      const char *format,
+      ...) G_GNUC_PRINTF (2, 3);
+
+static void
+warn (HlSolution *s,
+      const char *format,
+      ...)
+{
+  va_list args;
+
+  va_start (args, format);
+  g_ptr_array_add (s->warnings, g_strdup_vprintf (format, args));
+  va_end (args);
+}
+
+static void
+fill_points (HlSolution *s)
+{
+  double R = hl_thin_radius (s->inputs.thin_basis, s->a, s->b);
+  double thin_hoop = hl_thin_hoop (s->inputs.form, s->pi - s->po, R, s->t);
+  double thin_axial = hl_thin_axial (s->inputs.form, s->inputs.ends, s->lame.nu, thin_hoop);
+
+  for (guint i = 0; i < s->n_points; i++)
+    {
+      HlWallPoint *p = &s->points[i];
+      HlStress st;
+
+      /* last point exactly on b, not a + t*(n-1)/(n-1) rounded */
+      p->r = i + 1 == s->n_points ? s->b : s->a + s->t * i / (s->n_points - 1);
+      st = hl_lame_stress (&s->lame, p->r);
+      p->hoop = st.hoop;
+      p->radial = st.radial;
+      p->axial = st.axial;
+      p->von_mises = hl_von_mises (st);
+      p->tresca = hl_tresca (st);
+      p->thin_hoop = thin_hoop;
+      p->thin_axial = thin_axial;
+    }
+}
+
+static void
+solve_membrane_and_lame (HlSolution *s)
+{
+  const HlShellInputs *in = &s->inputs;
+  double R = hl_thin_radius (in->thin_basis, s->a, s->b);
+  double hoop = hl_thin_hoop (in->form, s->pi - s->po, R, s->t);
+  HlStress inner = hl_lame_stress (&s->lame, s->a);
+  HlStress outer = hl_lame_stress (&s->lame, s->b);
+  double err_hoop, err_eq, chosen;
+
+  s->thin_hoop = ok (hoop);
+  s->thin_axial = ok (hl_thin_axial (in->form, in->ends, s->lame.nu, hoop));
+  s->lame_hoop_inner = ok (inner.hoop);
+  s->lame_hoop_outer = ok (outer.hoop);
+  s->lame_radial_inner = ok (inner.radial);
+  s->lame_radial_outer = ok (outer.radial);
+  if (in->form == HL_FORM_SPHERE)
+    s->lame_axial = na ("a sphere has two equal tangential stresses: see the hoop stress");
+  else
+    s->lame_axial = ok (inner.axial);
+
+  err_hoop = hl_thin_wall_error (&s->lame, in->thin_basis, HL_MEASURE_HOOP);
+  err_eq = hl_thin_wall_error (&s->lame, in->thin_basis, HL_MEASURE_EQUIVALENT);
+  s->thin_wall_error = isfinite (err_hoop) ? ok (err_hoop) : na ("no hoop stress under this load");
+  s->thin_wall_error_equivalent = isfinite (err_eq) ? ok (err_eq) : na ("no equivalent stress under this load");
+  chosen = in->verdict_measure == HL_MEASURE_EQUIVALENT ? err_eq : err_hoop;
+  s->is_thin = isfinite (chosen) && fabs (chosen) <= s->tolerance;
+  s->rule_of_thumb = s->mean_ratio >= RULE_OF_THUMB_RATIO;
+
+  {
+    double ratio;
+    const char *reason = NULL;
+
+    if (hl_ratio_for_tolerance (&s->lame, in->thin_basis, in->verdict_measure, s->tolerance, &ratio, &reason))
+      s->ratio_for_tolerance = ok (ratio);
+    else
+      s->ratio_for_tolerance = na (reason);
+  }
+
+  s->von_mises_max = ok (hl_lame_peak_equivalent (&s->lame, HL_CRITERION_VON_MISES));
+  s->tresca_max = ok (hl_lame_peak_equivalent (&s->lame, HL_CRITERION_TRESCA));
+  {
+    double ua = hl_lame_displacement (&s->lame, s->a);
+
+    s->displacement_inner = ok (ua);
+    s->displacement_outer = ok (hl_lame_displacement (&s->lame, s->b));
+    s->thin_growth_mean = ok (hl_thin_growth (in->form, in->ends, s->pi - s->po, (s->a + s->b) / 2,
+                                              s->t, s->lame.E, s->lame.nu));
+    /* bore volume strain, small strains: 2 u/a + axial strain (cylinder),
+     * 3 u/a (sphere) */
+    if (in->form == HL_FORM_SPHERE)
+      s->volume_strain = ok (3 * ua / s->a);
+    else
+      s->volume_strain = ok (2 * ua / s->a + hl_lame_axial_strain (&s->lame));
+  }
+}
+
+static void
+solve_yield_and_collapse (HlSolution *s)
+{
+  const HlShellInputs *in = &s->inputs;
+  HlLame unit = s->lame;
+  gboolean internal = s->pi > 0.0 || s->po == 0.0;
+  double load, vm, tr;
+
+  /* proportional loading: stresses scale with the load factor, so the
+   * first-yield factor is yield / peak.  With no load, internal alone. */
+  if (s->pi == 0.0 && s->po == 0.0)
+    hl_lame_init (&unit, in->form, in->ends, s->a, s->b, 1.0, 0.0, unit.E, unit.nu);
+  load = internal ? unit.pi : unit.po;
+  vm = hl_lame_peak_equivalent (&unit, HL_CRITERION_VON_MISES);
+  tr = hl_lame_peak_equivalent (&unit, HL_CRITERION_TRESCA);
+  s->first_yield_von_mises = vm > 0 ? ok (load * s->yield / vm) : na ("no stress under this load");
+  s->first_yield_tresca = tr > 0 ? ok (load * s->yield / tr) : na ("no stress under this load");
+
+  /* Hill (1950): perfectly plastic wall, internal pressure over the
+   * external one */
+  if (in->form == HL_FORM_SPHERE)
+    s->plastic_collapse = ok (s->po + 2 * s->yield * log (s->k));
+  else if (in->ends == HL_ENDS_CLOSED)
+    s->plastic_collapse = ok (s->po + 2 / sqrt (3) * s->yield * log (s->k));
+  else
+    s->plastic_collapse = na ("closed form given for closed ends only");
+}
+
+static void
+solve_allowables (HlSolution *s)
+{
+  const HlShellInputs *in = &s->inputs;
+  gboolean outer_fixed = in->size_kind == HL_SIZE_OUTER_DIAMETER || in->size_kind == HL_SIZE_OUTER_RADIUS;
+  double c = hl_quantity_si (in->corrosion_allowance, HL_KIND_LENGTH);
+  double allow = s->allowable, net = s->pi - s->po;
+  /* membrane capacity per unit radius-over-thickness: sigma = p R / (f t) */
+  double f = in->form == HL_FORM_SPHERE ? 2.0 : 1.0;
+  double alpha = in->thin_basis == HL_BASIS_INNER ? 0.0 : in->thin_basis == HL_BASIS_MEAN ? 0.5 : 1.0;
+  double value;
+  const char *reason = NULL;
+
+  if (!s->corroded)
+    c = 0.0;
+  s->mawp_thin = ok (s->po + f * allow * s->t / hl_thin_radius (in->thin_basis, s->a, s->b));
+
+  /* thin required thickness with the entered radius fixed and the basis
+   * radius moving with t: inner fixed Rb = a + alpha t, outer fixed
+   * Rb = b - (1 - alpha) t */
+  if (!(net > 0))
+    s->treq_thin = na ("no net internal pressure (external-pressure rules apply, not checked)");
+  else if (outer_fixed)
+    s->treq_thin = ok (net * s->b / (f * allow + (1 - alpha) * net) + c);
+  else if (f * allow - alpha * net <= 0)
+    s->treq_thin = na ("the allowable is below what any thickness can carry");
+  else
+    s->treq_thin = ok (net * s->a / (f * allow - alpha * net) + c);
+
+  if (hl_lame_max_pressure (&s->lame, in->sizing_criterion, allow, &value, &reason))
+    s->mawp_lame = ok (value);
+  else
+    s->mawp_lame = na (reason);
+  if (hl_lame_required_wall (&s->lame, outer_fixed, in->sizing_criterion, allow, &value, &reason))
+    s->treq_lame = ok (value + c);
+  else
+    s->treq_lame = na (reason);
+
+  {
+    HlCodeWall wall = { in->form, in->ends, outer_fixed, s->a, s->b, c, net, allow };
+    HlCodeResult ug = hl_code_ug27 (&wall);
+    HlCodeResult en = hl_code_en13445 (&wall);
+
+    s->treq_ug27 = ug.treq_reason ? na (ug.treq_reason) : ok (ug.treq);
+    s->mawp_ug27 = ug.mawp_reason ? na (ug.mawp_reason) : ok (ug.mawp + s->po);
+    s->ug27_clause = ug.clause;
+    s->treq_en13445 = en.treq_reason ? na (en.treq_reason) : ok (en.treq);
+    s->mawp_en13445 = en.mawp_reason ? na (en.mawp_reason) : ok (en.mawp + s->po);
+    s->en13445_clause = en.clause;
+    if (ug.out_of_range)
+      warn (s, "this wall is outside the range of the %s formulas: use the code's thick-shell rules", ug.clause);
+    if (en.out_of_range)
+      warn (s, "this wall is outside the range of %s (e/De <= 0.16): use the code's thick-shell rules", en.clause);
+  }
+  if (in->form == HL_FORM_CYLINDER)
+    s->barlow_pressure = ok (s->po + 2 * allow * s->t / (2 * s->b));
+  else
+    s->barlow_pressure = na ("Barlow's formula is for pipe (cylinders)");
+}
+
+static void
+collect_warnings (HlSolution *s)
+{
+  const HlShellInputs *in = &s->inputs;
+  double peak = hl_lame_peak_equivalent (&s->lame, in->sizing_criterion);
+
+  if (s->pi == 0.0 && s->po == 0.0)
+    warn (s, "no pressure is applied: every stress is zero");
+  if (s->po > 0.0)
+    warn (s, "external pressure acts: buckling may govern and is not checked here");
+  if (s->po > s->pi)
+    warn (s, "the net pressure is external: the wall is in compression");
+  if (peak > s->yield)
+    warn (s, "the wall yields: the peak %s stress exceeds the yield strength",
+          in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises");
+  else if (peak > s->allowable)
+    warn (s, "the peak %s stress exceeds the allowable stress times the joint efficiency",
+          in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises");
+  if (s->allowable / in->joint_efficiency > s->yield)
+    warn (s, "the allowable stress is above the yield strength: check the material data");
+  if (!s->is_thin && (s->pi != 0.0 || s->po != 0.0))
+    warn (s, "the thin-wall formulas are outside the tolerance here: use the Lamé (thick-wall) results");
+}
+
+HlSolution *
+hl_solve (const HlShellInputs *in,
+          guint                n_points,
+          gboolean             corroded,
+          GError             **error)
+{
+  g_autoptr(GPtrArray) problems = NULL;
+  HlSolution *s;
+
+  g_return_val_if_fail (in != NULL, NULL);
+  g_return_val_if_fail (error == NULL || *error == NULL, NULL);
+
+  problems = hl_shell_inputs_check (in);
+  if (problems->len > 0)
+    {
+      g_autofree char *text = hl_problems_join (problems);
+
+      g_set_error (error, HL_SOLVE_ERROR, HL_SOLVE_ERROR_INVALID, "%s", text);
+      return NULL;
+    }
+
+  s = g_new0 (HlSolution, 1);
+  s->inputs = *in;
+  s->corroded = corroded;
+  hl_shell_inputs_radii (in, corroded, &s->a, &s->b);
+  s->t = s->b - s->a;
+  s->k = s->b / s->a;
+  s->mean_ratio = (s->a + s->b) / 2 / s->t;
+  s->pi = hl_quantity_si (in->internal_pressure, HL_KIND_STRESS);
+  s->po = hl_quantity_si (in->external_pressure, HL_KIND_STRESS);
+  s->yield = hl_quantity_si (in->material.yield_strength, HL_KIND_STRESS);
+  s->allowable = hl_quantity_si (in->material.allowable_stress, HL_KIND_STRESS) * in->joint_efficiency;
+  s->tolerance = hl_quantity_si (in->thin_tolerance, HL_KIND_PERCENT) * 100.0;
+  hl_lame_init (&s->lame, in->form, in->ends, s->a, s->b, s->pi, s->po,
+                hl_quantity_si (in->material.elastic_modulus, HL_KIND_MODULUS),
+                in->material.poisson_ratio);
+  s->warnings = g_ptr_array_new_with_free_func (g_free);
+
+  s->n_points = CLAMP (n_points, 2, HL_MAX_POINTS);
+  s->points = g_new (HlWallPoint, s->n_points);
+  fill_points (s);
+  solve_membrane_and_lame (s);
+  solve_yield_and_collapse (s);
+  solve_allowables (s);
+  collect_warnings (s);
+  return s;
+}
+
+void
+hl_solution_free (HlSolution *solution)
+{
+  if (solution == NULL)
+    return;
+  g_free (solution->points);
+  g_clear_pointer (&solution->warnings, g_ptr_array_unref);
+  g_free (solution);
+}

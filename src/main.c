@@ -1,0 +1,36 @@
+/* main.c — decides: headless command (no display needed) or the window
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hoopline"
+
+#include "hl-config.h"
+#include "hl-command-line.h"
+
+#include <locale.h>
+#include <glib/gi18n.h>
+
+int
+main (int    argc,
+      char **argv)
+{
+  setlocale (LC_ALL, "");
+  bindtextdomain (GETTEXT_PACKAGE, HL_LOCALEDIR);
+  bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
+  textdomain (GETTEXT_PACKAGE);
+
+  if (hl_command_line_is_headless (argc, argv))
+    return hl_command_line_run (argc, argv);
+
+  /* The window is not built yet: show what the file holds instead. */
+  {
+    g_autofree char **args = g_new0 (char *, argc + 2);
+    int n = 0;
+
+    args[n++] = argv[0];
+    args[n++] = (char *) "--summary";
+    for (int i = 1; i < argc; i++)
+      args[n++] = argv[i];
+    return hl_command_line_run (n, args);
+  }
+}

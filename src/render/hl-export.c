@@ -1,0 +1,118 @@
+/* hl-export.c — writing any output file: figures, CSV table, text report
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-export"
+
+#include "hl-export.h"
+#include "hl-atomic-file.h"
+#include "hl-report.h"
+#include "hl-solution.h"
+
+#include <gio/gio.h>
+#include <string.h>
+
+HlExportFormat
+hl_export_format_for_path (const char *path)
+{
+  static const struct { const char *ext; HlExportFormat format; } table[] = {
+    { ".csv", HL_EXPORT_CSV }, { ".txt", HL_EXPORT_TXT }, { ".svg", HL_EXPORT_SVG },
+    { ".pdf", HL_EXPORT_PDF }, { ".png", HL_EXPORT_PNG },
+  };
+  g_autofree char *lower = g_ascii_strdown (path != NULL ? path : "", -1);
+
+  for (guint i = 0; i < G_N_ELEMENTS (table); i++)
+    if (g_str_has_suffix (lower, table[i].ext))
+      return table[i].format;
+  return HL_EXPORT_UNKNOWN;
+}
+
+static gboolean
+append_report (GString             *out,
+               HlProject           *project,
+               const HlShellInputs *shell,
+               HlUnitSystem         units,
+               GError             **error)
+{
+  g_autoptr(HlSolution) fresh = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, error);
+  g_autoptr(HlSolution) corroded = NULL;
+  g_autofree char *text = NULL;
+
+  if (fresh == NULL)
+    return FALSE;
+  corroded = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, error);
+  if (corroded == NULL)
+    return FALSE;
+  text = hl_report_text (project, fresh, corroded, units);
+  if (out->len > 0)
+    g_string_append (out, "\n\f\n");
+  g_string_append (out, text);
+  return TRUE;
+}
+
+static int
+export_text (const HlExportRequest *req,
+             HlExportFormat         format,
+             GError               **error)
+{
+  g_autoptr(GString) out = g_string_new (NULL);
+  g_autoptr(GError) local = NULL;
+
+  if (format == HL_EXPORT_CSV)
+    {
+      g_autoptr(HlSolution) sol = hl_solve (req->shells->data, req->points, TRUE, &local);
+      g_autofree char *csv = NULL;
+
+      if (sol == NULL)
+        {
+          g_set_error (error, local->domain, local->code, "shell %s: %s",
+                       ((HlShellInputs *) req->shells->data)->id, local->message);
+          return 1;
+        }
+      csv = hl_report_csv (sol, req->units);
+      g_string_append (out, csv);
+    }
+  else
+    {
+      /* without --shell the report covers every shell, one after another */
+      for (GList *l = req->shells; l != NULL; l = l->next)
+        if (!append_report (out, req->project, l->data, req->units, &local))
+          {
+            g_set_error (error, local->domain, local->code, "shell %s: %s",
+                         ((HlShellInputs *) l->data)->id, local->message);
+            return 1;
+          }
+    }
+  if (!hl_atomic_write (req->path, out->str, out->len, error))
+    return 1;
+  return 0;
+}
+
+int
+hl_export_run (const HlExportRequest *req,
+               GError               **error)
+{
+  HlExportFormat format = hl_export_format_for_path (req->path);
+
+  g_return_val_if_fail (req != NULL && req->shells != NULL, 2);
+
+  switch (format)
+    {
+    case HL_EXPORT_CSV:
+    case HL_EXPORT_TXT:
+      if (!hl_atomic_check_target (req->path, error))
+        return 1;
+      return export_text (req, format, error);
+    case HL_EXPORT_SVG:
+    case HL_EXPORT_PDF:
+    case HL_EXPORT_PNG:
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_NOT_SUPPORTED,
+                   "figure export (%s) is not available in this build", req->path);
+      return 2;
+    case HL_EXPORT_UNKNOWN:
+    default:
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT,
+                   "“%s”: the output name must end in .svg, .pdf, .png, .csv or .txt", req->path);
+      return 2;
+    }
+}

@@ -1,0 +1,41 @@
+/* hl-figure.h — the figure of one shell, drawn into any cairo context
+ *
+ * The same code draws the window's canvas, the PNG/SVG/PDF exports and
+ * the printout.  It reads one HlSolution and never recomputes formulas.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <cairo.h>
+
+#include "hl-project.h"
+#include "hl-solution.h"
+
+G_BEGIN_DECLS
+
+typedef enum
+{
+  HL_FIGURE_STYLE_LIGHT,
+  HL_FIGURE_STYLE_DARK,
+} HlFigureStyle;
+
+typedef struct
+{
+  const HlProject  *project;      /* title block; may be NULL */
+  const HlSolution *solution;     /* NULL when the inputs are invalid */
+  const char       *problem_text; /* with no solution: what to fix */
+  HlUnitSystem      units;
+  HlFigureStyle     style;
+  const char       *export_date;  /* "YYYY-MM-DD", or NULL for today */
+} HlFigureContext;
+
+/* Draws the whole figure (section, wall detail, through-thickness plot,
+ * thinness chart, verdict, title block, caution) to fill @width x @height
+ * user units of @cr. */
+void hl_figure_draw (cairo_t               *cr,
+                     double                 width,
+                     double                 height,
+                     const HlFigureContext *ctx);
+
+G_END_DECLS
