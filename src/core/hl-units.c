@@ -290,7 +290,12 @@ hl_units_parse (const char     *text,
   while (*unit_text == ' ' || *unit_text == '\t')
     unit_text++;
   if (*unit_text == '\0')
-    canonical = hl_unit_canonical (kind, fallback_unit != NULL ? fallback_unit : hl_unit_default (kind, HL_UNIT_SYSTEM_SI));
+    {
+      /* a bare number takes the field's unit, or the kind's own default */
+      canonical = hl_unit_canonical (kind, fallback_unit);
+      if (canonical == NULL)
+        canonical = hl_unit_canonical (kind, hl_unit_default (kind, HL_UNIT_SYSTEM_SI));
+    }
   else
     canonical = hl_unit_canonical (kind, unit_text);
   if (canonical == NULL)
