@@ -51,42 +51,6 @@ hl_lame_init (HlLame *lame,
     }
 }
 
-HlStress
-hl_lame_stress (const HlLame *lame,
-                double        r)
-{
-  HlStress s;
-
-  if (lame->form == HL_FORM_SPHERE)
-    {
-      double x = lame->B / (r * r * r);
-
-      s.radial = lame->A - x;
-      s.hoop = lame->A + x / 2.0;
-      s.axial = s.hoop; /* both tangential directions */
-      return s;
-    }
-  {
-    double x = lame->B / (r * r);
-
-    s.radial = lame->A - x;
-    s.hoop = lame->A + x;
-    switch (lame->ends)
-      {
-      case HL_ENDS_CLOSED:
-        s.axial = lame->A;
-        break;
-      case HL_ENDS_OPEN:
-        s.axial = 0.0;
-        break;
-      case HL_ENDS_PLANE_STRAIN:
-      default:
-        s.axial = 2.0 * lame->nu * lame->A;
-        break;
-      }
-  }
-  return s;
-}
 
 double
 hl_lame_displacement (const HlLame *lame,
@@ -135,22 +99,7 @@ hl_lame_peak_hoop (const HlLame *lame)
   return fabs (inner) >= fabs (outer) ? inner : outer;
 }
 
-double
-hl_von_mises (HlStress s)
-{
-  double d1 = s.hoop - s.radial, d2 = s.radial - s.axial, d3 = s.axial - s.hoop;
 
-  return sqrt ((d1 * d1 + d2 * d2 + d3 * d3) / 2.0);
-}
-
-double
-hl_tresca (HlStress s)
-{
-  double hi = MAX (s.hoop, MAX (s.radial, s.axial));
-  double lo = MIN (s.hoop, MIN (s.radial, s.axial));
-
-  return hi - lo;
-}
 
 double
 hl_equivalent (HlStress    s,

@@ -36,24 +36,57 @@ hl_root_bracketed (HlRootFunc f,
   if (geometric && !(lo > 0.0 && hi > 0.0))
     geometric = FALSE;
 
-  for (int i = 0; i < 400; i++)
-    {
-      double mid = geometric ? sqrt (lo * hi) : lo + (hi - lo) / 2.0;
-      double fmid = f (mid, data);
+  /* Illinois variant of regula falsi: keeps the bracket like bisection
+   * but converges superlinearly; a bisection step every few iterations
+   * guards against slow one-sided progress.  In log space when geometric. */
+  {
+    double x0 = geometric ? log (lo) : lo, x1 = geometric ? log (hi) : hi;
+    double f0 = flo, f1 = fhi;
+    int side = 0;
 
-      if (fabs (hi - lo) <= rel_tol * fabs (mid) * 0.5 || fmid == 0.0)
+    for (int i = 0; i < 300; i++)
+      {
+        double x = (i % 4 == 3) ? 0.5 * (x0 + x1) : (x0 * f1 - x1 * f0) / (f1 - f0);
+        double xr = geometric ? exp (x) : x;
+        double fx;
+
+        if (!(x > MIN (x0, x1) && x < MAX (x0, x1)))
+          x = 0.5 * (x0 + x1), xr = geometric ? exp (x) : x;
+        fx = f (xr, data);
+        if (fx == 0.0 || !isfinite (fx))
+          {
+            *root = xr;
+            return isfinite (fx);
+          }
+        if ((fx < 0) == (f1 < 0))
+          {
+            x1 = x;
+            f1 = fx;
+            if (side == -1)
+              f0 /= 2;
+            side = -1;
+          }
+        else
+          {
+            x0 = x;
+            f0 = fx;
+            if (side == 1)
+              f1 /= 2;
+            side = 1;
+          }
         {
-          *root = mid;
-          return TRUE;
+          double a0 = geometric ? exp (x0) : x0, a1 = geometric ? exp (x1) : x1;
+
+          if (fabs (a1 - a0) <= rel_tol * fabs (xr) * 0.5)
+            {
+              *root = 0.5 * (a0 + a1);
+              return TRUE;
+            }
         }
-      if ((fmid < 0) == (flo < 0))
-        {
-          lo = mid;
-          flo = fmid;
-        }
-      else
-        hi = mid;
-    }
+      }
+    lo = geometric ? exp (x0) : x0;
+    hi = geometric ? exp (x1) : x1;
+  }
   *root = geometric ? sqrt (lo * hi) : lo + (hi - lo) / 2.0;
   return TRUE;
 }
