@@ -73,6 +73,83 @@ line_of_offset (const char *data,
   return line;
 }
 
+/* The format is UTF-8, the only thing the writer writes.  Checking the
+ * bytes before libxml2 sees them also closes a side door: a file that
+ * declares another encoding (UTF-7, EBCDIC) can spell "<!DOCTYPE" in
+ * bytes that the plain search in refuse_declarations() does not see. */
+static gboolean
+check_encoding (Reader     *rd,
+                const char *data,
+                gsize       length)
+{
+  const guchar *u = (const guchar *) data;
+  const char *nul = memchr (data, '\0', length);
+  const char *bad = NULL;
+
+  if (length >= 2 && ((u[0] == 0xFE && u[1] == 0xFF) || (u[0] == 0xFF && u[1] == 0xFE)))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL,
+            "the file is UTF-16 text (it starts with a UTF-16 byte-order mark): project files are UTF-8");
+      return FALSE;
+    }
+  if (length >= 2 && ((u[0] == '<' && u[1] == 0) || (u[0] == 0 && u[1] == '<')))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is UTF-16 text: project files are UTF-8");
+      return FALSE;
+    }
+  if (nul != NULL)
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, nul - data), NULL,
+            "the file contains a NUL byte: not a text project file");
+      return FALSE;
+    }
+  if (!g_utf8_validate_len (data, length, &bad))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, bad - data), NULL,
+            "the file is not valid UTF-8 (byte 0x%02X): project files are UTF-8", *(const guchar *) bad);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+/* The declaration may name only an encoding that reads the same as UTF-8. */
+static gboolean
+check_declared_encoding (Reader     *rd,
+                         const char *data,
+                         gsize       length)
+{
+  gsize skip = length >= 3 && memcmp (data, "\xEF\xBB\xBF", 3) == 0 ? 3 : 0;
+  const char *decl = data + skip;
+  gsize span = MIN (length - skip, 256);
+  const char *close, *enc;
+  g_autofree char *name = NULL;
+  char quote;
+
+  if (span < 5 || memcmp (decl, "<?xml", 5) != 0
+      || (close = g_strstr_len (decl, span, "?>")) == NULL
+      || (enc = g_strstr_len (decl, close - decl, "encoding")) == NULL)
+    return TRUE;
+  enc += strlen ("encoding");
+  while (enc < close && (*enc == ' ' || *enc == '=' || *enc == '\t' || *enc == '\r' || *enc == '\n'))
+    enc++;
+  quote = enc < close ? *enc : '\0';
+  if (quote == '"' || quote == '\'')
+    {
+      const char *end = memchr (enc + 1, quote, close - enc - 1);
+
+      if (end != NULL)
+        name = g_strndup (enc + 1, end - enc - 1);
+    }
+  if (name == NULL)
+    return TRUE;  /* malformed: the parser says so */
+  if (g_ascii_strcasecmp (name, "UTF-8") == 0 || g_ascii_strcasecmp (name, "UTF8") == 0
+      || g_ascii_strcasecmp (name, "US-ASCII") == 0 || g_ascii_strcasecmp (name, "ASCII") == 0)
+    return TRUE;
+  fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, enc - data), NULL,
+        "the file declares the encoding “%s”: project files are UTF-8", name);
+  return FALSE;
+}
+
 static gboolean
 refuse_declarations (Reader     *rd,
                      const char *data,
@@ -80,6 +157,8 @@ refuse_declarations (Reader     *rd,
 {
   static const char *const forbidden[] = { "<!DOCTYPE", "<!ENTITY", "<!ELEMENT", "<!ATTLIST" };
 
+  if (!check_encoding (rd, data, length) || !check_declared_encoding (rd, data, length))
+    return FALSE;
   for (guint f = 0; f < G_N_ELEMENTS (forbidden); f++)
     {
       const char *hit = g_strstr_len (data, length, forbidden[f]);
@@ -90,14 +169,6 @@ refuse_declarations (Reader     *rd,
                 "document type declarations and entities are not allowed in a project file");
           return FALSE;
         }
-    }
-  if (memchr (data, '\0', length) != NULL)
-    {
-      const char *nul = memchr (data, '\0', length);
-
-      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, nul - data), NULL,
-            "the file contains a NUL byte: not a text project file");
-      return FALSE;
     }
   return TRUE;
 }
@@ -113,13 +184,22 @@ on_structured_error (void        *user_data,
   const char *element = NULL;
   int code = err->domain == XML_FROM_RELAXNGV || err->domain == XML_FROM_RELAXNGP
                ? HL_PROJECT_FILE_ERROR_SCHEMA : HL_PROJECT_FILE_ERROR_SYNTAX;
+  long line = err->line;
 
   if (err->level < XML_ERR_ERROR || rd->error != NULL)
     return;
-  msg = g_strstrip (g_strdup (err->message != NULL ? err->message : "unknown XML error"));
+  /* libxml2 messages may span lines; the caller promises one */
+  msg = g_strdup (err->message != NULL ? err->message : "unknown XML error");
+  g_strdelimit (msg, "\r\n\t", ' ');
+  g_strstrip (msg);
   if (err->node != NULL && ((xmlNodePtr) err->node)->type == XML_ELEMENT_NODE)
-    element = (const char *) ((xmlNodePtr) err->node)->name;
-  fail (rd, code, err->line, element, "%s", msg);
+    {
+      element = (const char *) ((xmlNodePtr) err->node)->name;
+      /* schema errors on attributes come without a line */
+      if (line <= 0)
+        line = xmlGetLineNo (err->node);
+    }
+  fail (rd, code, line, element, "%s", msg);
 }
 
 /* ---- tree checks --------------------------------------------------- */
@@ -218,6 +298,9 @@ load_schema (Reader *rd)
   return schema;
 }
 
+static void explain_invalid (Reader    *rd,
+                             xmlNodePtr root);
+
 static gboolean
 validate (Reader   *rd,
           xmlDocPtr doc)
@@ -241,9 +324,19 @@ validate (Reader   *rd,
   xmlRelaxNGSetValidStructuredErrors (vctx, on_structured_error, rd);
   rc = xmlRelaxNGValidateDoc (vctx, doc);
   xmlRelaxNGFreeValidCtxt (vctx);
-  if (rc != 0 && rd->error == NULL)
-    fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (xmlDocGetRootElement (doc)), NULL,
-          "the file does not follow the Hoopline project format");
+  if (rc != 0)
+    {
+      GError *schema_error = g_steal_pointer (&rd->error);
+
+      explain_invalid (rd, xmlDocGetRootElement (doc));
+      if (rd->error != NULL)
+        g_clear_error (&schema_error);
+      else
+        rd->error = schema_error;
+      if (rd->error == NULL)
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (xmlDocGetRootElement (doc)), NULL,
+              "the file does not follow the Hoopline project format");
+    }
   return rc == 0;
 }
 
@@ -315,20 +408,31 @@ read_quantity (Reader        *rd,
   return TRUE;
 }
 
-static void
-copy_text (xmlNodePtr  parent,
+/* Refuses rather than truncates: a cut could split a UTF-8 character
+ * and would change the project without a word. */
+static gboolean
+copy_text (Reader     *rd,
+           xmlNodePtr  parent,
            const char *name,
            char       *dest,
            gsize       size)
 {
   xmlNodePtr n = child (parent, name);
+  g_autofree char *text = NULL;
 
-  if (n != NULL)
+  if (n == NULL)
+    return TRUE;
+  text = text_of (n);
+  g_strstrip (text);
+  if (strlen (text) >= size)
     {
-      g_autofree char *text = text_of (n);
-
-      g_strlcpy (dest, g_strstrip (text), size);
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name,
+            "is too long (%" G_GSIZE_FORMAT " bytes of UTF-8; this version keeps at most %" G_GSIZE_FORMAT ")",
+            strlen (text), size - 1);
+      return FALSE;
     }
+  g_strlcpy (dest, text, size);
+  return TRUE;
 }
 
 static char *
@@ -343,12 +447,251 @@ prop (xmlNodePtr  n,
 }
 
 static gboolean
+valid_date (const char *date)
+{
+  guint64 y, m, d;
+
+  if (date == NULL || strlen (date) != 10 || date[4] != '-' || date[7] != '-')
+    return FALSE;
+  for (guint i = 0; i < 10; i++)
+    if (i != 4 && i != 7 && !g_ascii_isdigit (date[i]))
+      return FALSE;
+  y = g_ascii_strtoull (date, NULL, 10);
+  m = g_ascii_strtoull (date + 5, NULL, 10);
+  d = g_ascii_strtoull (date + 8, NULL, 10);
+  return y >= 1 && g_date_valid_dmy ((GDateDay) d, (GDateMonth) m, (GDateYear) y);
+}
+
+/* ---- plain reasons for schema failures ----------------------------- */
+/* libxml2's RELAX NG messages name the pattern that failed ("Extra
+ * element title in interleave") rather than the mistake.  Once the
+ * schema has refused a file, these checks look for the usual mistakes
+ * and say them plainly.  They only choose the message: whether a file
+ * loads is decided by the schema and the value checks alone. */
+
+static const char *const number_elements[] = {
+  "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", "inner-diameter",
+  "outer-diameter", "inner-radius", "outer-radius", "wall-thickness", "corrosion-allowance",
+  "internal-pressure", "external-pressure", "joint-efficiency", "thin-tolerance", NULL
+};
+static const char *const size_elements[] = {
+  "inner-diameter", "outer-diameter", "inner-radius", "outer-radius", NULL
+};
+static const struct { const char *element, *words; } word_elements[] = {
+  { "display-units", "si us" }, { "thin-radius-basis", "inner mean outer" },
+  { "verdict-measure", "hoop equivalent" }, { "sizing-criterion", "von-mises tresca" },
+};
+
+static gboolean
+valid_id (const char *id)
+{
+  gsize len = id != NULL ? strlen (id) : 0;
+
+  if (len == 0 || len >= HL_ID_MAX || !(g_ascii_isalnum (id[0]) || id[0] == '_'))
+    return FALSE;
+  for (gsize i = 1; i < len; i++)
+    if (!(g_ascii_isalnum (id[i]) || strchr ("_.-", id[i]) != NULL))
+      return FALSE;
+  return TRUE;
+}
+
+static void
+explain_value (Reader    *rd,
+               xmlNodePtr n)
+{
+  const char *name = (const char *) n->name;
+  g_autofree char *text = text_of (n);
+  g_autofree char *unit = prop (n, "unit");
+  long line = xmlGetLineNo (n);
+  glong chars = g_utf8_strlen (text, -1);
+  glong limit = g_strv_contains ((const char *const[]) { "description", "revision", NULL }, name) ? 100000 : 1000;
+
+  for (xmlNodePtr c = n->children; c != NULL; c = c->next)
+    if (c->type == XML_ELEMENT_NODE)
+      {
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), name, "holds the element <%s> where a value belongs", c->name);
+        return;
+      }
+  if (g_strv_contains (number_elements, name))
+    {
+      g_autoptr(GError) local = NULL;
+      double v;
+
+      if (!hl_parse_number (text, &v, &local))
+        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "%s", local->message);
+      else if (unit == NULL && !g_strv_contains ((const char *const[]) { "poisson-ratio", "joint-efficiency", "thin-tolerance", NULL }, name))
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the unit attribute is missing");
+      return;
+    }
+  for (guint i = 0; i < G_N_ELEMENTS (word_elements); i++)
+    if (strcmp (name, word_elements[i].element) == 0)
+      {
+        g_auto(GStrv) words = g_strsplit (word_elements[i].words, " ", -1);
+        g_autofree char *list = g_strjoinv (", ", words);
+
+        if (!g_strv_contains ((const char *const *) words, g_strstrip (text)))
+          fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not one of %s", text, list);
+        return;
+      }
+  if (strcmp (name, "material-ref") == 0 && !valid_id (g_strstrip (text)))
+    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not an id", text);
+  else if (chars > limit)
+    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "is %ld characters long; at most %ld are allowed", chars, limit);
+}
+
+static void
+explain_attributes (Reader    *rd,
+                    xmlNodePtr n)
+{
+  static const char *const shell_attrs[] = { "id", "form", "ends", NULL };
+  static const char *const revision_attrs[] = { "number", "date", "author", NULL };
+  const char *name = (const char *) n->name;
+  const char *const *allowed = strcmp (name, "shell") == 0 ? shell_attrs
+                               : strcmp (name, "revision") == 0 ? revision_attrs
+                               : strcmp (name, "material") == 0 ? (const char *const[]) { "id", NULL }
+                               : strcmp (name, "hoopline-project") == 0 ? (const char *const[]) { "format", NULL }
+                               : g_strv_contains (number_elements, name) ? (const char *const[]) { "unit", NULL }
+                               : (const char *const[]) { NULL };
+  g_autofree char *id = prop (n, "id");
+  g_autofree char *form = prop (n, "form");
+  g_autofree char *ends = prop (n, "ends");
+  long line = xmlGetLineNo (n);
+  HlForm f;
+  HlEnds e;
+
+  for (xmlAttrPtr a = n->properties; a != NULL; a = a->next)
+    if (!g_strv_contains (allowed, (const char *) a->name))
+      {
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "has no attribute “%s” in this format", a->name);
+        return;
+      }
+  if (allowed == shell_attrs || strcmp (name, "material") == 0)
+    {
+      if (id == NULL)
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the id attribute is missing");
+      else if (!valid_id (id))
+        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name,
+              "id “%s” is not 1 to %d letters, digits, “_”, “.” or “-”", id, HL_ID_MAX - 1);
+    }
+  if (strcmp (name, "hoopline-project") == 0)
+    {
+      g_autofree char *format = prop (n, "format");
+
+      if (format != NULL && !g_regex_match_simple ("^1(\\.[0-9]+)?$", format, 0, 0))
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "format “%s” is not a version such as 1 or 1.2", format);
+    }
+  if (form != NULL && !hl_form_from_string (form, &f))
+    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "form “%s” is not one of cylinder, sphere", form);
+  if (ends != NULL && !hl_ends_from_string (ends, &e))
+    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "ends “%s” is not one of closed, open, plane-strain", ends);
+  if (allowed == revision_attrs)
+    {
+      g_autofree char *number = prop (n, "number");
+      g_autofree char *date = prop (n, "date");
+      guint64 v;
+
+      if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, 1000000, &v, NULL))
+        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to 1000000",
+              number != NULL ? number : "");
+      else if (!valid_date (date))
+        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "date “%s” is not a YYYY-MM-DD date", date != NULL ? date : "");
+    }
+}
+
+/* Element children of @n against what it may hold: unknown, repeated,
+ * missing.  @required lists what must be there. */
+static void
+explain_children (Reader            *rd,
+                  xmlNodePtr         n,
+                  const char *const *known,
+                  const char *const *required)
+{
+  const char *name = (const char *) n->name;
+  g_autoptr(GHashTable) seen = g_hash_table_new (g_str_hash, g_str_equal);
+  const char *size = NULL;
+
+  for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
+    {
+      const char *cname = (const char *) c->name;
+
+      if (c->type != XML_ELEMENT_NODE)
+        continue;
+      if (!g_strv_contains (known, cname))
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "is not an element of <%s> in format 1", name);
+      else if (g_strv_contains (size_elements, cname) && size != NULL)
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname,
+              "a second size after <%s>: give exactly one of inner-diameter, outer-diameter, inner-radius, outer-radius", size);
+      else if (g_hash_table_contains (seen, cname)
+               && !g_strv_contains ((const char *const[]) { "material", "shell", "revision", NULL }, cname))
+        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "appears twice in <%s>", name);
+      g_hash_table_add (seen, (gpointer) cname);
+      if (g_strv_contains (size_elements, cname))
+        size = cname;
+    }
+  for (guint i = 0; required[i] != NULL && rd->error == NULL; i++)
+    if (!g_hash_table_contains (seen, required[i]))
+      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name, "<%s> is missing", required[i]);
+  if (rd->error == NULL && strcmp (name, "shell") == 0 && size == NULL)
+    fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name,
+          "no size given: one of inner-diameter, outer-diameter, inner-radius, outer-radius");
+}
+
+static void
+explain_invalid (Reader    *rd,
+                 xmlNodePtr root)
+{
+  static const char *const material_required[] = {
+    "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
+  };
+  static const char *const shell_required[] = { "material-ref", "wall-thickness", NULL };
+
+  explain_attributes (rd, root);
+  explain_children (rd, root, known_project, (const char *const[]) { "shell", NULL });
+  for (xmlNodePtr n = root->children; n != NULL && rd->error == NULL; n = n->next)
+    {
+      gboolean material = xmlStrEqual (n->name, BAD_CAST "material");
+      gboolean shell = xmlStrEqual (n->name, BAD_CAST "shell");
+
+      if (n->type != XML_ELEMENT_NODE)
+        continue;
+      explain_attributes (rd, n);
+      if (material || shell)
+        {
+          if (rd->error == NULL)
+            explain_children (rd, n, material ? known_material : known_shell,
+                              material ? material_required : shell_required);
+          for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
+            if (c->type == XML_ELEMENT_NODE)
+              {
+                explain_attributes (rd, c);
+                if (rd->error == NULL)
+                  explain_value (rd, c);
+              }
+        }
+      else if (rd->error == NULL)
+        explain_value (rd, n);
+    }
+}
+
+/* Line of the element a problem's field names, else of @parent. */
+static long
+field_line (xmlNodePtr  parent,
+            const char *field)
+{
+  xmlNodePtr n = child (parent, field);
+
+  return xmlGetLineNo (n != NULL ? n : parent);
+}
+
+static gboolean
 read_material (Reader    *rd,
                HlProject *project,
                xmlNodePtr n)
 {
   HlMaterial m = hl_material_default ();
   g_autofree char *id = prop (n, "id");
+  g_autoptr(GPtrArray) problems = NULL;
+  HlShellInputs probe;
   xmlNodePtr nu;
 
   if (hl_project_find_material (project, id) != NULL)
@@ -358,14 +701,26 @@ read_material (Reader    *rd,
     }
   g_strlcpy (m.id, id, sizeof m.id);
   m.name[0] = '\0';
-  copy_text (n, "name", m.name, sizeof m.name);
-  if (!read_quantity (rd, n, "elastic-modulus", HL_KIND_MODULUS, &m.elastic_modulus)
+  if (!copy_text (rd, n, "name", m.name, sizeof m.name)
+      || !read_quantity (rd, n, "elastic-modulus", HL_KIND_MODULUS, &m.elastic_modulus)
       || !read_quantity (rd, n, "yield-strength", HL_KIND_STRESS, &m.yield_strength)
       || !read_quantity (rd, n, "allowable-stress", HL_KIND_STRESS, &m.allowable_stress))
     return FALSE;
   nu = child (n, "poisson-ratio");
   if (nu != NULL && !read_number (rd, nu, &m.poisson_ratio))
     return FALSE;
+  /* checked here, where the values stand, and even when no shell uses
+   * the material: the default shell is valid, so what is left is ours */
+  probe = hl_shell_inputs_default ();
+  probe.material = m;
+  problems = hl_shell_inputs_check (&probe);
+  if (problems->len > 0)
+    {
+      HlProblem *p = g_ptr_array_index (problems, 0);
+
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s", p->message);
+      return FALSE;
+    }
   g_array_append_val (project->materials, m);
   return TRUE;
 }
@@ -409,16 +764,6 @@ read_choice (xmlNodePtr  parent,
   from_string (g_strstrip (text), out);
 }
 
-/* Line of the element a problem's field names, else of the shell. */
-static long
-field_line (xmlNodePtr  shell,
-            const char *field)
-{
-  xmlNodePtr n = child (shell, field);
-
-  return xmlGetLineNo (n != NULL ? n : shell);
-}
-
 static gboolean
 read_shell (Reader    *rd,
             HlProject *project,
@@ -439,13 +784,14 @@ read_shell (Reader    *rd,
     }
   g_strlcpy (s.id, id, sizeof s.id);
   g_strlcpy (s.name, id, sizeof s.name);
-  copy_text (n, "name", s.name, sizeof s.name);
+  if (!copy_text (rd, n, "name", s.name, sizeof s.name)
+      || !copy_text (rd, n, "material-ref", s.material_ref, sizeof s.material_ref))
+    return FALSE;
   if (form != NULL)
     hl_form_from_string (form, &s.form);
   if (ends != NULL)
     hl_ends_from_string (ends, &s.ends);
 
-  copy_text (n, "material-ref", s.material_ref, sizeof s.material_ref);
   material = hl_project_find_material (project, s.material_ref);
   if (material == NULL)
     material = hl_material_builtin_find (s.material_ref);
@@ -506,6 +852,12 @@ read_revision (Reader    *rd,
   if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, 1000000, &value, NULL))
     {
       fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
+      return FALSE;
+    }
+  /* the schema's date type also takes time zones and five-digit years */
+  if (!valid_date (g_strstrip (date)))
+    {
+      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "date “%s” is not a YYYY-MM-DD date", date);
       return FALSE;
     }
   hl_project_add_revision (project, (guint) value, g_strstrip (date), author, g_strstrip (text));
@@ -579,6 +931,17 @@ check_root (Reader    *rd,
   return TRUE;
 }
 
+/* @data need not end in a NUL (fuzzers and callers pass exact buffers) */
+static gboolean
+only_space (const char *data,
+            gsize       length)
+{
+  for (gsize i = 0; i < length; i++)
+    if (data[i] != ' ' && data[i] != '\t' && data[i] != '\r' && data[i] != '\n')
+      return FALSE;
+  return TRUE;
+}
+
 HlProject *
 hl_project_load_bytes (const char  *data,
                        gsize        length,
@@ -601,12 +964,16 @@ hl_project_load_bytes (const char  *data,
           HL_PROJECT_FILE_MAX_BYTES / (1024 * 1024));
   else if (length == 0)
     fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty");
+  else if (only_space (data, length))
+    fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty (white space only)");
   else if (refuse_declarations (&rd, data, length))
     {
       ctxt = xmlNewParserCtxt ();
       xmlSetStructuredErrorFunc (&rd, on_structured_error);
-      /* NONET: never fetch; no NOENT/DTDLOAD: never expand or load */
-      doc = xmlCtxtReadMemory (ctxt, data, (int) length, rd.name, NULL, XML_PARSE_NONET | XML_PARSE_NOCDATA);
+      /* NONET: never fetch; no NOENT/DTDLOAD: never expand or load;
+       * the bytes are UTF-8 whatever the declaration says */
+      doc = xmlCtxtReadMemory (ctxt, data, (int) length, rd.name, "UTF-8",
+                               XML_PARSE_NONET | XML_PARSE_NOCDATA | XML_PARSE_IGNORE_ENC | XML_PARSE_BIG_LINES);
       xmlSetStructuredErrorFunc (NULL, NULL);
       if (doc == NULL && rd.error == NULL)
         fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "not a well-formed XML document");
