@@ -6,6 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-command-line.h"
+#include "hl-application.h"
 
 #include <locale.h>
 #include <glib/gi18n.h>
@@ -22,15 +23,6 @@ main (int    argc,
   if (hl_command_line_is_headless (argc, argv))
     return hl_command_line_run (argc, argv);
 
-  /* The window is not built yet: show what the file holds instead. */
-  {
-    g_autofree char **args = g_new0 (char *, argc + 2);
-    int n = 0;
-
-    args[n++] = argv[0];
-    args[n++] = (char *) "--summary";
-    for (int i = 1; i < argc; i++)
-      args[n++] = argv[i];
-    return hl_command_line_run (n, args);
-  }
+  /* GTK is touched only from here on, so headless commands need no display */
+  return hl_application_main (argc, argv);
 }

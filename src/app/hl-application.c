@@ -1,0 +1,255 @@
+/* hl-application.c — the application: windows, settings, app actions
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-application"
+
+#include "hl-config.h"
+#include "hl-application.h"
+#include "hl-app-resources.h"
+#include "hl-canvas.h"
+#include "hl-preferences.h"
+#include "hl-report.h"
+#include "hl-window.h"
+
+#include <glib/gi18n.h>
+
+struct _HlApplication
+{
+  GtkApplication parent_instance;
+
+  GSettings     *settings;
+};
+
+G_DEFINE_FINAL_TYPE (HlApplication, hl_application, GTK_TYPE_APPLICATION)
+
+static void
+apply_dark_style (HlApplication *self)
+{
+  g_object_set (gtk_settings_get_default (), "gtk-application-prefer-dark-theme",
+                g_settings_get_boolean (self->settings, "dark-style"), NULL);
+}
+
+static void
+on_dark_style_changed_cb (GSettings     *settings,
+                          const char    *key,
+                          HlApplication *self)
+{
+  apply_dark_style (self);
+}
+
+static void
+quit_activated (GSimpleAction *action,
+                GVariant      *param,
+                gpointer       user_data)
+{
+  GList *windows = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (user_data)));
+
+  /* each window with unsaved work asks before it goes */
+  for (GList *l = windows; l != NULL; l = l->next)
+    gtk_window_close (GTK_WINDOW (l->data));
+  g_list_free (windows);
+}
+
+static void
+preferences_activated (GSimpleAction *action,
+                       GVariant      *param,
+                       gpointer       user_data)
+{
+  HlApplication *self = HL_APPLICATION (user_data);
+  GtkWindow *parent = gtk_application_get_active_window (GTK_APPLICATION (self));
+
+  gtk_window_present (GTK_WINDOW (hl_preferences_new (parent, self->settings)));
+}
+
+static void
+about_activated (GSimpleAction *action,
+                 GVariant      *param,
+                 gpointer       user_data)
+{
+  GtkWindow *parent = gtk_application_get_active_window (GTK_APPLICATION (user_data));
+  g_autofree char *comments = g_strdup_printf ("%s\n\n%s",
+                                               _("Checks pressurised shells: thin-wall and thick-wall "
+                                                 "(Lamé) stresses, allowable pressure and required thickness."),
+                                               _(HL_CAUTION));
+  const char *authors[] = { _("The Hoopline developers"), NULL };
+
+  gtk_show_about_dialog (parent,
+                         "program-name", "Hoopline",
+                         "version", HL_VERSION,
+                         "comments", comments,
+                         "logo-icon-name", HL_APPLICATION_ID,
+                         "license-type", GTK_LICENSE_GPL_3_0,
+                         "authors", authors,
+                         /* TRANSLATORS: your name, one line per translator */
+                         "translator-credits", _("translator-credits"),
+                         NULL);
+}
+
+static const GActionEntry app_entries[] = {
+  { "quit", quit_activated },
+  { "preferences", preferences_activated },
+  { "about", about_activated },
+};
+
+static void
+hl_application_startup (GApplication *application)
+{
+  HlApplication *self = HL_APPLICATION (application);
+  static const struct { const char *action; const char *accels[3]; } accels[] = {
+    { "app.quit", { "<Control>q", NULL } },
+    { "app.preferences", { "<Control>comma", NULL } },
+    { "win.new", { "<Control>n", NULL } },
+    { "win.open", { "<Control>o", NULL } },
+    { "win.save", { "<Control>s", NULL } },
+    { "win.save-as", { "<Control><Shift>s", NULL } },
+    { "win.export", { "<Control>e", NULL } },
+    { "win.print", { "<Control>p", NULL } },
+    { "win.undo", { "<Control>z", NULL } },
+    { "win.redo", { "<Control><Shift>z", "<Control>y", NULL } },
+    { "win.copy-results", { "<Control><Shift>c", NULL } },
+    { "win.properties", { "<Alt>Return", NULL } },
+    { "win.shell-add", { "<Control><Shift>n", NULL } },
+    { "win.shell-rename", { "F2", NULL } },
+    { "window.close", { "<Control>w", NULL } },
+  };
+  g_autoptr(GtkCssProvider) css = gtk_css_provider_new ();
+
+  G_APPLICATION_CLASS (hl_application_parent_class)->startup (application);
+
+  g_action_map_add_action_entries (G_ACTION_MAP (self), app_entries, G_N_ELEMENTS (app_entries), self);
+  for (guint i = 0; i < G_N_ELEMENTS (accels); i++)
+    gtk_application_set_accels_for_action (GTK_APPLICATION (self), accels[i].action, accels[i].accels);
+
+  gtk_css_provider_load_from_resource (css, "/org/hoopline/Hoopline/style.css");
+  gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
+                                              GTK_STYLE_PROVIDER_PRIORITY_APPLICATION);
+  g_signal_connect (self->settings, "changed::dark-style", G_CALLBACK (on_dark_style_changed_cb), self);
+  apply_dark_style (self);
+}
+
+static void
+hl_application_activate (GApplication *application)
+{
+  GtkWindow *window = gtk_application_get_active_window (GTK_APPLICATION (application));
+
+  if (window == NULL)
+    window = GTK_WINDOW (hl_window_new (GTK_APPLICATION (application)));
+  gtk_window_present (window);
+}
+
+/* A file already open is shown again; otherwise it opens in an untouched
+ * window or a new one, never over someone's work. */
+static void
+hl_application_open (GApplication  *application,
+                     GFile        **files,
+                     int            n_files,
+                     const char    *hint)
+{
+  for (int i = 0; i < n_files; i++)
+    {
+      GtkWindow *target = NULL;
+
+      for (GList *l = gtk_application_get_windows (GTK_APPLICATION (application)); l != NULL; l = l->next)
+        if (HL_IS_WINDOW (l->data) && hl_window_shows_file (l->data, files[i]))
+          target = l->data;
+      if (target == NULL)
+        {
+          GtkWindow *active = gtk_application_get_active_window (GTK_APPLICATION (application));
+
+          if (HL_IS_WINDOW (active) && hl_window_is_pristine (HL_WINDOW (active)))
+            target = active;
+          else
+            target = GTK_WINDOW (hl_window_new (GTK_APPLICATION (application)));
+          hl_window_load_file (HL_WINDOW (target), files[i]);
+        }
+      gtk_window_present (target);
+    }
+}
+
+static void
+hl_application_dispose (GObject *object)
+{
+  HlApplication *self = HL_APPLICATION (object);
+
+  g_clear_object (&self->settings);
+  G_OBJECT_CLASS (hl_application_parent_class)->dispose (object);
+}
+
+static void
+hl_application_class_init (HlApplicationClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GApplicationClass *app_class = G_APPLICATION_CLASS (klass);
+
+  object_class->dispose = hl_application_dispose;
+  app_class->startup = hl_application_startup;
+  app_class->activate = hl_application_activate;
+  app_class->open = hl_application_open;
+
+  /* templates are looked up when the first widget is made */
+  hl_app_register_resource ();
+}
+
+static void
+hl_application_init (HlApplication *self)
+{
+  self->settings = g_settings_new (HL_APPLICATION_ID);
+}
+
+HlApplication *
+hl_application_new (GApplicationFlags extra_flags)
+{
+  return g_object_new (HL_TYPE_APPLICATION,
+                       "application-id", HL_APPLICATION_ID,
+                       "flags", G_APPLICATION_HANDLES_OPEN | extra_flags,
+                       "resource-base-path", "/org/hoopline/Hoopline",
+                       NULL);
+}
+
+GSettings *
+hl_application_get_settings (HlApplication *self)
+{
+  g_return_val_if_fail (HL_IS_APPLICATION (self), NULL);
+  return self->settings;
+}
+
+HlUnitSystem
+hl_application_unit_system (HlApplication *self)
+{
+  g_return_val_if_fail (HL_IS_APPLICATION (self), HL_UNIT_SYSTEM_SI);
+  return g_settings_get_enum (self->settings, "unit-system") == 1 ? HL_UNIT_SYSTEM_US : HL_UNIT_SYSTEM_SI;
+}
+
+HlShellInputs
+hl_application_default_shell (HlApplication *self)
+{
+  HlShellInputs shell = hl_shell_inputs_default ();
+
+  g_return_val_if_fail (HL_IS_APPLICATION (self), shell);
+
+  if (hl_application_unit_system (self) == HL_UNIT_SYSTEM_US)
+    {
+      /* round US sizes rather than converted SI ones (39.37 in) */
+      shell.size = hl_quantity_make (40, "in");
+      shell.wall_thickness = hl_quantity_make (0.375, "in");
+      shell.corrosion_allowance = hl_quantity_make (0, "in");
+      shell.internal_pressure = hl_quantity_make (150, "psi");
+      shell.external_pressure = hl_quantity_make (0, "psi");
+    }
+  shell.thin_tolerance = hl_quantity_make (g_settings_get_double (self->settings, "default-tolerance"), "%");
+  shell.verdict_measure = g_settings_get_enum (self->settings, "default-verdict-measure") == 1
+                          ? HL_MEASURE_EQUIVALENT : HL_MEASURE_HOOP;
+  return shell;
+}
+
+int
+hl_application_main (int    argc,
+                     char **argv)
+{
+  g_autoptr(HlApplication) app = NULL;
+
+  hl_canvas_mark_start ();
+  app = hl_application_new (G_APPLICATION_DEFAULT_FLAGS);
+  return g_application_run (G_APPLICATION (app), argc, argv);
+}

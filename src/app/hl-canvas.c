@@ -1,0 +1,157 @@
+/* hl-canvas.c — the figure of the selected shell, sized to the window
+ *
+ * The render layer draws everything; this widget only hands it the
+ * document's one solution and the style.  GTK gives the draw function a
+ * cairo context already scaled for the monitor, so HiDPI stays sharp.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-canvas"
+
+#include "hl-config.h"
+#include "hl-canvas.h"
+#include "hl-figure.h"
+
+#include <stdio.h>
+
+struct _HlCanvas
+{
+  GtkDrawingArea parent_instance;
+
+  HlDocument    *document;
+  guint          n_draws;
+};
+
+G_DEFINE_FINAL_TYPE (HlCanvas, hl_canvas, GTK_TYPE_DRAWING_AREA)
+
+static gint64 start_time;
+
+void
+hl_canvas_mark_start (void)
+{
+  if (start_time == 0)
+    start_time = g_get_monotonic_time ();
+}
+
+gboolean
+hl_canvas_get_dark (HlCanvas *self)
+{
+  GtkSettings *settings = gtk_widget_get_settings (GTK_WIDGET (self));
+  gboolean dark = FALSE;
+
+  g_return_val_if_fail (HL_IS_CANVAS (self), FALSE);
+  g_object_get (settings, "gtk-application-prefer-dark-theme", &dark, NULL);
+  return dark;
+}
+
+static void
+draw_cb (GtkDrawingArea *area,
+         cairo_t        *cr,
+         int             width,
+         int             height,
+         gpointer        user_data)
+{
+  HlCanvas *self = HL_CANVAS (area);
+  const HlProject *project;
+  HlFigureContext ctx = { 0 };
+  gint64 before = g_get_monotonic_time ();
+
+  if (self->document == NULL)
+    return;
+  project = hl_document_get_project (self->document);
+  ctx.project = project;
+  ctx.solution = hl_document_get_solution (self->document);
+  ctx.problem_text = hl_document_get_problem_text (self->document);
+  ctx.units = project->display_units;
+  ctx.style = hl_canvas_get_dark (self) ? HL_FIGURE_STYLE_DARK : HL_FIGURE_STYLE_LIGHT;
+  ctx.locale_numbers = TRUE;
+  hl_figure_draw (cr, width, height, &ctx);
+
+  if (self->n_draws++ == 0 && g_getenv ("HL_TRACE_STARTUP") != NULL && start_time != 0)
+    fprintf (stderr, "hoopline: first frame drawn %.1f ms after start\n",
+             (g_get_monotonic_time () - start_time) / 1000.0);
+  if (g_getenv ("HL_TRACE_DRAW") != NULL)
+    fprintf (stderr, "hoopline: figure drawn in %.2f ms (%d x %d)\n",
+             (g_get_monotonic_time () - before) / 1000.0, width, height);
+}
+
+static void
+on_document_changed_cb (HlDocument *document,
+                        HlCanvas   *self)
+{
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+  gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_DESCRIPTION,
+                                  hl_document_get_problem_text (document) != NULL
+                                  ? hl_document_get_problem_text (document) : "", -1);
+}
+
+static void
+on_dark_changed_cb (GtkSettings *settings,
+                    GParamSpec  *pspec,
+                    HlCanvas    *self)
+{
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+}
+
+static void
+hl_canvas_realize (GtkWidget *widget)
+{
+  GTK_WIDGET_CLASS (hl_canvas_parent_class)->realize (widget);
+  g_signal_connect_object (gtk_widget_get_settings (widget), "notify::gtk-application-prefer-dark-theme",
+                           G_CALLBACK (on_dark_changed_cb), widget, 0);
+}
+
+static void
+hl_canvas_dispose (GObject *object)
+{
+  HlCanvas *self = HL_CANVAS (object);
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->document);
+  G_OBJECT_CLASS (hl_canvas_parent_class)->dispose (object);
+}
+
+static void
+hl_canvas_class_init (HlCanvasClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->dispose = hl_canvas_dispose;
+  widget_class->realize = hl_canvas_realize;
+  gtk_widget_class_set_css_name (widget_class, "hl-canvas");
+  gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_IMG);
+}
+
+static void
+hl_canvas_init (HlCanvas *self)
+{
+  gtk_drawing_area_set_draw_func (GTK_DRAWING_AREA (self), draw_cb, NULL, NULL);
+  gtk_widget_set_hexpand (GTK_WIDGET (self), TRUE);
+  gtk_widget_set_vexpand (GTK_WIDGET (self), TRUE);
+  gtk_widget_set_size_request (GTK_WIDGET (self), 360, 240);
+}
+
+void
+hl_canvas_set_document (HlCanvas   *self,
+                        HlDocument *document)
+{
+  g_return_if_fail (HL_IS_CANVAS (self));
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_set_object (&self->document, document);
+  if (document != NULL)
+    {
+      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
+      on_document_changed_cb (document, self);
+    }
+}
+
+guint
+hl_canvas_get_n_draws (HlCanvas *self)
+{
+  g_return_val_if_fail (HL_IS_CANVAS (self), 0);
+  return self->n_draws;
+}

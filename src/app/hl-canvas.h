@@ -1,0 +1,25 @@
+/* hl-canvas.h — the figure of the selected shell, sized to the window
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <gtk/gtk.h>
+
+#include "hl-document.h"
+
+G_BEGIN_DECLS
+
+#define HL_TYPE_CANVAS (hl_canvas_get_type ())
+G_DECLARE_FINAL_TYPE (HlCanvas, hl_canvas, HL, CANVAS, GtkDrawingArea)
+
+void     hl_canvas_set_document (HlCanvas   *self,
+                                 HlDocument *document);
+/* frames drawn so far, for tests */
+guint    hl_canvas_get_n_draws  (HlCanvas   *self);
+gboolean hl_canvas_get_dark     (HlCanvas   *self);
+
+/* Time origin for the HL_TRACE_STARTUP report, set once at start. */
+void     hl_canvas_mark_start   (void);
+
+G_END_DECLS

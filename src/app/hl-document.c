@@ -1,0 +1,648 @@
+/* hl-document.c — the open project: file, modified flag, undo, selection
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-document"
+
+#include "hl-config.h"
+#include "hl-document.h"
+#include "hl-fields.h"
+#include "hl-project-file.h"
+#include "hl-shell-check.h"
+
+#include <glib/gi18n.h>
+#include <string.h>
+
+/* Undo keeps whole project copies: a project is small (a few shells), and
+ * a snapshot can never get out of step with the edit that made it. */
+typedef struct
+{
+  HlProject *project;
+  guint      selected;
+} Snapshot;
+
+struct _HlDocument
+{
+  GObject     parent_instance;
+
+  HlProject  *project;
+  HlProject  *saved;          /* as on disk, for the modified flag */
+  GFile      *file;
+  guint       selected;
+
+  GPtrArray  *undo;           /* Snapshot * */
+  GPtrArray  *redo;
+  char       *merge_key;
+
+  GHashTable *input_errors;   /* field -> message */
+  HlSolution *solution;
+  GPtrArray  *problems;
+  char       *problem_text;
+};
+
+G_DEFINE_FINAL_TYPE (HlDocument, hl_document, G_TYPE_OBJECT)
+
+enum { CHANGED, N_SIGNALS };
+static guint signals[N_SIGNALS];
+
+static void
+snapshot_free (gpointer data)
+{
+  Snapshot *s = data;
+
+  hl_project_free (s->project);
+  g_free (s);
+}
+
+static Snapshot *
+snapshot_take (HlDocument *self)
+{
+  Snapshot *s = g_new0 (Snapshot, 1);
+
+  s->project = hl_project_copy (self->project);
+  s->selected = self->selected;
+  return s;
+}
+
+static void
+append_problem_line (GString    *text,
+                     const char *field,
+                     const char *message)
+{
+  if (text->len > 0)
+    g_string_append_c (text, '\n');
+  /* TRANSLATORS: a field label and what is wrong with its value */
+  g_string_append_printf (text, _("%s: %s"), hl_field_label (field), message);
+}
+
+/* Solves once per change, so every view reads the same solution. */
+static void
+update (HlDocument *self)
+{
+  g_autoptr(GString) text = g_string_new (NULL);
+  const HlShellInputs *shell;
+  GHashTableIter iter;
+  gpointer key, value;
+
+  g_clear_pointer (&self->solution, hl_solution_free);
+  g_clear_pointer (&self->problems, g_ptr_array_unref);
+  g_clear_pointer (&self->problem_text, g_free);
+
+  if (hl_project_n_shells (self->project) == 0)
+    {
+      self->problems = g_ptr_array_new ();
+      self->problem_text = g_strdup (_("The project has no shells. Add one to see results."));
+      return;
+    }
+  if (self->selected >= hl_project_n_shells (self->project))
+    self->selected = hl_project_n_shells (self->project) - 1;
+  shell = hl_project_shell (self->project, self->selected);
+  self->problems = hl_shell_inputs_check (shell);
+
+  g_hash_table_iter_init (&iter, self->input_errors);
+  while (g_hash_table_iter_next (&iter, &key, &value))
+    append_problem_line (text, key, value);
+  for (guint i = 0; i < self->problems->len; i++)
+    {
+      const HlProblem *p = g_ptr_array_index (self->problems, i);
+
+      /* the field's own text error says more than the stale stored value */
+      if (!g_hash_table_contains (self->input_errors, p->field))
+        append_problem_line (text, p->field, p->message);
+    }
+
+  if (text->len == 0)
+    {
+      g_autoptr(GError) error = NULL;
+
+      self->solution = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &error);
+      if (self->solution == NULL)
+        g_string_append (text, error->message);
+    }
+  if (text->len > 0)
+    self->problem_text = g_strdup (text->str);
+}
+
+static void
+emit_changed (HlDocument *self)
+{
+  update (self);
+  g_signal_emit (self, signals[CHANGED], 0);
+}
+
+static void
+begin_edit (HlDocument *self,
+            const char *merge_key)
+{
+  if (merge_key == NULL || g_strcmp0 (merge_key, self->merge_key) != 0 || self->undo->len == 0)
+    g_ptr_array_add (self->undo, snapshot_take (self));
+  g_ptr_array_set_size (self->redo, 0);
+  g_free (self->merge_key);
+  self->merge_key = g_strdup (merge_key);
+}
+
+static void
+hl_document_finalize (GObject *object)
+{
+  HlDocument *self = HL_DOCUMENT (object);
+
+  g_clear_pointer (&self->project, hl_project_free);
+  g_clear_pointer (&self->saved, hl_project_free);
+  g_clear_object (&self->file);
+  g_clear_pointer (&self->undo, g_ptr_array_unref);
+  g_clear_pointer (&self->redo, g_ptr_array_unref);
+  g_clear_pointer (&self->merge_key, g_free);
+  g_clear_pointer (&self->input_errors, g_hash_table_unref);
+  g_clear_pointer (&self->solution, hl_solution_free);
+  g_clear_pointer (&self->problems, g_ptr_array_unref);
+  g_clear_pointer (&self->problem_text, g_free);
+  G_OBJECT_CLASS (hl_document_parent_class)->finalize (object);
+}
+
+static void
+hl_document_class_init (HlDocumentClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+
+  object_class->finalize = hl_document_finalize;
+
+  /* Anything changed: project, selection, file, modified flag, problems. */
+  signals[CHANGED] = g_signal_new ("changed", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST,
+                                   0, NULL, NULL, NULL, G_TYPE_NONE, 0);
+}
+
+static void
+hl_document_init (HlDocument *self)
+{
+  self->undo = g_ptr_array_new_with_free_func (snapshot_free);
+  self->redo = g_ptr_array_new_with_free_func (snapshot_free);
+  self->input_errors = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
+}
+
+HlDocument *
+hl_document_new (const HlShellInputs *first_shell,
+                 HlUnitSystem         units)
+{
+  HlDocument *self = g_object_new (HL_TYPE_DOCUMENT, NULL);
+
+  g_return_val_if_fail (first_shell != NULL, self);
+
+  self->project = hl_project_new ();
+  self->project->display_units = units;
+  hl_project_add_shell (self->project, first_shell);
+  self->saved = hl_project_copy (self->project);
+  update (self);
+  return self;
+}
+
+gboolean
+hl_document_load (HlDocument  *self,
+                  GFile       *file,
+                  GPtrArray  **warnings,
+                  GError     **error)
+{
+  g_autofree char *path = NULL;
+  HlProject *project;
+
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
+  g_return_val_if_fail (G_IS_FILE (file), FALSE);
+
+  path = g_file_get_path (file);
+  if (path == NULL)
+    {
+      g_autofree char *uri = g_file_get_uri (file);
+
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_NOT_SUPPORTED,
+                   _("“%s” is not a local file"), uri);
+      return FALSE;
+    }
+  project = hl_project_load (path, warnings, error);
+  if (project == NULL)
+    return FALSE;
+
+  hl_project_free (self->project);
+  self->project = project;
+  g_clear_pointer (&self->saved, hl_project_free);
+  self->saved = hl_project_copy (project);
+  g_set_object (&self->file, file);
+  self->selected = 0;
+  g_ptr_array_set_size (self->undo, 0);
+  g_ptr_array_set_size (self->redo, 0);
+  g_clear_pointer (&self->merge_key, g_free);
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+  return TRUE;
+}
+
+/* A file the loader would refuse is no safe copy of the work, so a
+ * project with bad values is not written. */
+static gboolean
+check_savable (HlDocument *self,
+               GError    **error)
+{
+  for (guint i = 0; i < hl_project_n_shells (self->project); i++)
+    {
+      const HlShellInputs *shell = hl_project_shell (self->project, i);
+      g_autoptr(GPtrArray) problems = hl_shell_inputs_check (shell);
+
+      if (problems->len > 0)
+        {
+          const HlProblem *p = g_ptr_array_index (problems, 0);
+
+          g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_DATA,
+                       /* TRANSLATORS: shell name, field label, reason */
+                       _("Shell “%s”: %s %s. Fix the marked values, then save again."),
+                       shell->name, hl_field_label (p->field), p->message);
+          return FALSE;
+        }
+    }
+  if (g_hash_table_size (self->input_errors) > 0)
+    {
+      g_set_error_literal (error, G_IO_ERROR, G_IO_ERROR_INVALID_DATA,
+                           _("Some values cannot be read. Fix the marked values, then save again."));
+      return FALSE;
+    }
+  return TRUE;
+}
+
+gboolean
+hl_document_save (HlDocument *self,
+                  GFile      *file,
+                  GError    **error)
+{
+  g_autofree char *path = NULL;
+
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
+
+  if (file == NULL)
+    file = self->file;
+  g_return_val_if_fail (G_IS_FILE (file), FALSE);
+
+  if (!check_savable (self, error))
+    return FALSE;
+  path = g_file_get_path (file);
+  if (path == NULL)
+    {
+      g_set_error_literal (error, G_IO_ERROR, G_IO_ERROR_NOT_SUPPORTED,
+                           _("Projects can only be saved to local files"));
+      return FALSE;
+    }
+  if (!hl_project_save (self->project, path, error))
+    return FALSE;
+
+  g_clear_pointer (&self->saved, hl_project_free);
+  self->saved = hl_project_copy (self->project);
+  g_set_object (&self->file, file);
+  g_clear_pointer (&self->merge_key, g_free);
+  emit_changed (self);
+  return TRUE;
+}
+
+const HlProject *
+hl_document_get_project (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return self->project;
+}
+
+GFile *
+hl_document_get_file (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return self->file;
+}
+
+gboolean
+hl_document_get_modified (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
+  return !hl_project_equal (self->project, self->saved);
+}
+
+const char *
+hl_document_get_title (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  if (self->project->title == NULL || self->project->title[0] == '\0')
+    return _("Untitled project");
+  return self->project->title;
+}
+
+guint
+hl_document_get_selected (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), 0);
+  return self->selected;
+}
+
+void
+hl_document_set_selected (HlDocument *self,
+                          guint       index)
+{
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  if (index >= hl_project_n_shells (self->project) || index == self->selected)
+    return;
+  self->selected = index;
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+}
+
+const HlShellInputs *
+hl_document_get_shell (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  if (self->selected >= hl_project_n_shells (self->project))
+    return NULL;
+  return hl_project_shell (self->project, self->selected);
+}
+
+const HlSolution *
+hl_document_get_solution (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return self->solution;
+}
+
+const char *
+hl_document_get_problem_text (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return self->problem_text;
+}
+
+GPtrArray *
+hl_document_get_problems (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return self->problems;
+}
+
+void
+hl_document_set_input_error (HlDocument *self,
+                             const char *field,
+                             const char *message)
+{
+  const char *old;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  g_return_if_fail (field != NULL);
+
+  old = g_hash_table_lookup (self->input_errors, field);
+  if (g_strcmp0 (old, message) == 0)
+    return;
+  if (message == NULL)
+    g_hash_table_remove (self->input_errors, field);
+  else
+    g_hash_table_insert (self->input_errors, g_strdup (field), g_strdup (message));
+  emit_changed (self);
+}
+
+void
+hl_document_clear_input_errors (HlDocument *self)
+{
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  if (g_hash_table_size (self->input_errors) == 0)
+    return;
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+}
+
+const char *
+hl_document_get_input_error (HlDocument *self,
+                             const char *field)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return g_hash_table_lookup (self->input_errors, field);
+}
+
+void
+hl_document_edit_shell (HlDocument          *self,
+                        const HlShellInputs *shell,
+                        const char          *merge_key)
+{
+  HlShellInputs *slot;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  g_return_if_fail (shell != NULL);
+
+  slot = (HlShellInputs *) hl_document_get_shell (self);
+  g_return_if_fail (slot != NULL);
+  if (hl_shell_inputs_equal (slot, shell))
+    return;
+  begin_edit (self, merge_key);
+  *slot = *shell;
+  emit_changed (self);
+}
+
+static guint
+number_in_id (const char *id)
+{
+  const char *dash = strrchr (id, '-');
+
+  return dash != NULL ? (guint) g_ascii_strtoull (dash + 1, NULL, 10) : 0;
+}
+
+void
+hl_document_add_shell (HlDocument          *self,
+                       const HlShellInputs *template_shell)
+{
+  HlShellInputs shell;
+  g_autofree char *id = NULL;
+  g_autofree char *name = NULL;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  g_return_if_fail (template_shell != NULL);
+
+  shell = *template_shell;
+  id = hl_project_unique_shell_id (self->project, "shell");
+  /* TRANSLATORS: name of a new shell; %u is its number */
+  name = g_strdup_printf (_("Shell %u"), number_in_id (id));
+  g_strlcpy (shell.id, id, sizeof shell.id);
+  g_strlcpy (shell.name, name, sizeof shell.name);
+
+  begin_edit (self, NULL);
+  hl_project_add_shell (self->project, &shell);
+  self->selected = hl_project_n_shells (self->project) - 1;
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+}
+
+void
+hl_document_duplicate_shell (HlDocument *self)
+{
+  const HlShellInputs *current;
+  HlShellInputs shell;
+  g_autofree char *id = NULL;
+  g_autofree char *name = NULL;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  current = hl_document_get_shell (self);
+  if (current == NULL)
+    return;
+  shell = *current;
+  id = hl_project_unique_shell_id (self->project, current->id);
+  /* TRANSLATORS: name of a duplicated shell; %s is the original's name */
+  name = g_strdup_printf (_("%s (copy)"), current->name);
+  g_strlcpy (shell.id, id, sizeof shell.id);
+  g_strlcpy (shell.name, name, sizeof shell.name);
+
+  begin_edit (self, NULL);
+  hl_project_insert_shell (self->project, self->selected + 1, &shell);
+  self->selected++;
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+}
+
+void
+hl_document_remove_shell (HlDocument *self)
+{
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  if (self->selected >= hl_project_n_shells (self->project))
+    return;
+  begin_edit (self, NULL);
+  hl_project_remove_shell (self->project, self->selected);
+  if (self->selected > 0 && self->selected >= hl_project_n_shells (self->project))
+    self->selected--;
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+}
+
+void
+hl_document_move_shell (HlDocument *self,
+                        int         delta)
+{
+  guint n, to;
+  HlShellInputs moved;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  n = hl_project_n_shells (self->project);
+  if (self->selected >= n || (delta < 0 && self->selected == 0)
+      || (delta > 0 && self->selected + 1 >= n) || delta == 0)
+    return;
+  to = delta < 0 ? self->selected - 1 : self->selected + 1;
+  begin_edit (self, NULL);
+  moved = *hl_project_shell (self->project, self->selected);
+  hl_project_remove_shell (self->project, self->selected);
+  hl_project_insert_shell (self->project, to, &moved);
+  self->selected = to;
+  emit_changed (self);
+}
+
+void
+hl_document_put_material (HlDocument       *self,
+                          const HlMaterial *material,
+                          const char       *merge_key)
+{
+  HlShellInputs *shell;
+  const HlMaterial *old;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  g_return_if_fail (material != NULL);
+
+  shell = (HlShellInputs *) hl_document_get_shell (self);
+  old = hl_project_find_material (self->project, material->id);
+  if (old != NULL && hl_material_equal (old, material) && shell != NULL
+      && g_strcmp0 (shell->material_ref, material->id) == 0)
+    return;
+  begin_edit (self, merge_key);
+  hl_project_put_material (self->project, material);
+  if (shell != NULL)
+    {
+      g_strlcpy (shell->material_ref, material->id, sizeof shell->material_ref);
+      shell->material = *material;
+    }
+  emit_changed (self);
+}
+
+void
+hl_document_set_info (HlDocument  *self,
+                      const char  *title,
+                      const char  *engineer,
+                      const char  *description,
+                      HlUnitSystem units)
+{
+  HlProject *p;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  p = self->project;
+  if (g_strcmp0 (p->title, title) == 0 && g_strcmp0 (p->engineer, engineer) == 0
+      && g_strcmp0 (p->description, description) == 0 && p->display_units == units)
+    return;
+  begin_edit (self, "project-info");
+  hl_project_set_title (p, title);
+  hl_project_set_engineer (p, engineer);
+  hl_project_set_description (p, description);
+  p->display_units = units;
+  emit_changed (self);
+}
+
+void
+hl_document_add_revision (HlDocument *self,
+                          const char *date,
+                          const char *author,
+                          const char *text)
+{
+  const HlRevision *latest;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+
+  latest = hl_project_latest_revision (self->project);
+  begin_edit (self, NULL);
+  hl_project_add_revision (self->project, latest != NULL ? latest->number + 1 : 1,
+                           date, author, text);
+  emit_changed (self);
+}
+
+gboolean
+hl_document_can_undo (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
+  return self->undo->len > 0;
+}
+
+gboolean
+hl_document_can_redo (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
+  return self->redo->len > 0;
+}
+
+static void
+restore (HlDocument *self,
+         GPtrArray  *from,
+         GPtrArray  *to)
+{
+  Snapshot *s;
+
+  if (from->len == 0)
+    return;
+  g_ptr_array_add (to, snapshot_take (self));
+  s = g_ptr_array_steal_index (from, from->len - 1);
+  hl_project_free (self->project);
+  self->project = g_steal_pointer (&s->project);
+  self->selected = s->selected;
+  g_free (s);
+  g_clear_pointer (&self->merge_key, g_free);
+  g_hash_table_remove_all (self->input_errors);
+  emit_changed (self);
+}
+
+void
+hl_document_undo (HlDocument *self)
+{
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  restore (self, self->undo, self->redo);
+}
+
+void
+hl_document_redo (HlDocument *self)
+{
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  restore (self, self->redo, self->undo);
+}

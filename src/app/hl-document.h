@@ -1,0 +1,92 @@
+/* hl-document.h — the open project: file, modified flag, undo, selection
+ *
+ * Every edit goes through here so that undo, the modified mark and the
+ * one solve per change stay in step.  Views listen to "changed".
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <gio/gio.h>
+
+#include "hl-project.h"
+#include "hl-solution.h"
+
+G_BEGIN_DECLS
+
+#define HL_TYPE_DOCUMENT (hl_document_get_type ())
+G_DECLARE_FINAL_TYPE (HlDocument, hl_document, HL, DOCUMENT, GObject)
+
+/* An unsaved project holding one shell, a copy of @first_shell. */
+HlDocument          *hl_document_new             (const HlShellInputs *first_shell,
+                                                  HlUnitSystem         units);
+
+/* Replaces the content with the file's; on failure nothing changes.
+ * @warnings (nullable) receives the loader's warnings. */
+gboolean             hl_document_load            (HlDocument  *self,
+                                                  GFile       *file,
+                                                  GPtrArray  **warnings,
+                                                  GError     **error);
+/* Saves to @file, or to the current file when @file is NULL.  On failure
+ * the document stays modified and keeps its file. */
+gboolean             hl_document_save            (HlDocument  *self,
+                                                  GFile       *file,
+                                                  GError     **error);
+
+const HlProject     *hl_document_get_project     (HlDocument *self);
+GFile               *hl_document_get_file        (HlDocument *self);
+gboolean             hl_document_get_modified    (HlDocument *self);
+/* "Untitled project" or the project title */
+const char          *hl_document_get_title       (HlDocument *self);
+
+guint                hl_document_get_selected    (HlDocument *self);
+void                 hl_document_set_selected    (HlDocument *self,
+                                                  guint       index);
+const HlShellInputs *hl_document_get_shell       (HlDocument *self);
+
+/* The solution of the selected shell, or NULL while any value is bad;
+ * then the problem text says what to fix. */
+const HlSolution    *hl_document_get_solution    (HlDocument *self);
+const char          *hl_document_get_problem_text (HlDocument *self);
+/* problems of the selected shell's stored values (HlProblem *) */
+GPtrArray           *hl_document_get_problems    (HlDocument *self);
+
+/* A field whose text cannot be read: the document keeps no value for it
+ * but must not show results.  @message NULL clears it. */
+void                 hl_document_set_input_error (HlDocument *self,
+                                                  const char *field,
+                                                  const char *message);
+void                 hl_document_clear_input_errors (HlDocument *self);
+const char          *hl_document_get_input_error (HlDocument *self,
+                                                  const char *field);
+
+/* Edits.  Successive edits with the same non-NULL @merge_key make one
+ * undo step (typing in one field). */
+void                 hl_document_edit_shell      (HlDocument          *self,
+                                                  const HlShellInputs *shell,
+                                                  const char          *merge_key);
+void                 hl_document_add_shell       (HlDocument          *self,
+                                                  const HlShellInputs *template_shell);
+void                 hl_document_duplicate_shell (HlDocument *self);
+void                 hl_document_remove_shell    (HlDocument *self);
+void                 hl_document_move_shell      (HlDocument *self,
+                                                  int         delta);
+void                 hl_document_put_material    (HlDocument       *self,
+                                                  const HlMaterial *material,
+                                                  const char       *merge_key);
+void                 hl_document_set_info        (HlDocument  *self,
+                                                  const char  *title,
+                                                  const char  *engineer,
+                                                  const char  *description,
+                                                  HlUnitSystem units);
+void                 hl_document_add_revision    (HlDocument *self,
+                                                  const char *date,
+                                                  const char *author,
+                                                  const char *text);
+
+gboolean             hl_document_can_undo        (HlDocument *self);
+gboolean             hl_document_can_redo        (HlDocument *self);
+void                 hl_document_undo            (HlDocument *self);
+void                 hl_document_redo            (HlDocument *self);
+
+G_END_DECLS

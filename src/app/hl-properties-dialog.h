@@ -1,0 +1,22 @@
+/* hl-properties-dialog.h — title, engineer, description, revision notes
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <gtk/gtk.h>
+
+#include "hl-document.h"
+
+G_BEGIN_DECLS
+
+#define HL_TYPE_PROPERTIES_DIALOG (hl_properties_dialog_get_type ())
+G_DECLARE_FINAL_TYPE (HlPropertiesDialog, hl_properties_dialog, HL, PROPERTIES_DIALOG, GtkWindow)
+
+/* Edits apply at once (and undo like any edit).  With @revisions the
+ * dialog opens on the revision notes. */
+HlPropertiesDialog *hl_properties_dialog_new (GtkWindow  *parent,
+                                              HlDocument *document,
+                                              gboolean    revisions);
+
+G_END_DECLS

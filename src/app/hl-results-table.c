@@ -1,0 +1,224 @@
+/* hl-results-table.c — the key numbers of the selected shell, copyable
+ *
+ * The rows come from hl_result_rows(), the list the summary and the
+ * report use, so the window never shows a number they do not.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-results-table"
+
+#include "hl-config.h"
+#include "hl-results-table.h"
+#include "hl-result-rows.h"
+
+#include <glib/gi18n.h>
+#include <math.h>
+#include <string.h>
+
+#define DIGITS 4
+
+struct _HlResultsTable
+{
+  GtkWidget   parent_instance;
+
+  GtkWidget  *scroller;
+  GtkGrid    *grid;
+  GtkWidget  *empty_label;
+
+  HlDocument *document;
+  GString    *text;
+};
+
+G_DEFINE_FINAL_TYPE (HlResultsTable, hl_results_table, GTK_TYPE_WIDGET)
+
+/* the figure and the list above already name the shell */
+static gboolean
+skip_row (const HlResultRow *row)
+{
+  return strcmp (row->key, "shell") == 0 || strcmp (row->key, "id") == 0;
+}
+
+static void
+row_value (const HlResultRow *row,
+           HlUnitSystem       units,
+           char             **number,
+           const char       **unit)
+{
+  if (row->kind == HL_ROW_WORD || !hl_result_ok (row->result))
+    {
+      g_autofree char *text = hl_row_format (row, units, DIGITS, FALSE);
+
+      *number = g_steal_pointer (&text);
+      *unit = "";
+      return;
+    }
+  *number = hl_format_display (hl_row_convert (row->kind, units, row->result.value), DIGITS);
+  *unit = hl_row_unit (row->kind, units);
+}
+
+static void
+clear_grid (HlResultsTable *self)
+{
+  GtkWidget *child;
+
+  while ((child = gtk_widget_get_first_child (GTK_WIDGET (self->grid))) != NULL)
+    gtk_grid_remove (self->grid, child);
+}
+
+static GtkWidget *
+cell (const char *text,
+      float       xalign,
+      const char *css)
+{
+  GtkWidget *label = gtk_label_new (text);
+
+  gtk_label_set_xalign (GTK_LABEL (label), xalign);
+  gtk_label_set_selectable (GTK_LABEL (label), FALSE);
+  if (css != NULL)
+    gtk_widget_add_css_class (label, css);
+  return label;
+}
+
+static void
+rebuild (HlResultsTable *self)
+{
+  const HlSolution *solution = hl_document_get_solution (self->document);
+  HlUnitSystem units = hl_document_get_project (self->document)->display_units;
+  g_autoptr(GArray) rows = NULL;
+  guint n = 0, half;
+
+  clear_grid (self);
+  g_string_truncate (self->text, 0);
+  gtk_widget_set_visible (self->empty_label, solution == NULL);
+  gtk_widget_set_visible (self->scroller, solution != NULL);
+  if (solution == NULL)
+    return;
+
+  rows = hl_result_rows (solution);
+  for (guint i = 0; i < rows->len; i++)
+    n += !skip_row (&g_array_index (rows, HlResultRow, i));
+  /* two column pairs use the width the canvas leaves */
+  half = (n + 1) / 2;
+  n = 0;
+  for (guint i = 0; i < rows->len; i++)
+    {
+      const HlResultRow *row = &g_array_index (rows, HlResultRow, i);
+      g_autofree char *number = NULL;
+      g_autofree char *shown = NULL;
+      const char *unit;
+      GtkWidget *name, *value;
+      int column, line;
+
+      if (skip_row (row))
+        continue;
+      row_value (row, units, &number, &unit);
+      shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
+      column = n < half ? 0 : 3;
+      line = (int) (n < half ? n : n - half);
+      name = cell (_(row->label), 0.0f, NULL);
+      value = cell (shown, 1.0f, "numeric");
+      if (row->source != NULL)
+        gtk_widget_set_tooltip_text (name, row->source);
+      gtk_grid_attach (self->grid, name, column, line, 1, 1);
+      gtk_grid_attach (self->grid, value, column + 1, line, 1, 1);
+      g_string_append_printf (self->text, "%s\t%s\t%s\n", _(row->label), number, unit);
+      n++;
+    }
+  /* a spacer column between the pairs */
+  gtk_grid_attach (self->grid, cell ("", 0.0f, NULL), 2, 0, 1, 1);
+}
+
+static void
+on_document_changed_cb (HlDocument     *document,
+                        HlResultsTable *self)
+{
+  rebuild (self);
+}
+
+static void
+hl_results_table_dispose (GObject *object)
+{
+  HlResultsTable *self = HL_RESULTS_TABLE (object);
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->document);
+  g_clear_pointer (&self->scroller, gtk_widget_unparent);
+  g_clear_pointer (&self->empty_label, gtk_widget_unparent);
+  G_OBJECT_CLASS (hl_results_table_parent_class)->dispose (object);
+}
+
+static void
+hl_results_table_finalize (GObject *object)
+{
+  HlResultsTable *self = HL_RESULTS_TABLE (object);
+
+  g_string_free (self->text, TRUE);
+  G_OBJECT_CLASS (hl_results_table_parent_class)->finalize (object);
+}
+
+static void
+hl_results_table_class_init (HlResultsTableClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->dispose = hl_results_table_dispose;
+  object_class->finalize = hl_results_table_finalize;
+  gtk_widget_class_set_layout_manager_type (widget_class, GTK_TYPE_BOX_LAYOUT);
+  gtk_widget_class_set_css_name (widget_class, "hl-results");
+  gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_GROUP);
+}
+
+static void
+hl_results_table_init (HlResultsTable *self)
+{
+  GtkLayoutManager *layout = gtk_widget_get_layout_manager (GTK_WIDGET (self));
+
+  gtk_orientable_set_orientation (GTK_ORIENTABLE (layout), GTK_ORIENTATION_VERTICAL);
+  self->text = g_string_new (NULL);
+
+  self->grid = GTK_GRID (gtk_grid_new ());
+  gtk_grid_set_column_spacing (self->grid, 12);
+  gtk_grid_set_row_spacing (self->grid, 2);
+  gtk_widget_set_margin_start (GTK_WIDGET (self->grid), 12);
+  gtk_widget_set_margin_end (GTK_WIDGET (self->grid), 12);
+  gtk_widget_set_margin_top (GTK_WIDGET (self->grid), 6);
+  gtk_widget_set_margin_bottom (GTK_WIDGET (self->grid), 6);
+  self->scroller = gtk_scrolled_window_new ();
+  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (self->scroller), GTK_POLICY_NEVER,
+                                  GTK_POLICY_AUTOMATIC);
+  gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (self->scroller), GTK_WIDGET (self->grid));
+  gtk_widget_set_vexpand (self->scroller, TRUE);
+  gtk_widget_set_parent (self->scroller, GTK_WIDGET (self));
+
+  self->empty_label = gtk_label_new (_("No results while a value is missing or wrong."));
+  gtk_widget_add_css_class (self->empty_label, "dim-label");
+  gtk_widget_set_vexpand (self->empty_label, TRUE);
+  gtk_widget_set_parent (self->empty_label, GTK_WIDGET (self));
+  gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_LABEL,
+                                  _("Results"), -1);
+}
+
+void
+hl_results_table_set_document (HlResultsTable *self,
+                               HlDocument     *document)
+{
+  g_return_if_fail (HL_IS_RESULTS_TABLE (self));
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_set_object (&self->document, document);
+  if (document != NULL)
+    {
+      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
+      rebuild (self);
+    }
+}
+
+char *
+hl_results_table_get_text (HlResultsTable *self)
+{
+  g_return_val_if_fail (HL_IS_RESULTS_TABLE (self), NULL);
+  return g_strdup (self->text->str);
+}

@@ -1,0 +1,574 @@
+/* hl-shell-editor.c — the selected shell's inputs, in groups
+ *
+ * Values the user types go to the document as soon as they read as a
+ * number with a unit; the core's checks then mark the fields that are
+ * wrong, so the window and the loader give the same reasons.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-shell-editor"
+
+#include "hl-config.h"
+#include "hl-shell-editor.h"
+#include "hl-fields.h"
+#include "hl-shell-check.h"
+
+#include <glib/gi18n.h>
+#include <string.h>
+
+struct _HlShellEditor
+{
+  GtkBox         parent_instance;
+
+  GtkEntry      *name_entry;
+  GtkDropDown   *form_dropdown;
+  GtkDropDown   *ends_dropdown;
+  GtkDropDown   *size_kind_dropdown;
+  HlQuantityRow *size_row;
+  HlQuantityRow *wall_thickness_row;
+  HlQuantityRow *corrosion_allowance_row;
+  HlQuantityRow *internal_pressure_row;
+  HlQuantityRow *external_pressure_row;
+  GtkDropDown   *material_dropdown;
+  GtkLabel      *material_note_label;
+  GtkEntry      *material_name_entry;
+  HlQuantityRow *elastic_modulus_row;
+  HlQuantityRow *poisson_ratio_row;
+  HlQuantityRow *yield_strength_row;
+  HlQuantityRow *allowable_stress_row;
+  GtkDropDown   *basis_dropdown;
+  HlQuantityRow *thin_tolerance_row;
+  GtkDropDown   *measure_dropdown;
+  HlQuantityRow *joint_efficiency_row;
+  GtkDropDown   *criterion_dropdown;
+
+  HlDocument    *document;
+  HlShellInputs  shown;       /* what the fields show; equal means no reload */
+  gboolean       has_shown;
+  GPtrArray     *material_ids; /* char *, parallel to the material dropdown */
+  guint          updating;
+};
+
+G_DEFINE_FINAL_TYPE (HlShellEditor, hl_shell_editor, GTK_TYPE_BOX)
+
+#define N_ROWS 12
+
+static void
+collect_rows (HlShellEditor *self,
+              HlQuantityRow *rows[N_ROWS])
+{
+  HlQuantityRow *all[N_ROWS] = {
+    self->size_row, self->wall_thickness_row, self->corrosion_allowance_row,
+    self->internal_pressure_row, self->external_pressure_row, self->elastic_modulus_row,
+    self->poisson_ratio_row, self->yield_strength_row, self->allowable_stress_row,
+    self->thin_tolerance_row, self->joint_efficiency_row, NULL,
+  };
+
+  memcpy (rows, all, sizeof all);
+}
+
+/* where a quantity field lives in the inputs; size has four names */
+static HlQuantity *
+quantity_slot (HlShellInputs *s,
+               const char    *field)
+{
+  HlSizeKind kind;
+
+  if (hl_size_kind_from_element (field, &kind))
+    return &s->size;
+  if (strcmp (field, "wall-thickness") == 0)
+    return &s->wall_thickness;
+  if (strcmp (field, "corrosion-allowance") == 0)
+    return &s->corrosion_allowance;
+  if (strcmp (field, "internal-pressure") == 0)
+    return &s->internal_pressure;
+  if (strcmp (field, "external-pressure") == 0)
+    return &s->external_pressure;
+  if (strcmp (field, "thin-tolerance") == 0)
+    return &s->thin_tolerance;
+  if (strcmp (field, "elastic-modulus") == 0)
+    return &s->material.elastic_modulus;
+  if (strcmp (field, "yield-strength") == 0)
+    return &s->material.yield_strength;
+  if (strcmp (field, "allowable-stress") == 0)
+    return &s->material.allowable_stress;
+  return NULL;
+}
+
+static double *
+number_slot (HlShellInputs *s,
+             const char    *field)
+{
+  if (strcmp (field, "poisson-ratio") == 0)
+    return &s->material.poisson_ratio;
+  if (strcmp (field, "joint-efficiency") == 0)
+    return &s->joint_efficiency;
+  return NULL;
+}
+
+static gboolean
+is_material_field (const char *field)
+{
+  return strcmp (field, "elastic-modulus") == 0 || strcmp (field, "poisson-ratio") == 0
+         || strcmp (field, "yield-strength") == 0 || strcmp (field, "allowable-stress") == 0;
+}
+
+static void
+set_dropdown (HlShellEditor *self,
+              GtkDropDown   *dropdown,
+              guint          index)
+{
+  self->updating++;
+  gtk_drop_down_set_selected (dropdown, index);
+  self->updating--;
+}
+
+static void
+set_entry (HlShellEditor *self,
+           GtkEntry      *entry,
+           const char    *text)
+{
+  if (g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (entry)), text) == 0)
+    return;
+  self->updating++;
+  gtk_editable_set_text (GTK_EDITABLE (entry), text);
+  self->updating--;
+}
+
+static void
+reload_materials (HlShellEditor *self)
+{
+  const HlProject *project = hl_document_get_project (self->document);
+  g_autoptr(GtkStringList) names = gtk_string_list_new (NULL);
+  guint selected = GTK_INVALID_LIST_POSITION;
+
+  g_ptr_array_set_size (self->material_ids, 0);
+  for (guint i = 0; i < hl_project_n_materials (project); i++)
+    {
+      const HlMaterial *m = hl_project_material (project, i);
+
+      gtk_string_list_append (names, m->name);
+      g_ptr_array_add (self->material_ids, g_strdup (m->id));
+    }
+  for (guint i = 0; i < hl_material_builtin_count (); i++)
+    {
+      const HlMaterial *m = hl_material_builtin (i);
+
+      gtk_string_list_append (names, m->name);
+      g_ptr_array_add (self->material_ids, g_strdup (m->id));
+    }
+  for (guint i = 0; i < self->material_ids->len; i++)
+    if (strcmp (g_ptr_array_index (self->material_ids, i), self->shown.material_ref) == 0)
+      selected = i;
+
+  self->updating++;
+  gtk_drop_down_set_model (self->material_dropdown, G_LIST_MODEL (names));
+  gtk_drop_down_set_selected (self->material_dropdown, selected);
+  self->updating--;
+}
+
+static void
+refresh_marks (HlShellEditor *self)
+{
+  GPtrArray *problems = hl_document_get_problems (self->document);
+  HlQuantityRow *rows[N_ROWS];
+
+  collect_rows (self, rows);
+  for (guint i = 0; rows[i] != NULL; i++)
+    {
+      HlQuantityRow *row = rows[i];
+      const char *field = hl_quantity_row_get_field (row);
+      const char *message = hl_document_get_input_error (self->document, field);
+
+      for (guint k = 0; message == NULL && problems != NULL && k < problems->len; k++)
+        {
+          const HlProblem *p = g_ptr_array_index (problems, k);
+
+          if (strcmp (p->field, field) == 0)
+            message = p->message;
+        }
+      hl_quantity_row_set_error (row, message);
+    }
+}
+
+static void
+reload (HlShellEditor *self)
+{
+  const HlShellInputs *shell = hl_document_get_shell (self->document);
+  const HlProject *project = hl_document_get_project (self->document);
+  const char *size_field;
+  HlQuantityRow *rows[N_ROWS];
+
+  gtk_widget_set_sensitive (GTK_WIDGET (self), shell != NULL);
+  if (shell == NULL)
+    {
+      self->has_shown = FALSE;
+      return;
+    }
+  self->shown = *shell;
+  self->has_shown = TRUE;
+
+  set_entry (self, self->name_entry, shell->name);
+  set_dropdown (self, self->form_dropdown, shell->form);
+  set_dropdown (self, self->ends_dropdown, shell->ends);
+  gtk_widget_set_sensitive (GTK_WIDGET (self->ends_dropdown), shell->form == HL_FORM_CYLINDER);
+  set_dropdown (self, self->size_kind_dropdown, shell->size_kind);
+  size_field = hl_size_kind_to_element (shell->size_kind);
+  hl_quantity_row_set_field (self->size_row, size_field);
+  {
+    g_autofree char *label = g_strdup_printf ("_%s", hl_field_label (size_field));
+
+    hl_quantity_row_set_label (self->size_row, label);
+  }
+
+  collect_rows (self, rows);
+  for (guint i = 0; rows[i] != NULL; i++)
+    {
+      const char *field = hl_quantity_row_get_field (rows[i]);
+      HlQuantity *q = quantity_slot (&self->shown, field);
+      double *d = number_slot (&self->shown, field);
+
+      hl_quantity_row_set_quantity (rows[i], q != NULL ? *q : hl_quantity_make (*d, ""));
+    }
+
+  reload_materials (self);
+  set_entry (self, self->material_name_entry, shell->material.name);
+  gtk_widget_set_visible (GTK_WIDGET (self->material_note_label),
+                          hl_project_find_material (project, shell->material_ref) == NULL
+                          && hl_material_builtin_find (shell->material_ref) != NULL);
+
+  set_dropdown (self, self->basis_dropdown, shell->thin_basis);
+  set_dropdown (self, self->measure_dropdown, shell->verdict_measure);
+  set_dropdown (self, self->criterion_dropdown, shell->sizing_criterion);
+}
+
+static void
+on_document_changed_cb (HlDocument    *document,
+                        HlShellEditor *self)
+{
+  const HlShellInputs *shell = hl_document_get_shell (document);
+
+  /* an edit made here already shows; reloading would move the cursor */
+  if (shell == NULL || !self->has_shown || !hl_shell_inputs_equal (shell, &self->shown))
+    reload (self);
+  refresh_marks (self);
+}
+
+static void
+commit_shell (HlShellEditor       *self,
+              const HlShellInputs *shell,
+              const char          *field)
+{
+  g_autofree char *key = NULL;
+
+  if (field != NULL)
+    key = g_strdup_printf ("%s:%s", shell->id, field);
+  self->shown = *shell;
+  hl_document_edit_shell (self->document, shell, key);
+}
+
+static char *
+new_material_id (const HlProject *project)
+{
+  for (guint n = 1;; n++)
+    {
+      char *id = g_strdup_printf ("material-%u", n);
+
+      if (hl_project_find_material (project, id) == NULL && hl_material_builtin_find (id) == NULL)
+        return id;
+      g_free (id);
+    }
+}
+
+/* A built-in material is never changed: its first edit makes a project
+ * material, so the built-in list keeps its typical values. */
+static void
+commit_material (HlShellEditor    *self,
+                 const HlMaterial *material,
+                 const char       *field)
+{
+  const HlProject *project = hl_document_get_project (self->document);
+  HlMaterial m = *material;
+  g_autofree char *key = g_strdup_printf ("material:%s:%s", self->shown.id, field);
+
+  if (hl_project_find_material (project, m.id) == NULL)
+    {
+      g_autofree char *id = new_material_id (project);
+
+      g_strlcpy (m.id, id, sizeof m.id);
+      if (strcmp (field, "name") != 0)
+        {
+          /* TRANSLATORS: a built-in material copied to be edited */
+          g_autofree char *name = g_strdup_printf (_("%s, edited"), material->name);
+
+          g_strlcpy (m.name, name, sizeof m.name);
+        }
+    }
+  self->shown.material = m;
+  g_strlcpy (self->shown.material_ref, m.id, sizeof self->shown.material_ref);
+  hl_document_put_material (self->document, &m, key);
+}
+
+static void
+row_edited (HlShellEditor *self,
+            HlQuantityRow *row)
+{
+  g_autoptr(GError) error = NULL;
+  const char *field = hl_quantity_row_get_field (row);
+  HlShellInputs shell;
+  HlQuantity q;
+  HlQuantity *qslot;
+  double *dslot;
+
+  if (self->updating > 0 || self->document == NULL || !self->has_shown)
+    return;
+  if (!hl_quantity_row_parse (row, &q, &error))
+    {
+      hl_document_set_input_error (self->document, field, error->message);
+      return;
+    }
+  hl_document_set_input_error (self->document, field, NULL);
+
+  shell = self->shown;
+  qslot = quantity_slot (&shell, field);
+  dslot = number_slot (&shell, field);
+  if (qslot != NULL)
+    *qslot = q;
+  else if (dslot != NULL)
+    *dslot = q.value;
+  if (is_material_field (field))
+    commit_material (self, &shell.material, field);
+  else
+    commit_shell (self, &shell, field);
+}
+
+#define ROW_CALLBACK(name) \
+  static void on_##name##_edited_cb (HlQuantityRow *row, HlShellEditor *self) { row_edited (self, row); }
+ROW_CALLBACK (size_row)
+ROW_CALLBACK (wall_thickness_row)
+ROW_CALLBACK (corrosion_allowance_row)
+ROW_CALLBACK (internal_pressure_row)
+ROW_CALLBACK (external_pressure_row)
+ROW_CALLBACK (elastic_modulus_row)
+ROW_CALLBACK (poisson_ratio_row)
+ROW_CALLBACK (yield_strength_row)
+ROW_CALLBACK (allowable_stress_row)
+ROW_CALLBACK (thin_tolerance_row)
+ROW_CALLBACK (joint_efficiency_row)
+#undef ROW_CALLBACK
+
+static void
+choices_changed (HlShellEditor *self)
+{
+  HlShellInputs shell;
+
+  if (self->updating > 0 || self->document == NULL || !self->has_shown)
+    return;
+  shell = self->shown;
+  shell.form = (HlForm) gtk_drop_down_get_selected (self->form_dropdown);
+  shell.ends = (HlEnds) gtk_drop_down_get_selected (self->ends_dropdown);
+  shell.size_kind = (HlSizeKind) gtk_drop_down_get_selected (self->size_kind_dropdown);
+  shell.thin_basis = (HlRadiusBasis) gtk_drop_down_get_selected (self->basis_dropdown);
+  shell.verdict_measure = (HlVerdictMeasure) gtk_drop_down_get_selected (self->measure_dropdown);
+  shell.sizing_criterion = (HlCriterion) gtk_drop_down_get_selected (self->criterion_dropdown);
+  gtk_widget_set_sensitive (GTK_WIDGET (self->ends_dropdown), shell.form == HL_FORM_CYLINDER);
+  /* the size number is kept; only its meaning changes */
+  hl_document_clear_input_errors (self->document);
+  commit_shell (self, &shell, NULL);
+  /* the size row's label follows the size kind */
+  reload (self);
+  refresh_marks (self);
+}
+
+#define CHOICE_CALLBACK(name) \
+  static void on_##name##_selected_cb (GObject *o, GParamSpec *p, HlShellEditor *self) { choices_changed (self); }
+CHOICE_CALLBACK (form_dropdown)
+CHOICE_CALLBACK (ends_dropdown)
+CHOICE_CALLBACK (size_kind_dropdown)
+CHOICE_CALLBACK (basis_dropdown)
+CHOICE_CALLBACK (measure_dropdown)
+CHOICE_CALLBACK (criterion_dropdown)
+#undef CHOICE_CALLBACK
+
+static void
+on_material_dropdown_selected_cb (GObject       *dropdown,
+                                  GParamSpec    *pspec,
+                                  HlShellEditor *self)
+{
+  const HlProject *project;
+  const HlMaterial *m;
+  HlShellInputs shell;
+  guint i;
+  const char *id;
+
+  if (self->updating > 0 || self->document == NULL || !self->has_shown)
+    return;
+  i = gtk_drop_down_get_selected (self->material_dropdown);
+  if (i >= self->material_ids->len)
+    return;
+  id = g_ptr_array_index (self->material_ids, i);
+  project = hl_document_get_project (self->document);
+  m = hl_project_find_material (project, id);
+  if (m == NULL)
+    m = hl_material_builtin_find (id);
+  if (m == NULL)
+    return;
+  shell = self->shown;
+  shell.material = *m;
+  g_strlcpy (shell.material_ref, m->id, sizeof shell.material_ref);
+  commit_shell (self, &shell, NULL);
+  reload (self);
+  refresh_marks (self);
+}
+
+static void
+on_name_entry_changed_cb (GtkEntry      *entry,
+                          HlShellEditor *self)
+{
+  HlShellInputs shell;
+
+  if (self->updating > 0 || self->document == NULL || !self->has_shown)
+    return;
+  shell = self->shown;
+  g_strlcpy (shell.name, gtk_editable_get_text (GTK_EDITABLE (entry)), sizeof shell.name);
+  commit_shell (self, &shell, "name");
+}
+
+static void
+on_material_name_entry_changed_cb (GtkEntry      *entry,
+                                   HlShellEditor *self)
+{
+  HlMaterial m;
+
+  if (self->updating > 0 || self->document == NULL || !self->has_shown)
+    return;
+  m = self->shown.material;
+  g_strlcpy (m.name, gtk_editable_get_text (GTK_EDITABLE (entry)), sizeof m.name);
+  commit_material (self, &m, "name");
+  reload_materials (self);
+}
+
+static void
+hl_shell_editor_dispose (GObject *object)
+{
+  HlShellEditor *self = HL_SHELL_EDITOR (object);
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->document);
+  gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_SHELL_EDITOR);
+  G_OBJECT_CLASS (hl_shell_editor_parent_class)->dispose (object);
+}
+
+static void
+hl_shell_editor_finalize (GObject *object)
+{
+  HlShellEditor *self = HL_SHELL_EDITOR (object);
+
+  g_clear_pointer (&self->material_ids, g_ptr_array_unref);
+  G_OBJECT_CLASS (hl_shell_editor_parent_class)->finalize (object);
+}
+
+static void
+hl_shell_editor_class_init (HlShellEditorClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->dispose = hl_shell_editor_dispose;
+  object_class->finalize = hl_shell_editor_finalize;
+
+  g_type_ensure (HL_TYPE_QUANTITY_ROW);
+  gtk_widget_class_set_template_from_resource (widget_class, "/org/hoopline/Hoopline/hl-shell-editor.ui");
+#define CHILD(name) gtk_widget_class_bind_template_child (widget_class, HlShellEditor, name)
+  CHILD (name_entry);
+  CHILD (form_dropdown);
+  CHILD (ends_dropdown);
+  CHILD (size_kind_dropdown);
+  CHILD (size_row);
+  CHILD (wall_thickness_row);
+  CHILD (corrosion_allowance_row);
+  CHILD (internal_pressure_row);
+  CHILD (external_pressure_row);
+  CHILD (material_dropdown);
+  CHILD (material_note_label);
+  CHILD (material_name_entry);
+  CHILD (elastic_modulus_row);
+  CHILD (poisson_ratio_row);
+  CHILD (yield_strength_row);
+  CHILD (allowable_stress_row);
+  CHILD (basis_dropdown);
+  CHILD (thin_tolerance_row);
+  CHILD (measure_dropdown);
+  CHILD (joint_efficiency_row);
+  CHILD (criterion_dropdown);
+#undef CHILD
+#define CALLBACK(name) gtk_widget_class_bind_template_callback (widget_class, name)
+  CALLBACK (on_size_row_edited_cb);
+  CALLBACK (on_wall_thickness_row_edited_cb);
+  CALLBACK (on_corrosion_allowance_row_edited_cb);
+  CALLBACK (on_internal_pressure_row_edited_cb);
+  CALLBACK (on_external_pressure_row_edited_cb);
+  CALLBACK (on_elastic_modulus_row_edited_cb);
+  CALLBACK (on_poisson_ratio_row_edited_cb);
+  CALLBACK (on_yield_strength_row_edited_cb);
+  CALLBACK (on_allowable_stress_row_edited_cb);
+  CALLBACK (on_thin_tolerance_row_edited_cb);
+  CALLBACK (on_joint_efficiency_row_edited_cb);
+  CALLBACK (on_form_dropdown_selected_cb);
+  CALLBACK (on_ends_dropdown_selected_cb);
+  CALLBACK (on_size_kind_dropdown_selected_cb);
+  CALLBACK (on_basis_dropdown_selected_cb);
+  CALLBACK (on_measure_dropdown_selected_cb);
+  CALLBACK (on_criterion_dropdown_selected_cb);
+  CALLBACK (on_material_dropdown_selected_cb);
+  CALLBACK (on_name_entry_changed_cb);
+  CALLBACK (on_material_name_entry_changed_cb);
+#undef CALLBACK
+}
+
+static void
+hl_shell_editor_init (HlShellEditor *self)
+{
+  self->material_ids = g_ptr_array_new_with_free_func (g_free);
+  gtk_widget_init_template (GTK_WIDGET (self));
+}
+
+void
+hl_shell_editor_set_document (HlShellEditor *self,
+                              HlDocument    *document)
+{
+  g_return_if_fail (HL_IS_SHELL_EDITOR (self));
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_set_object (&self->document, document);
+  self->has_shown = FALSE;
+  if (document != NULL)
+    {
+      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
+      on_document_changed_cb (document, self);
+    }
+}
+
+void
+hl_shell_editor_focus_name (HlShellEditor *self)
+{
+  g_return_if_fail (HL_IS_SHELL_EDITOR (self));
+  gtk_widget_grab_focus (GTK_WIDGET (self->name_entry));
+}
+
+HlQuantityRow *
+hl_shell_editor_get_row (HlShellEditor *self,
+                         const char    *field)
+{
+  HlQuantityRow *rows[N_ROWS];
+
+  g_return_val_if_fail (HL_IS_SHELL_EDITOR (self), NULL);
+
+  collect_rows (self, rows);
+  for (guint i = 0; rows[i] != NULL; i++)
+    if (g_strcmp0 (hl_quantity_row_get_field (rows[i]), field) == 0)
+      return rows[i];
+  return NULL;
+}

@@ -1,0 +1,24 @@
+/* hl-shell-editor.h — the selected shell's inputs, in groups
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <gtk/gtk.h>
+
+#include "hl-document.h"
+#include "hl-quantity-row.h"
+
+G_BEGIN_DECLS
+
+#define HL_TYPE_SHELL_EDITOR (hl_shell_editor_get_type ())
+G_DECLARE_FINAL_TYPE (HlShellEditor, hl_shell_editor, HL, SHELL_EDITOR, GtkBox)
+
+void           hl_shell_editor_set_document (HlShellEditor *self,
+                                             HlDocument    *document);
+void           hl_shell_editor_focus_name   (HlShellEditor *self);
+/* the row of @field ("wall-thickness"), for tests and focus */
+HlQuantityRow *hl_shell_editor_get_row      (HlShellEditor *self,
+                                             const char    *field);
+
+G_END_DECLS

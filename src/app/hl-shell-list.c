@@ -1,0 +1,128 @@
+/* hl-shell-list.c — the project's shells; choosing one selects it
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-shell-list"
+
+#include "hl-config.h"
+#include "hl-shell-list.h"
+
+#include <glib/gi18n.h>
+
+struct _HlShellList
+{
+  GtkBox      parent_instance;
+
+  GtkListBox *list_box;
+
+  HlDocument *document;
+  guint       updating;
+};
+
+G_DEFINE_FINAL_TYPE (HlShellList, hl_shell_list, GTK_TYPE_BOX)
+
+static GtkWidget *
+make_row (const HlShellInputs *shell)
+{
+  GtkWidget *box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
+  GtkWidget *name = gtk_label_new (shell->name[0] != '\0' ? shell->name : shell->id);
+  GtkWidget *detail = gtk_label_new (shell->form == HL_FORM_SPHERE ? _("Sphere") : _("Cylinder"));
+
+  gtk_label_set_xalign (GTK_LABEL (name), 0);
+  gtk_label_set_ellipsize (GTK_LABEL (name), PANGO_ELLIPSIZE_END);
+  gtk_label_set_xalign (GTK_LABEL (detail), 0);
+  gtk_widget_add_css_class (detail, "dim-label");
+  gtk_widget_add_css_class (detail, "caption");
+  gtk_box_append (GTK_BOX (box), name);
+  gtk_box_append (GTK_BOX (box), detail);
+  gtk_widget_add_css_class (box, "hl-shell-row");
+  return box;
+}
+
+static void
+rebuild (HlShellList *self)
+{
+  const HlProject *project = hl_document_get_project (self->document);
+  guint selected = hl_document_get_selected (self->document);
+  GtkWidget *child;
+
+  self->updating++;
+  while ((child = gtk_widget_get_first_child (GTK_WIDGET (self->list_box))) != NULL)
+    gtk_list_box_remove (self->list_box, child);
+  for (guint i = 0; i < hl_project_n_shells (project); i++)
+    {
+      const HlShellInputs *shell = hl_project_shell (project, i);
+      GtkWidget *row = gtk_list_box_row_new ();
+
+      gtk_list_box_row_set_child (GTK_LIST_BOX_ROW (row), make_row (shell));
+      gtk_accessible_update_property (GTK_ACCESSIBLE (row), GTK_ACCESSIBLE_PROPERTY_LABEL,
+                                      shell->name, -1);
+      gtk_list_box_append (self->list_box, row);
+    }
+  gtk_list_box_select_row (self->list_box, gtk_list_box_get_row_at_index (self->list_box, (int) selected));
+  self->updating--;
+}
+
+static void
+on_document_changed_cb (HlDocument  *document,
+                        HlShellList *self)
+{
+  /* a rebuild per change is cheap: a project has a handful of shells */
+  rebuild (self);
+}
+
+static void
+on_list_box_row_selected_cb (GtkListBox    *list_box,
+                             GtkListBoxRow *row,
+                             HlShellList   *self)
+{
+  if (self->updating > 0 || row == NULL || self->document == NULL)
+    return;
+  hl_document_set_selected (self->document, (guint) gtk_list_box_row_get_index (row));
+}
+
+static void
+hl_shell_list_dispose (GObject *object)
+{
+  HlShellList *self = HL_SHELL_LIST (object);
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->document);
+  gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_SHELL_LIST);
+  G_OBJECT_CLASS (hl_shell_list_parent_class)->dispose (object);
+}
+
+static void
+hl_shell_list_class_init (HlShellListClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->dispose = hl_shell_list_dispose;
+  gtk_widget_class_set_template_from_resource (widget_class, "/org/hoopline/Hoopline/hl-shell-list.ui");
+  gtk_widget_class_bind_template_child (widget_class, HlShellList, list_box);
+  gtk_widget_class_bind_template_callback (widget_class, on_list_box_row_selected_cb);
+}
+
+static void
+hl_shell_list_init (HlShellList *self)
+{
+  gtk_widget_init_template (GTK_WIDGET (self));
+}
+
+void
+hl_shell_list_set_document (HlShellList *self,
+                            HlDocument  *document)
+{
+  g_return_if_fail (HL_IS_SHELL_LIST (self));
+
+  if (self->document != NULL)
+    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_set_object (&self->document, document);
+  if (document != NULL)
+    {
+      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
+      rebuild (self);
+    }
+}

@@ -1,0 +1,40 @@
+/* hl-window.h — the main window: sidebar, canvas, results
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <gtk/gtk.h>
+
+#include "hl-canvas.h"
+#include "hl-document.h"
+#include "hl-results-table.h"
+#include "hl-shell-editor.h"
+
+G_BEGIN_DECLS
+
+#define HL_TYPE_WINDOW (hl_window_get_type ())
+G_DECLARE_FINAL_TYPE (HlWindow, hl_window, HL, WINDOW, GtkApplicationWindow)
+
+HlWindow       *hl_window_new               (GtkApplication *application);
+
+HlDocument     *hl_window_get_document      (HlWindow *self);
+/* Loads @file here; a bad file leaves the project as it was and says
+ * why in the window.  Returns FALSE then. */
+gboolean        hl_window_load_file         (HlWindow *self,
+                                             GFile    *file);
+/* no file, no edits: a new window may reuse it */
+gboolean        hl_window_is_pristine       (HlWindow *self);
+gboolean        hl_window_shows_file        (HlWindow *self,
+                                             GFile    *file);
+
+/* For tests: the parts and the state a person would look at. */
+HlShellEditor  *hl_window_get_shell_editor  (HlWindow *self);
+HlResultsTable *hl_window_get_results_table (HlWindow *self);
+HlCanvas       *hl_window_get_canvas        (HlWindow *self);
+/* the unsaved-changes question while it is open, else NULL */
+GtkWidget      *hl_window_get_question      (HlWindow *self);
+/* the message shown in the info bar, or NULL */
+const char     *hl_window_get_message       (HlWindow *self);
+
+G_END_DECLS

@@ -1,0 +1,475 @@
+/* test-window.c — the real window, driven as a person would drive it
+ *
+ * Runs under a (virtual) display.  Each test builds a fresh window on the
+ * demo project, changes fields through their entries and actions, lets
+ * GTK run until idle and then reads what the window shows.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "test-window"
+
+#include "hl-config.h"
+#include "hl-application.h"
+#include "hl-project-file.h"
+#include "hl-shell-check.h"
+#include "hl-window.h"
+
+#include <glib/gstdio.h>
+#include <stdio.h>
+#include <locale.h>
+#include <math.h>
+#include <string.h>
+
+static HlApplication *app;
+
+static void
+iterate (void)
+{
+  while (g_main_context_pending (NULL))
+    g_main_context_iteration (NULL, FALSE);
+}
+
+static gboolean
+timeout_cb (gpointer data)
+{
+  *(gboolean *) data = TRUE;
+  return G_SOURCE_REMOVE;
+}
+
+/* runs the main loop for @ms so that layout and drawing happen */
+static void
+run_for (guint ms)
+{
+  gboolean done = FALSE;
+
+  g_timeout_add (ms, timeout_cb, &done);
+  while (!done)
+    g_main_context_iteration (NULL, TRUE);
+  iterate ();
+}
+
+static char *
+demo_path (void)
+{
+  const char *src = g_getenv ("HL_SOURCE_DIR");
+
+  g_assert_nonnull (src);
+  return g_build_filename (src, "data", "examples", "demo.hoop", NULL);
+}
+
+static HlWindow *
+open_demo (void)
+{
+  g_autofree char *path = demo_path ();
+  g_autoptr(GFile) file = g_file_new_for_path (path);
+  HlWindow *window = hl_window_new (GTK_APPLICATION (app));
+
+  g_assert_true (hl_window_load_file (window, file));
+  gtk_window_present (GTK_WINDOW (window));
+  iterate ();
+  return window;
+}
+
+/* closes without the unsaved-changes question */
+static void
+discard_window (HlWindow *window)
+{
+  gtk_window_destroy (GTK_WINDOW (window));
+  iterate ();
+}
+
+static HlQuantityRow *
+row (HlWindow   *window,
+     const char *field)
+{
+  HlQuantityRow *r = hl_shell_editor_get_row (hl_window_get_shell_editor (window), field);
+
+  g_assert_nonnull (r);
+  return r;
+}
+
+static void
+type_into (HlWindow   *window,
+           const char *field,
+           const char *text)
+{
+  gtk_editable_set_text (hl_quantity_row_get_entry (row (window, field)), text);
+  iterate ();
+}
+
+static const HlSolution *
+solution (HlWindow *window)
+{
+  return hl_document_get_solution (hl_window_get_document (window));
+}
+
+static void
+activate (HlWindow   *window,
+          const char *action,
+          GVariant   *param)
+{
+  g_assert_true (g_action_group_get_action_enabled (G_ACTION_GROUP (window), action));
+  g_action_group_activate_action (G_ACTION_GROUP (window), action, param);
+  iterate ();
+}
+
+/* The demo's air receiver: ID 1200 mm, t 10 mm, c 1.5 mm, 11 bar. */
+static void
+test_demo_edit_changes_results (void)
+{
+  HlWindow *window = open_demo ();
+  const HlSolution *s;
+  g_autofree char *before = NULL;
+  g_autofree char *after = NULL;
+  double a, t, r_mean;
+
+  s = solution (window);
+  g_assert_nonnull (s);
+  before = hl_results_table_get_text (hl_window_get_results_table (window));
+  g_assert_nonnull (strstr (before, "Thin-wall hoop stress\t"));
+
+  type_into (window, "wall-thickness", "12");
+  s = solution (window);
+  g_assert_nonnull (s);
+  /* thin-wall hoop stress p R / t on the mean radius of the corroded
+   * wall (membrane formula, common practice): a = 600 + 1.5 mm,
+   * t = 12 - 1.5 mm, p = 11 bar = 1.1 MPa */
+  a = 0.6015;
+  t = 0.0105;
+  r_mean = a + t / 2;
+  g_assert_cmpfloat_with_epsilon (s->t, t, 1e-12);
+  g_assert_cmpfloat_with_epsilon (s->thin_hoop.value, 1.1e6 * r_mean / t, 1e-6 * 1.1e6 * r_mean / t);
+  after = hl_results_table_get_text (hl_window_get_results_table (window));
+  g_assert_cmpstr (before, !=, after);
+  g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
+  discard_window (window);
+}
+
+static void
+test_bad_value_is_marked (void)
+{
+  HlWindow *window = open_demo ();
+  HlQuantityRow *thickness = row (window, "wall-thickness");
+  GtkWidget *entry = GTK_WIDGET (hl_quantity_row_get_entry (thickness));
+  g_autofree char *text = NULL;
+
+  type_into (window, "wall-thickness", "ten");
+  g_assert_true (gtk_widget_has_css_class (entry, "error"));
+  g_assert_null (solution (window));
+  g_assert_nonnull (hl_document_get_problem_text (hl_window_get_document (window)));
+  text = hl_results_table_get_text (hl_window_get_results_table (window));
+  g_assert_cmpstr (text, ==, "");
+  g_assert_false (g_action_group_get_action_enabled (G_ACTION_GROUP (window), "export"));
+
+  /* reads as a number but no wall can be negative (common practice) */
+  type_into (window, "wall-thickness", "-3");
+  g_assert_true (gtk_widget_has_css_class (entry, "error"));
+  g_assert_null (solution (window));
+
+  /* the allowance cannot take the whole wall (common practice) */
+  type_into (window, "wall-thickness", "1");
+  g_assert_null (solution (window));
+  g_assert_true (hl_quantity_row_has_error (row (window, "corrosion-allowance")));
+
+  type_into (window, "wall-thickness", "10");
+  g_assert_false (gtk_widget_has_css_class (entry, "error"));
+  g_assert_false (hl_quantity_row_has_error (row (window, "corrosion-allowance")));
+  g_assert_nonnull (solution (window));
+  discard_window (window);
+}
+
+static void
+test_unit_change_keeps_quantity (void)
+{
+  HlWindow *window = open_demo ();
+  HlQuantityRow *thickness = row (window, "wall-thickness");
+  GtkDropDown *units = hl_quantity_row_get_unit_dropdown (thickness);
+  const char *const *names = hl_unit_names (HL_KIND_LENGTH);
+  const HlShellInputs *shell;
+  guint inch = 0;
+
+  for (guint i = 0; names[i] != NULL; i++)
+    if (strcmp (names[i], "in") == 0)
+      inch = i;
+  g_assert_cmpuint (inch, >, 0);
+  gtk_drop_down_set_selected (units, inch);
+  iterate ();
+  shell = hl_document_get_shell (hl_window_get_document (window));
+  g_assert_cmpstr (shell->wall_thickness.unit, ==, "in");
+  /* 1 in = 25.4 mm exactly (NIST SP 811): 10 mm = 0.3937007874 in */
+  g_assert_cmpfloat_with_epsilon (shell->wall_thickness.value, 10.0 / 25.4, 1e-9);
+  g_assert_cmpfloat_with_epsilon (hl_quantity_si (shell->wall_thickness, HL_KIND_LENGTH), 0.010, 1e-12);
+
+  /* a unit typed with the number is taken too */
+  type_into (window, "internal-pressure", "1.2 MPa");
+  shell = hl_document_get_shell (hl_window_get_document (window));
+  g_assert_cmpstr (shell->internal_pressure.unit, ==, "MPa");
+  g_assert_cmpfloat (shell->internal_pressure.value, ==, 1.2);
+  discard_window (window);
+}
+
+static void
+test_undo_redo (void)
+{
+  HlWindow *window = open_demo ();
+  HlDocument *doc = hl_window_get_document (window);
+
+  g_assert_false (g_action_group_get_action_enabled (G_ACTION_GROUP (window), "undo"));
+  /* typing "1" then "12" in one field is one step */
+  type_into (window, "wall-thickness", "1");
+  type_into (window, "wall-thickness", "12");
+  g_assert_cmpfloat (hl_document_get_shell (doc)->wall_thickness.value, ==, 12);
+  activate (window, "undo", NULL);
+  g_assert_cmpfloat (hl_document_get_shell (doc)->wall_thickness.value, ==, 10);
+  g_assert_false (hl_document_get_modified (doc));
+  g_assert_cmpstr (gtk_editable_get_text (hl_quantity_row_get_entry (row (window, "wall-thickness"))), ==, "10");
+  activate (window, "redo", NULL);
+  g_assert_cmpfloat (hl_document_get_shell (doc)->wall_thickness.value, ==, 12);
+  g_assert_true (hl_document_get_modified (doc));
+  discard_window (window);
+}
+
+static void
+test_add_remove_shell (void)
+{
+  HlWindow *window = open_demo ();
+  HlDocument *doc = hl_window_get_document (window);
+  const HlProject *project = hl_document_get_project (doc);
+
+  g_assert_cmpuint (hl_project_n_shells (project), ==, 3);
+  activate (window, "shell-add", NULL);
+  project = hl_document_get_project (doc);
+  g_assert_cmpuint (hl_project_n_shells (project), ==, 4);
+  g_assert_cmpuint (hl_document_get_selected (doc), ==, 3);
+  g_assert_nonnull (solution (window));
+  activate (window, "shell-duplicate", NULL);
+  g_assert_cmpuint (hl_project_n_shells (hl_document_get_project (doc)), ==, 5);
+  activate (window, "shell-up", NULL);
+  g_assert_cmpuint (hl_document_get_selected (doc), ==, 3);
+  for (int i = 0; i < 4; i++)
+    activate (window, "shell-remove", NULL);
+  g_assert_cmpuint (hl_project_n_shells (hl_document_get_project (doc)), ==, 1);
+  /* the last shell stays */
+  g_assert_false (g_action_group_get_action_enabled (G_ACTION_GROUP (window), "shell-remove"));
+  activate (window, "undo", NULL);
+  g_assert_cmpuint (hl_project_n_shells (hl_document_get_project (doc)), ==, 2);
+  discard_window (window);
+}
+
+static void
+test_save_and_reopen (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("hl-ui-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "saved.hoop", NULL);
+  g_autoptr(GFile) file = g_file_new_for_path (path);
+  HlWindow *window = open_demo ();
+  HlWindow *again;
+  HlDocument *doc = hl_window_get_document (window);
+
+  type_into (window, "wall-thickness", "12.5");
+  activate (window, "save-to", g_variant_new_string (path));
+  g_assert_false (hl_document_get_modified (doc));
+  g_assert_true (hl_window_shows_file (window, file));
+
+  again = hl_window_new (GTK_APPLICATION (app));
+  g_assert_true (hl_window_load_file (again, file));
+  g_assert_true (hl_project_equal (hl_document_get_project (doc),
+                                   hl_document_get_project (hl_window_get_document (again))));
+  g_assert_cmpfloat (hl_document_get_shell (hl_window_get_document (again))->wall_thickness.value, ==, 12.5);
+  discard_window (again);
+  discard_window (window);
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+static void
+test_failed_save_keeps_modified (void)
+{
+  HlWindow *window = open_demo ();
+  HlDocument *doc = hl_window_get_document (window);
+
+  type_into (window, "wall-thickness", "11");
+  /* a folder that does not exist cannot take the file */
+  g_action_group_activate_action (G_ACTION_GROUP (window), "save-to",
+                                  g_variant_new_string ("/nonexistent-hoopline-dir/x.hoop"));
+  iterate ();
+  g_assert_true (hl_document_get_modified (doc));
+  discard_window (window);
+}
+
+static void
+test_unsaved_question (void)
+{
+  HlWindow *window = open_demo ();
+  GtkWidget *question;
+
+  /* unmodified: nothing to ask */
+  type_into (window, "wall-thickness", "11");
+  gtk_window_close (GTK_WINDOW (window));
+  iterate ();
+  question = hl_window_get_question (window);
+  g_assert_nonnull (question);
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (window)));
+  gtk_dialog_response (GTK_DIALOG (question), GTK_RESPONSE_CANCEL);
+  iterate ();
+  g_assert_null (hl_window_get_question (window));
+  g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
+
+  /* the same question guards opening another project */
+  activate (window, "new", NULL);
+  g_assert_nonnull (hl_window_get_question (window));
+  gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_REJECT);
+  iterate ();
+  g_assert_null (hl_document_get_file (hl_window_get_document (window)));
+  g_assert_false (hl_document_get_modified (hl_window_get_document (window)));
+
+  {
+    GtkWidget *w = GTK_WIDGET (window);
+
+    g_object_add_weak_pointer (G_OBJECT (w), (gpointer *) &w);
+    gtk_window_close (GTK_WINDOW (window));
+    iterate ();
+    /* nothing to lose now: closed without a question */
+    g_assert_null (w);
+  }
+}
+
+static void
+test_export_from_window (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("hl-ui-XXXXXX", NULL);
+  g_autofree char *csv = g_build_filename (dir, "table.csv", NULL);
+  g_autofree char *svg = g_build_filename (dir, "figure.svg", NULL);
+  g_autofree char *bad = g_build_filename (dir, "figure.xyz", NULL);
+  g_autofree char *contents = NULL;
+  HlWindow *window = open_demo ();
+
+  activate (window, "export-to", g_variant_new ("(ss)", csv, ""));
+  g_assert_true (g_file_get_contents (csv, &contents, NULL, NULL));
+  /* one line per point through the wall, and a header */
+  g_assert_cmpuint (strlen (contents), >, 0);
+  g_clear_pointer (&contents, g_free);
+
+  activate (window, "export-to", g_variant_new ("(ss)", svg, "842x595"));
+  if (g_file_get_contents (svg, &contents, NULL, NULL))
+    g_assert_nonnull (strstr (contents, "<svg"));
+  else
+    g_test_message ("SVG export not available: %s", hl_window_get_message (window));
+
+  activate (window, "export-to", g_variant_new ("(ss)", bad, ""));
+  g_assert_false (g_file_test (bad, G_FILE_TEST_EXISTS));
+  g_assert_nonnull (hl_window_get_message (window));
+
+  discard_window (window);
+  g_unlink (csv);
+  g_unlink (svg);
+  g_rmdir (dir);
+}
+
+static void
+test_bad_file_leaves_project (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("hl-ui-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "broken.hoop", NULL);
+  g_autoptr(GFile) file = g_file_new_for_path (path);
+  HlWindow *window = open_demo ();
+  g_autoptr(HlProject) before = hl_project_copy (hl_document_get_project (hl_window_get_document (window)));
+
+  g_assert_true (g_file_set_contents (path, "<hoopline-project format=\"1\"><shell>", -1, NULL));
+  g_assert_false (hl_window_load_file (window, file));
+  g_assert_nonnull (hl_window_get_message (window));
+  g_assert_nonnull (strstr (hl_window_get_message (window), "broken.hoop"));
+  g_assert_true (hl_project_equal (before, hl_document_get_project (hl_window_get_document (window))));
+  discard_window (window);
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+static void
+test_canvas_draws (void)
+{
+  HlWindow *window = open_demo ();
+  HlCanvas *canvas = hl_window_get_canvas (window);
+  guint drawn;
+
+  run_for (300);
+  drawn = hl_canvas_get_n_draws (canvas);
+  g_assert_cmpuint (drawn, >, 0);
+  g_assert_cmpint (gtk_widget_get_width (GTK_WIDGET (canvas)), >, 300);
+  type_into (window, "internal-pressure", "12");
+  run_for (100);
+  g_assert_cmpuint (hl_canvas_get_n_draws (canvas), >, drawn);
+  discard_window (window);
+}
+
+/* Under a German locale the window reads and writes decimal commas
+ * (common practice there); the file keeps C-locale numbers. */
+static void
+test_decimal_comma (void)
+{
+  g_autofree char *old = g_strdup (setlocale (LC_NUMERIC, NULL));
+  HlWindow *window;
+  g_autofree char *text = NULL;
+
+  if (setlocale (LC_NUMERIC, "de_DE.UTF-8") == NULL)
+    {
+      g_test_skip ("locale de_DE.UTF-8 is not installed");
+      return;
+    }
+  window = open_demo ();
+  type_into (window, "wall-thickness", "10,5");
+  g_assert_cmpfloat (hl_document_get_shell (hl_window_get_document (window))->wall_thickness.value, ==, 10.5);
+  text = hl_results_table_get_text (hl_window_get_results_table (window));
+  g_assert_nonnull (strchr (text, ','));
+  {
+    g_autofree char *xml = hl_project_to_xml (hl_document_get_project (hl_window_get_document (window)));
+
+    g_assert_nonnull (strstr (xml, ">10.5<"));
+  }
+  discard_window (window);
+  setlocale (LC_NUMERIC, old);
+}
+
+int
+main (int    argc,
+      char **argv)
+{
+  g_autoptr(GError) error = NULL;
+  int status;
+
+  setlocale (LC_ALL, "C.UTF-8");
+  g_test_init (&argc, &argv, NULL);
+  if (!gtk_init_check ())
+    {
+      /* CI runs these under Xvfb; a run without any display cannot test a window */
+      printf ("1..0 # SKIP no display\n");
+      return 0;
+    }
+  app = hl_application_new (G_APPLICATION_NON_UNIQUE);
+  {
+    /* a test machine may have no session bus, and GTK warns about it at
+     * start-up; the window needs none */
+    GLogLevelFlags fatal = g_log_set_always_fatal (G_LOG_FATAL_MASK);
+
+    if (!g_application_register (G_APPLICATION (app), NULL, &error))
+      g_error ("cannot register the application: %s", error->message);
+    g_log_set_always_fatal (fatal);
+  }
+  /* startup has run: actions, accelerators, style */
+
+  g_test_add_func ("/window/demo-edit-changes-results", test_demo_edit_changes_results);
+  g_test_add_func ("/window/bad-value-is-marked", test_bad_value_is_marked);
+  g_test_add_func ("/window/unit-change-keeps-quantity", test_unit_change_keeps_quantity);
+  g_test_add_func ("/window/undo-redo", test_undo_redo);
+  g_test_add_func ("/window/add-remove-shell", test_add_remove_shell);
+  g_test_add_func ("/window/save-and-reopen", test_save_and_reopen);
+  g_test_add_func ("/window/failed-save-keeps-modified", test_failed_save_keeps_modified);
+  g_test_add_func ("/window/unsaved-question", test_unsaved_question);
+  g_test_add_func ("/window/export", test_export_from_window);
+  g_test_add_func ("/window/bad-file-leaves-project", test_bad_file_leaves_project);
+  g_test_add_func ("/window/canvas-draws", test_canvas_draws);
+  g_test_add_func ("/window/decimal-comma", test_decimal_comma);
+  status = g_test_run ();
+  g_clear_object (&app);
+  return status;
+}
