@@ -90,6 +90,8 @@ hl_result_rows (const HlSolution *s)
   row (rows, "max_allowable_pressure_barlow", "Barlow pressure (pipe)", HL_ROW_STRESS, s->barlow_pressure, "P = 2 S t / D");
   row (rows, "thin_radial_growth_mean", "Thin-wall radial growth (mean radius)", HL_ROW_SMALL_LENGTH, s->thin_growth_mean,
        "Roark");
+  row (rows, "plastic_collapse_pressure_tresca", "Plastic collapse pressure (Tresca)", HL_ROW_STRESS,
+       s->plastic_collapse_tresca, "Hill 1950");
   row (rows, "bore_volume_strain", "Bore volume strain dV/V", HL_ROW_RATIO, s->volume_strain, "Lamé");
   return rows;
 }

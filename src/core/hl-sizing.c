@@ -50,6 +50,42 @@ error_excess (double   m,
   return fabs (hl_thin_wall_error (&l, sp->basis, sp->measure)) - sp->tolerance;
 }
 
+/* Golden-section search for the largest f(exp(x)) on [x0, x1]; returns the
+ * value and stores exp(x) of the maximum in @at. */
+static double
+hl_local_max (HlRootFunc f,
+              gpointer   data,
+              double     x0,
+              double     x1,
+              double    *at)
+{
+  const double r = (sqrt (5.0) - 1.0) / 2.0;
+  double c = x1 - r * (x1 - x0), d = x0 + r * (x1 - x0);
+  double fc = f (exp (c), data), fd = f (exp (d), data);
+
+  for (int i = 0; i < 60 && fabs (x1 - x0) > 1e-13 * fabs (x0 + x1); i++)
+    {
+      if (fc > fd)
+        {
+          x1 = d;
+          d = c;
+          fd = fc;
+          c = x1 - r * (x1 - x0);
+          fc = f (exp (c), data);
+        }
+      else
+        {
+          x0 = c;
+          c = d;
+          fc = fd;
+          d = x0 + r * (x1 - x0);
+          fd = f (exp (d), data);
+        }
+    }
+  *at = exp (fc > fd ? c : d);
+  return MAX (fc, fd);
+}
+
 gboolean
 hl_ratio_for_tolerance (const HlLame     *lame,
                         HlRadiusBasis     basis,
@@ -61,6 +97,8 @@ hl_ratio_for_tolerance (const HlLame     *lame,
   HlLame base = *lame;
   SizingProblem sp = { &base, basis, measure, tolerance_percent, 0, 0, FALSE };
   double step = log (RATIO_MAX / RATIO_MIN) / (RATIO_GRID - 1);
+  double g[RATIO_GRID];
+  double last_bad_m = 0.0;
   int last_bad = -1;
 
   /* the error depends on the pressure ratio, not the level; with no load
@@ -69,11 +107,30 @@ hl_ratio_for_tolerance (const HlLame     *lame,
     base.pi = 1.0;
   for (int i = 0; i < RATIO_GRID; i++)
     {
-      double e = error_excess (RATIO_MIN * exp (step * i), &sp);
-
-      if (!(e <= 0.0))   /* NaN counts as outside the tolerance */
-        last_bad = i;
+      g[i] = error_excess (RATIO_MIN * exp (step * i), &sp);
+      if (!(g[i] <= 0.0))   /* NaN counts as outside the tolerance */
+        {
+          last_bad = i;
+          last_bad_m = RATIO_MIN * exp (step * i);
+        }
     }
+  /* The error curve is smooth but need not be monotone (a sphere's
+   * mean-radius error has a hump near R/t = 2.6).  A hump that pokes
+   * above the tolerance between two grid points shows on the grid as a
+   * local maximum; refine every one above the last bad point. */
+  for (int i = MAX (last_bad + 1, 1); i < RATIO_GRID - 1; i++)
+    if (g[i] >= g[i - 1] && g[i] >= g[i + 1])
+      {
+        double m;
+        double peak = hl_local_max (error_excess, &sp, log (RATIO_MIN) + step * (i - 1),
+                                    log (RATIO_MIN) + step * (i + 1), &m);
+
+        if (peak > 0.0 && m > last_bad_m)
+          {
+            last_bad = i;
+            last_bad_m = m;
+          }
+      }
   if (last_bad == RATIO_GRID - 1)
     {
       *reason = "no wall ratio brings the error within the tolerance";
@@ -84,7 +141,7 @@ hl_ratio_for_tolerance (const HlLame     *lame,
       *reason = "every wall ratio is within the tolerance";
       return FALSE;
     }
-  if (!hl_root_bracketed (error_excess, &sp, RATIO_MIN * exp (step * last_bad),
+  if (!hl_root_bracketed (error_excess, &sp, last_bad_m,
                           RATIO_MIN * exp (step * (last_bad + 1)),
                           HL_SIZING_REL_TOL, TRUE, ratio))
     {
@@ -185,8 +242,10 @@ hl_lame_required_wall (const HlLame *lame,
     }
   if (peak_excess_wall (lo, &sp) <= 0.0)
     {
-      *thickness = lo;
-      return TRUE;
+      /* thinner than this the difference b - a has too few digits left to
+       * be an answer; say so instead of returning the search bound */
+      *reason = "the load is so small that a wall of 1e-9 of the radius carries it";
+      return FALSE;
     }
   if (!hl_root_bracketed (peak_excess_wall, &sp, lo, hi, HL_SIZING_REL_TOL, TRUE, thickness))
     {

@@ -57,7 +57,8 @@ typedef struct
   HlResult thin_growth_mean;
   HlResult volume_strain;       /* dV/V of the bore */
   HlResult first_yield_von_mises, first_yield_tresca;
-  HlResult plastic_collapse;
+  HlResult plastic_collapse;          /* von Mises */
+  HlResult plastic_collapse_tresca;
   HlResult mawp_thin, mawp_lame;
   HlResult treq_thin, treq_lame;
   HlResult treq_ug27, mawp_ug27;

@@ -166,10 +166,18 @@ solve_yield_and_collapse (HlSolution *s)
    * external one */
   if (in->form == HL_FORM_SPHERE)
     s->plastic_collapse = ok (s->po + 2 * s->yield * log (s->k));
-  else if (in->ends == HL_ENDS_CLOSED)
+  else if (in->ends != HL_ENDS_OPEN)
+    /* closed ends and plane strain: the axial stress is the mean of the
+     * other two in the incompressible plastic state (Hill 1950) */
     s->plastic_collapse = ok (s->po + 2 / sqrt (3) * s->yield * log (s->k));
   else
-    s->plastic_collapse = na ("closed form given for closed ends only");
+    s->plastic_collapse = na ("no closed form for open ends (von Mises)");
+  /* Tresca: the yield condition does not involve the axial stress, so the
+   * cylinder result holds for every end condition */
+  if (in->form == HL_FORM_SPHERE)
+    s->plastic_collapse_tresca = ok (s->po + 2 * s->yield * log (s->k));
+  else
+    s->plastic_collapse_tresca = ok (s->po + s->yield * log (s->k));
 }
 
 static void
