@@ -119,7 +119,7 @@ hl_ratio_for_tolerance (const HlLame     *lame,
    * above the tolerance between two grid points shows on the grid as a
    * local maximum; refine every one above the last bad point. */
   for (int i = MAX (last_bad + 1, 1); i < RATIO_GRID - 1; i++)
-    if (g[i] >= g[i - 1] && g[i] >= g[i + 1])
+    if (g[i] > g[i - 1] && g[i] >= g[i + 1])
       {
         double m;
         double peak = hl_local_max (error_excess, &sp, log (RATIO_MIN) + step * (i - 1),
