@@ -19,6 +19,7 @@ struct _HlApplication
   GtkApplication parent_instance;
 
   GSettings     *settings;
+  gboolean       desktop_dark;   /* the desktop's own choice, kept when ours is off */
 };
 
 G_DEFINE_FINAL_TYPE (HlApplication, hl_application, GTK_TYPE_APPLICATION)
@@ -27,7 +28,7 @@ static void
 apply_dark_style (HlApplication *self)
 {
   g_object_set (gtk_settings_get_default (), "gtk-application-prefer-dark-theme",
-                g_settings_get_boolean (self->settings, "dark-style"), NULL);
+                self->desktop_dark || g_settings_get_boolean (self->settings, "dark-style"), NULL);
 }
 
 static void
@@ -124,6 +125,7 @@ hl_application_startup (GApplication *application)
   gtk_css_provider_load_from_resource (css, "/org/hoopline/Hoopline/style.css");
   gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
                                               GTK_STYLE_PROVIDER_PRIORITY_APPLICATION);
+  g_object_get (gtk_settings_get_default (), "gtk-application-prefer-dark-theme", &self->desktop_dark, NULL);
   g_signal_connect (self->settings, "changed::dark-style", G_CALLBACK (on_dark_style_changed_cb), self);
   apply_dark_style (self);
 }

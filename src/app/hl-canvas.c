@@ -13,6 +13,8 @@
 #include "hl-figure.h"
 
 #include <stdio.h>
+#include <string.h>
+#include <time.h>
 
 struct _HlCanvas
 {
@@ -37,11 +39,19 @@ gboolean
 hl_canvas_get_dark (HlCanvas *self)
 {
   GtkSettings *settings = gtk_widget_get_settings (GTK_WIDGET (self));
+  const char *forced = g_getenv ("GTK_THEME");
+  g_autofree char *theme = NULL;
+  g_autofree char *lower = NULL;
   gboolean dark = FALSE;
 
   g_return_val_if_fail (HL_IS_CANVAS (self), FALSE);
-  g_object_get (settings, "gtk-application-prefer-dark-theme", &dark, NULL);
-  return dark;
+  g_object_get (settings, "gtk-application-prefer-dark-theme", &dark, "gtk-theme-name", &theme, NULL);
+  /* the figure follows the widgets: a dark variant asked for by the
+   * preference, the desktop's settings or GTK_THEME ("Adwaita:dark") */
+  if (forced != NULL && forced[0] != '\0')
+    return g_str_has_suffix (forced, ":dark") || strstr (forced, "-dark") != NULL;
+  lower = g_ascii_strdown (theme != NULL ? theme : "", -1);
+  return dark || strstr (lower, "dark") != NULL;
 }
 
 static void
@@ -67,9 +77,11 @@ draw_cb (GtkDrawingArea *area,
   ctx.locale_numbers = TRUE;
   hl_figure_draw (cr, width, height, &ctx);
 
+  /* the real-time stamp lets a script measure from before exec() */
   if (self->n_draws++ == 0 && g_getenv ("HL_TRACE_STARTUP") != NULL && start_time != 0)
-    fprintf (stderr, "hoopline: first frame drawn %.1f ms after start\n",
-             (g_get_monotonic_time () - start_time) / 1000.0);
+    fprintf (stderr, "hoopline: first frame drawn %.1f ms after start, %.1f ms CPU, at %" G_GINT64_FORMAT " us\n",
+             (g_get_monotonic_time () - start_time) / 1000.0, clock () * 1000.0 / CLOCKS_PER_SEC,
+             g_get_real_time ());
   if (g_getenv ("HL_TRACE_DRAW") != NULL)
     fprintf (stderr, "hoopline: figure drawn in %.2f ms (%d x %d)\n",
              (g_get_monotonic_time () - before) / 1000.0, width, height);
@@ -98,6 +110,8 @@ hl_canvas_realize (GtkWidget *widget)
 {
   GTK_WIDGET_CLASS (hl_canvas_parent_class)->realize (widget);
   g_signal_connect_object (gtk_widget_get_settings (widget), "notify::gtk-application-prefer-dark-theme",
+                           G_CALLBACK (on_dark_changed_cb), widget, 0);
+  g_signal_connect_object (gtk_widget_get_settings (widget), "notify::gtk-theme-name",
                            G_CALLBACK (on_dark_changed_cb), widget, 0);
 }
 

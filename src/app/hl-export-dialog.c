@@ -35,14 +35,15 @@ char *
 hl_export_preset_size (const char *preset,
                        const char *path)
 {
-  /* PNG sizes are pixels: A4 at 150 dpi prints sharp; vector sizes are
-   * points, so A4 is the paper itself */
-  gboolean png = hl_export_format_for_path (path) == HL_EXPORT_PNG;
+  /* vector sizes are points, so A4 is the paper itself; PNG pixels are
+   * twice that, as the command line's default, so it prints sharp */
+  guint scale = hl_export_format_for_path (path) == HL_EXPORT_PNG ? HL_EXPORT_PNG_SCALE : 1;
+  guint w = HL_EXPORT_DEFAULT_WIDTH * scale, h = HL_EXPORT_DEFAULT_HEIGHT * scale;
 
   if (g_strcmp0 (preset, "a4-landscape") == 0)
-    return g_strdup (png ? "1754x1240" : "842x595");
+    return g_strdup_printf ("%ux%u", w, h);
   if (g_strcmp0 (preset, "a4-portrait") == 0)
-    return g_strdup (png ? "1240x1754" : "595x842");
+    return g_strdup_printf ("%ux%u", h, w);
   if (g_strcmp0 (preset, "1920x1080") == 0)
     return g_strdup ("1920x1080");
   return NULL;
@@ -72,7 +73,7 @@ spin_row (GtkGrid       *grid,
           GtkSpinButton **out)
 {
   GtkWidget *name = gtk_label_new_with_mnemonic (label);
-  GtkWidget *spin = gtk_spin_button_new_with_range (16, 20000, 1);
+  GtkWidget *spin = gtk_spin_button_new_with_range (HL_EXPORT_SIZE_MIN, HL_EXPORT_SIZE_MAX, 1);
 
   gtk_spin_button_set_value (GTK_SPIN_BUTTON (spin), value);
   gtk_label_set_mnemonic_widget (GTK_LABEL (name), spin);
@@ -99,8 +100,8 @@ ask_custom_size (Request *r)
   gtk_grid_set_row_spacing (GTK_GRID (grid), 6);
   gtk_grid_set_column_spacing (GTK_GRID (grid), 12);
   g_object_set (grid, "margin-start", 18, "margin-end", 18, "margin-top", 18, "margin-bottom", 18, NULL);
-  spin_row (GTK_GRID (grid), 0, _("_Width"), png ? 1600 : 842, &r->width);
-  spin_row (GTK_GRID (grid), 1, _("_Height"), png ? 1000 : 595, &r->height);
+  spin_row (GTK_GRID (grid), 0, _("_Width"), HL_EXPORT_DEFAULT_WIDTH * (png ? HL_EXPORT_PNG_SCALE : 1), &r->width);
+  spin_row (GTK_GRID (grid), 1, _("_Height"), HL_EXPORT_DEFAULT_HEIGHT * (png ? HL_EXPORT_PNG_SCALE : 1), &r->height);
   gtk_label_set_xalign (GTK_LABEL (hint), 0);
   gtk_widget_add_css_class (hint, "dim-label");
   gtk_grid_attach (GTK_GRID (grid), hint, 0, 2, 2, 1);

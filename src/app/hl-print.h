@@ -10,10 +10,12 @@
 
 G_BEGIN_DECLS
 
-/* Shows the print dialog for the selected shell.  FALSE with @error
+/* Shows the print dialog for the selected shell, or with @pdf_path
+ * writes the printout to that PDF without asking.  FALSE with @error
  * when printing could not start or failed. */
 gboolean hl_print_run (GtkWindow  *parent,
                        HlDocument *document,
+                       const char *pdf_path,
                        GError    **error);
 
 G_END_DECLS

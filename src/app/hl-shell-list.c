@@ -16,6 +16,7 @@ struct _HlShellList
   GtkListBox *list_box;
 
   HlDocument *document;
+  char       *shown;      /* names, forms and selection last listed */
   guint       updating;
 };
 
@@ -63,11 +64,33 @@ rebuild (HlShellList *self)
   self->updating--;
 }
 
+static char *
+signature (HlDocument *document)
+{
+  const HlProject *project = hl_document_get_project (document);
+  GString *s = g_string_new (NULL);
+
+  g_string_append_printf (s, "%u", hl_document_get_selected (document));
+  for (guint i = 0; i < hl_project_n_shells (project); i++)
+    {
+      const HlShellInputs *shell = hl_project_shell (project, i);
+
+      g_string_append_printf (s, "\n%d %s", shell->form, shell->name);
+    }
+  return g_string_free (s, FALSE);
+}
+
 static void
 on_document_changed_cb (HlDocument  *document,
                         HlShellList *self)
 {
-  /* a rebuild per change is cheap: a project has a handful of shells */
+  g_autofree char *now = signature (document);
+
+  /* typing a value changes nothing listed here */
+  if (g_strcmp0 (now, self->shown) == 0)
+    return;
+  g_free (self->shown);
+  self->shown = g_steal_pointer (&now);
   rebuild (self);
 }
 
@@ -89,6 +112,7 @@ hl_shell_list_dispose (GObject *object)
   if (self->document != NULL)
     g_signal_handlers_disconnect_by_data (self->document, self);
   g_clear_object (&self->document);
+  g_clear_pointer (&self->shown, g_free);
   gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_SHELL_LIST);
   G_OBJECT_CLASS (hl_shell_list_parent_class)->dispose (object);
 }
@@ -123,6 +147,7 @@ hl_shell_list_set_document (HlShellList *self,
   if (document != NULL)
     {
       g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
-      rebuild (self);
+      g_clear_pointer (&self->shown, g_free);
+      on_document_changed_cb (document, self);
     }
 }

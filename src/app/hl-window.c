@@ -106,6 +106,7 @@ update_actions (HlWindow *self)
   set_enabled (self, "export", solved);
   set_enabled (self, "export-to", solved);
   set_enabled (self, "print", solved);
+  set_enabled (self, "print-to", solved);
   set_enabled (self, "copy-results", solved);
   set_enabled (self, "shell-duplicate", has_shell);
   set_enabled (self, "shell-rename", has_shell);
@@ -612,6 +613,8 @@ export_to_activated (GSimpleAction *action,
   export_to (HL_WINDOW (user_data), path, size);
 }
 
+/* "print" shows the dialog; "print-to" with a path writes the PDF the
+ * printer would get (tests, and a quick look without a printer) */
 static void
 print_activated (GSimpleAction *action,
                  GVariant      *param,
@@ -619,8 +622,9 @@ print_activated (GSimpleAction *action,
 {
   HlWindow *self = HL_WINDOW (user_data);
   g_autoptr(GError) error = NULL;
+  const char *path = param != NULL ? g_variant_get_string (param, NULL) : NULL;
 
-  if (!hl_print_run (GTK_WINDOW (self), self->document, &error))
+  if (!hl_print_run (GTK_WINDOW (self), self->document, path, &error))
     {
       g_autofree char *text = g_strdup_printf (_("Printing failed. %s"), error->message);
 
@@ -739,6 +743,7 @@ static const GActionEntry win_entries[] = {
   { "export", export_activated },
   { "export-to", export_to_activated, "(ss)" },
   { "print", print_activated },
+  { "print-to", print_activated, "s" },
   { "copy-results", copy_results_activated },
   { "properties", properties_activated },
   { "revisions", revisions_activated },

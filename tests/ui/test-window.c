@@ -366,6 +366,31 @@ test_export_from_window (void)
   g_rmdir (dir);
 }
 
+/* The printout: figure first, then the calculation sheet's pages. */
+static void
+test_print_to_pdf (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("hl-ui-XXXXXX", NULL);
+  g_autofree char *pdf = g_build_filename (dir, "print.pdf", NULL);
+  g_autofree char *contents = NULL;
+  gsize length = 0;
+  HlWindow *window = open_demo ();
+  guint pages = 0;
+
+  activate (window, "print-to", g_variant_new_string (pdf));
+  g_assert_true (g_file_get_contents (pdf, &contents, &length, NULL));
+  /* a PDF file starts with its version line (ISO 32000-1, 7.5.2) */
+  g_assert_true (g_str_has_prefix (contents, "%PDF-"));
+  /* each page is a dictionary of /Type /Page (ISO 32000-1, 7.7.3.3) */
+  for (gsize i = 0; i + 12 <= length; i++)
+    if (memcmp (contents + i, "/Type /Page", 11) == 0 && contents[i + 11] != 's')
+      pages++;
+  g_assert_cmpuint (pages, >=, 2);
+  discard_window (window);
+  g_unlink (pdf);
+  g_rmdir (dir);
+}
+
 static void
 test_bad_file_leaves_project (void)
 {
@@ -466,6 +491,7 @@ main (int    argc,
   g_test_add_func ("/window/failed-save-keeps-modified", test_failed_save_keeps_modified);
   g_test_add_func ("/window/unsaved-question", test_unsaved_question);
   g_test_add_func ("/window/export", test_export_from_window);
+  g_test_add_func ("/window/print-to-pdf", test_print_to_pdf);
   g_test_add_func ("/window/bad-file-leaves-project", test_bad_file_leaves_project);
   g_test_add_func ("/window/canvas-draws", test_canvas_draws);
   g_test_add_func ("/window/decimal-comma", test_decimal_comma);
