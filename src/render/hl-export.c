@@ -6,6 +6,7 @@
 
 #include "hl-export.h"
 #include "hl-atomic-file.h"
+#include "hl-figure.h"
 #include "hl-report.h"
 #include "hl-solution.h"
 
@@ -88,6 +89,38 @@ export_text (const HlExportRequest *req,
   return 0;
 }
 
+static int
+export_figure (const HlExportRequest *req,
+               HlExportFormat         format,
+               GError               **error)
+{
+  const HlShellInputs *shell = req->shells->data;
+  g_autoptr(HlSolution) sol = NULL;
+  g_autoptr(GError) local = NULL;
+  HlFigureContext ctx = { 0 };
+  guint width, height;
+
+  if (!hl_export_parse_size (req->size, format, &width, &height, error))
+    return 2;
+  if (!hl_atomic_check_target (req->path, error))
+    return 1;
+  /* without --shell the figure is of the first shell */
+  sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
+  if (sol == NULL)
+    {
+      g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
+      return 1;
+    }
+  ctx.project = req->project;
+  ctx.solution = sol;
+  ctx.units = req->units;
+  ctx.style = HL_FIGURE_STYLE_LIGHT;
+  ctx.shell = shell;
+  if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
+    return 1;
+  return 0;
+}
+
 int
 hl_export_run (const HlExportRequest *req,
                GError               **error)
@@ -106,9 +139,7 @@ hl_export_run (const HlExportRequest *req,
     case HL_EXPORT_SVG:
     case HL_EXPORT_PDF:
     case HL_EXPORT_PNG:
-      g_set_error (error, G_IO_ERROR, G_IO_ERROR_NOT_SUPPORTED,
-                   "figure export (%s) is not available in this build", req->path);
-      return 2;
+      return export_figure (req, format, error);
     case HL_EXPORT_UNKNOWN:
     default:
       g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT,

@@ -6,6 +6,7 @@
  */
 #pragma once
 
+#include "hl-figure.h"
 #include "hl-project.h"
 
 G_BEGIN_DECLS
@@ -33,6 +34,34 @@ typedef enum
 } HlExportFormat;
 
 HlExportFormat hl_export_format_for_path (const char *path);
+
+/* Default figure size: an A4 landscape page in points.  PNG files are
+ * drawn at twice that in pixels so they print sharp. */
+#define HL_EXPORT_DEFAULT_WIDTH  842
+#define HL_EXPORT_DEFAULT_HEIGHT 595
+#define HL_EXPORT_PNG_SCALE      2
+#define HL_EXPORT_SIZE_MIN       100
+#define HL_EXPORT_SIZE_MAX       20000
+
+/* "WxH", whole numbers from HL_EXPORT_SIZE_MIN to HL_EXPORT_SIZE_MAX.
+ * NULL gives the default for @format (PNG: 1684x1190 pixels). */
+gboolean       hl_export_parse_size      (const char     *text,
+                                          HlExportFormat  format,
+                                          guint          *width,
+                                          guint          *height,
+                                          GError        **error);
+
+/* Writes the figure of @ctx to @path (SVG, PDF or PNG by @format),
+ * @width x @height points (SVG, PDF) or pixels (PNG).  A PDF gets the
+ * calculation sheet after the figure unless @figure_only.  Atomic:
+ * on failure nothing is left at @path. */
+gboolean       hl_export_figure_file     (const char            *path,
+                                          HlExportFormat         format,
+                                          guint                  width,
+                                          guint                  height,
+                                          const HlFigureContext *ctx,
+                                          gboolean               figure_only,
+                                          GError               **error);
 
 /* Returns 0, 1 (bad values, unwritable target) or 2 (bad request such as
  * an unknown extension or size), the command-line exit codes.  Nothing is

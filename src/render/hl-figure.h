@@ -28,6 +28,11 @@ typedef struct
   HlUnitSystem      units;
   HlFigureStyle     style;
   const char       *export_date;  /* "YYYY-MM-DD", or NULL for today */
+  /* Fields added after the first version: zero is the safe default. */
+  gboolean          locale_numbers; /* TRUE: user's decimal separator (the
+                                     * window); FALSE: C locale (exports) */
+  const HlShellInputs *shell;     /* optional: names the shell in the title
+                                   * block when there is no solution */
 } HlFigureContext;
 
 /* Draws the whole figure (section, wall detail, through-thickness plot,

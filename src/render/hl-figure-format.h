@@ -1,0 +1,31 @@
+/* hl-figure-format.h — numbers and quantities as the figure shows them
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-result-rows.h"
+
+G_BEGIN_DECLS
+
+/* No-break space between a number and its unit, so a wrap never
+ * separates them. */
+#define HL_NBSP "\xc2\xa0"
+
+/* @decimals after the point; a true minus sign (U+2212); C locale
+ * unless @locale. */
+char *hl_figure_format_fixed    (double       value,
+                                 int          decimals,
+                                 gboolean     locale);
+/* @digits significant, as hl_format_significant, with a true minus */
+char *hl_figure_format_sig      (double       value,
+                                 int          digits,
+                                 gboolean     locale);
+/* SI @si shown in the row unit of @kind for @system: "66.3 MPa" */
+char *hl_figure_format_quantity (double       si,
+                                 HlRowKind    kind,
+                                 HlUnitSystem system,
+                                 int          digits,
+                                 gboolean     locale);
+
+G_END_DECLS

@@ -1,0 +1,266 @@
+/* hl-figure-legend.c — the wall's hoop-stress shading and its colour key
+ *
+ * The shading reads the solution's points (evenly spaced from a to b),
+ * one colour stop per sampled point, so the colour at a radius is the
+ * Lamé hoop stress there and not an interpolation between the surfaces.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-figure-legend"
+
+#include "hl-figure-private.h"
+
+#include <math.h>
+
+#define MAX_STOPS 24
+
+static void
+hoop_range (const HlSolution *sol,
+            double           *lo,
+            double           *hi)
+{
+  *lo = INFINITY;
+  *hi = -INFINITY;
+  for (guint i = 0; i < sol->n_points; i++)
+    {
+      *lo = MIN (*lo, sol->points[i].hoop);
+      *hi = MAX (*hi, sol->points[i].hoop);
+    }
+}
+
+static double
+scale_position (double v,
+                double lo,
+                double hi)
+{
+  return hi > lo ? (v - lo) / (hi - lo) : 0.5;
+}
+
+cairo_pattern_t *
+hl_wall_shading (HlFigure *f,
+                 double    cx,
+                 double    cy,
+                 double    px_per_m)
+{
+  const HlSolution *sol = f->sol;
+  cairo_pattern_t *pat = cairo_pattern_create_radial (cx, cy, sol->a * px_per_m, cx, cy, sol->b * px_per_m);
+  guint n = sol->n_points, stride = MAX (1u, (n - 1 + MAX_STOPS - 2) / (MAX_STOPS - 1));
+  double lo, hi;
+
+  hoop_range (sol, &lo, &hi);
+  for (guint i = 0; i < n; i += stride)
+    {
+      HlRgb c = hl_palette_scale (scale_position (sol->points[i].hoop, lo, hi));
+
+      cairo_pattern_add_color_stop_rgb (pat, (double) i / (n - 1), c.r, c.g, c.b);
+    }
+  {
+    HlRgb c = hl_palette_scale (scale_position (sol->points[n - 1].hoop, lo, hi));
+
+    cairo_pattern_add_color_stop_rgb (pat, 1.0, c.r, c.g, c.b);
+  }
+  return pat;
+}
+
+typedef struct
+{
+  HlAxis axis;
+  double bar_len, bar_thick;
+  double title_w, title_h, label_w, label_h;
+  double hatch_w, hatch_h;
+  gboolean band;
+} Legend;
+
+static const char *
+title (HlFigure *f)
+{
+  return f->sol->inputs.form == HL_FORM_SPHERE ? "σθ Lamé (tangential)" : "σθ Lamé (hoop)";
+}
+
+/* @room: the height a vertical legend may take; the bar shrinks to fit */
+static void
+legend_plan (HlFigure *f,
+             Legend   *l,
+             gboolean  vertical,
+             double    room)
+{
+  double lo, hi, w, h;
+  double a_new, a_cor, dummy;
+
+  hoop_range (f->sol, &lo, &hi);
+  hl_axis_linear (&l->axis, hl_stress_value (f, lo), hl_stress_value (f, hi), vertical ? 4 : 3, FALSE);
+  l->label_w = l->label_h = 0;
+  for (guint i = 0; i < l->axis.n_ticks; i++)
+    {
+      g_autofree char *s = hl_axis_label (&l->axis, l->axis.ticks[i], f->locale);
+
+      hl_text_measure (f->text, HL_FONT_TINY, s, 0, &w, &h);
+      l->label_w = MAX (l->label_w, w);
+      l->label_h = MAX (l->label_h, h);
+    }
+  {
+    g_autofree char *t = g_strdup_printf ("%s, %s", title (f), hl_stress_unit (f));
+
+    hl_text_measure (f->text, HL_FONT_TINY, t, vertical ? 7 * f->text->base : 0, &l->title_w, &l->title_h);
+  }
+  hl_shell_inputs_radii (&f->sol->inputs, FALSE, &a_new, &dummy);
+  hl_shell_inputs_radii (&f->sol->inputs, TRUE, &a_cor, &dummy);
+  l->band = a_cor > a_new;
+  l->hatch_w = l->hatch_h = 0;
+  if (l->band)
+    {
+      hl_text_measure (f->text, HL_FONT_TINY, "corrosion allowance", vertical ? 5.5 * f->text->base : 0, &w, &h);
+      l->hatch_w = 1.6 * f->text->base + w;
+      l->hatch_h = MAX (h, 0.9 * f->text->base);
+    }
+  l->bar_thick = 0.8 * f->text->base;
+  l->bar_len = 9 * f->text->base;
+  if (vertical)
+    l->bar_len = CLAMP (room - l->title_h - f->gap - (l->band ? f->gap + l->hatch_h : 0), 3 * f->text->base,
+                        l->bar_len);
+}
+
+void
+hl_stress_legend_size (HlFigure *f,
+                       gboolean  vertical,
+                       double    room,
+                       double   *width,
+                       double   *height)
+{
+  Legend l;
+  double tick = 0.3 * f->text->base;
+
+  legend_plan (f, &l, vertical, room);
+  if (vertical)
+    {
+      *width = MAX (MAX (l.title_w, l.bar_thick + tick + l.label_w + 0.3 * f->text->base), l.hatch_w);
+      *height = l.title_h + f->gap + l.bar_len + (l.band ? f->gap + l.hatch_h : 0);
+    }
+  else
+    {
+      *width = l.title_w + f->gap + l.bar_len + l.label_w + (l.band ? 2 * f->gap + l.hatch_w : 0);
+      *height = MAX (l.title_h, l.bar_thick + tick + l.label_h);
+    }
+}
+
+static void
+hatch_swatch (HlFigure *f,
+              double    x,
+              double    y,
+              double    wrap)
+{
+  double sz = 0.9 * f->text->base;
+
+  cairo_rectangle (f->cr, x, y, sz, sz);
+  hl_hatch (f);
+  cairo_new_path (f->cr);
+  cairo_save (f->cr);
+  cairo_rectangle (f->cr, x, y, sz, sz);
+  cairo_set_line_width (f->cr, 0.6 * f->lw);
+  hl_palette_set_source (f->cr, f->pal->ink);
+  cairo_stroke (f->cr);
+  cairo_restore (f->cr);
+  hl_text_draw (f->text, HL_FONT_TINY, "corrosion allowance", x + 1.6 * f->text->base, y + sz / 2, 0, 0.5, wrap,
+                f->pal->muted);
+}
+
+static void
+draw_bar (HlFigure     *f,
+          Legend       *l,
+          const HlRect *bar,
+          gboolean      vertical)
+{
+  cairo_t *cr = f->cr;
+  double lo = l->axis.v0, hi = l->axis.v1;
+  double tick = 0.3 * f->text->base;
+  cairo_pattern_t *pat;
+  const int steps = 12;
+
+  /* the bar's own gradient runs lowest to highest stress */
+  if (vertical)
+    pat = cairo_pattern_create_linear (0, bar->y + bar->height, 0, bar->y);
+  else
+    pat = cairo_pattern_create_linear (bar->x, 0, bar->x + bar->width, 0);
+  for (int i = 0; i <= steps; i++)
+    {
+      HlRgb c = hl_palette_scale ((double) i / steps);
+
+      cairo_pattern_add_color_stop_rgb (pat, (double) i / steps, c.r, c.g, c.b);
+    }
+  cairo_rectangle (cr, bar->x, bar->y, bar->width, bar->height);
+  cairo_set_source (cr, pat);
+  cairo_fill (cr);
+  cairo_pattern_destroy (pat);
+  cairo_save (cr);
+  cairo_rectangle (cr, bar->x, bar->y, bar->width, bar->height);
+  cairo_set_line_width (cr, 0.6 * f->lw);
+  hl_palette_set_source (cr, f->pal->ink);
+  cairo_stroke (cr);
+  if (vertical)
+    hl_axis_place (&l->axis, bar->y + bar->height, bar->y);
+  else
+    hl_axis_place (&l->axis, bar->x, bar->x + bar->width);
+  for (guint i = 0; i < l->axis.n_ticks; i++)
+    {
+      double p = hl_axis_map (&l->axis, l->axis.ticks[i]);
+      g_autofree char *s = hl_axis_label (&l->axis, l->axis.ticks[i], f->locale);
+
+      if (vertical)
+        {
+          cairo_move_to (cr, bar->x + bar->width, p);
+          cairo_line_to (cr, bar->x + bar->width + tick, p);
+          hl_text_draw (f->text, HL_FONT_TINY, s, bar->x + bar->width + tick + 0.15 * f->text->base, p, 0, 0.5, 0,
+                        f->pal->ink);
+        }
+      else
+        {
+          cairo_move_to (cr, p, bar->y + bar->height);
+          cairo_line_to (cr, p, bar->y + bar->height + tick);
+          hl_text_draw (f->text, HL_FONT_TINY, s, p, bar->y + bar->height + tick, 0.5, 0, 0, f->pal->ink);
+        }
+    }
+  cairo_stroke (cr);
+  cairo_restore (cr);
+  (void) lo;
+  (void) hi;
+}
+
+void
+hl_stress_legend_draw (HlFigure     *f,
+                       const HlRect *area,
+                       gboolean      vertical)
+{
+  Legend l;
+  g_autofree char *t = NULL;
+  HlRect bar;
+
+  legend_plan (f, &l, vertical, area->height);
+  t = g_strdup_printf ("%s, %s", title (f), hl_stress_unit (f));
+  if (vertical)
+    {
+      HlRect r = hl_text_draw (f->text, HL_FONT_TINY, t, area->x, area->y, 0, 0, 7 * f->text->base, f->pal->ink);
+
+      bar.x = area->x;
+      bar.y = r.y + r.height + f->gap;
+      bar.width = l.bar_thick;
+      bar.height = l.bar_len;
+      draw_bar (f, &l, &bar, TRUE);
+      if (l.band)
+        hatch_swatch (f, area->x, bar.y + bar.height + f->gap, 5.5 * f->text->base);
+    }
+  else
+    {
+      double x = area->x;
+
+      hl_text_draw (f->text, HL_FONT_TINY, t, x, area->y + l.bar_thick / 2, 0, 0.5, 0, f->pal->ink);
+      x += l.title_w + f->gap + l.label_w / 2;
+      bar.x = x;
+      bar.y = area->y;
+      bar.width = l.bar_len;
+      bar.height = l.bar_thick;
+      draw_bar (f, &l, &bar, FALSE);
+      x += l.bar_len + l.label_w / 2 + 2 * f->gap;
+      if (l.band)
+        hatch_swatch (f, x, area->y, 0);
+    }
+}

@@ -1,0 +1,272 @@
+/* hl-figure-title.c — verdict line, title block, and the problem box
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-figure-title"
+
+#include "hl-figure-private.h"
+#include "hl-report.h"
+
+#include <math.h>
+
+static char *
+verdict_text (HlFigure *f)
+{
+  const HlSolution *sol = f->sol;
+  gboolean eq = sol->inputs.verdict_measure == HL_MEASURE_EQUIVALENT;
+  HlResult err = eq ? sol->thin_wall_error_equivalent : sol->thin_wall_error;
+  const char *what = eq ? "Thin-wall von Mises stress" : "Thin-wall formulas";
+  g_autofree char *tol = hl_figure_format_sig (sol->tolerance, 3, f->locale);
+  g_autofree char *e = NULL;
+
+  if (!hl_result_ok (err))
+    return g_strdup_printf ("The thin-wall error cannot be formed: %s.", err.reason);
+  e = hl_figure_format_sig (fabs (err.value), 2, f->locale);
+  if (sol->is_thin)
+    return g_strdup_printf ("%s within %s" HL_NBSP "%% of Lamé (tolerance %s" HL_NBSP "%%)", what, e, tol);
+  return g_strdup_printf ("%s %s" HL_NBSP "%% %s Lamé: outside the %s" HL_NBSP "%% tolerance; use the Lamé "
+                          "(thick-wall) results", what, e, err.value < 0 ? "below" : "above", tol);
+}
+
+static char *
+warnings_text (HlFigure *f)
+{
+  GPtrArray *w = f->sol->warnings;
+  GString *s;
+
+  if (w == NULL || w->len == 0)
+    return NULL;
+  s = g_string_new (NULL);
+  for (guint i = 0; i < w->len; i++)
+    g_string_append_printf (s, "%s⚠ %s", i ? "    " : "", (const char *) g_ptr_array_index (w, i));
+  return g_string_free (s, FALSE);
+}
+
+static const char *
+tag_text (HlFigure *f)
+{
+  return f->sol->is_thin ? "THIN" : "THICK";
+}
+
+static double
+tag_width (HlFigure *f)
+{
+  double w1, w2;
+
+  hl_text_measure (f->text, HL_FONT_HEADING, "THIN", 0, &w1, NULL);
+  hl_text_measure (f->text, HL_FONT_HEADING, "THICK", 0, &w2, NULL);
+  return MAX (w1, w2) + 1.2 * f->text->base;
+}
+
+double
+hl_verdict_height (HlFigure *f,
+                   double    width)
+{
+  g_autofree char *v = verdict_text (f);
+  g_autofree char *w = warnings_text (f);
+  double text_w = width - tag_width (f) - f->gap;
+  double h1, h2 = 0;
+
+  hl_text_measure (f->text, HL_FONT_TITLE, v, text_w, NULL, &h1);
+  if (w != NULL)
+    hl_text_measure (f->text, HL_FONT_SMALL, w, text_w, NULL, &h2);
+  return h1 + h2 + f->gap;
+}
+
+void
+hl_verdict_draw (HlFigure     *f,
+                 const HlRect *area)
+{
+  cairo_t *cr = f->cr;
+  g_autofree char *v = verdict_text (f);
+  g_autofree char *w = warnings_text (f);
+  double tw = tag_width (f), th;
+  double x = area->x + tw + f->gap;
+  HlRect r;
+
+  /* the tag says it in a word, on its own colour, for a quick read */
+  hl_text_measure (f->text, HL_FONT_TITLE, "T", 0, NULL, &th);
+  cairo_save (cr);
+  cairo_rectangle (cr, area->x, area->y + 0.08 * th, tw, 0.84 * th);
+  hl_palette_set_source (cr, f->sol->is_thin ? f->pal->pass : f->pal->fail);
+  cairo_fill (cr);
+  cairo_restore (cr);
+  hl_text_draw (f->text, HL_FONT_HEADING, tag_text (f), area->x + tw / 2, area->y + th / 2, 0.5, 0.5, 0,
+                f->pal->paper);
+  r = hl_text_draw (f->text, HL_FONT_TITLE, v, x, area->y, 0, 0, area->x + area->width - x, f->pal->ink);
+  if (w != NULL)
+    hl_text_draw (f->text, HL_FONT_SMALL, w, x, r.y + r.height, 0, 0, area->x + area->width - x, f->pal->fail);
+}
+
+typedef struct
+{
+  const char *label;
+  char       *value;
+} Cell;
+
+static guint
+title_cells (HlFigure *f,
+             Cell     *cells)
+{
+  const HlProject *pr = f->ctx->project;
+  const HlShellInputs *sh = f->sol != NULL ? &f->sol->inputs : f->ctx->shell;
+  const HlRevision *rev = pr != NULL ? hl_project_latest_revision (pr) : NULL;
+  g_autoptr(GDateTime) now = g_date_time_new_now_local ();
+
+  cells[0] = (Cell) { "Project", g_strdup (pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : "(untitled)") };
+  cells[1] = (Cell) { "Engineer", g_strdup (pr != NULL && pr->engineer != NULL && pr->engineer[0] ? pr->engineer
+                                                                                                   : "(not given)") };
+  cells[2] = (Cell) { "Revision", rev != NULL ? g_strdup_printf ("%u, %s", rev->number, rev->date) : g_strdup ("none") };
+  cells[3] = (Cell) { "Shell", sh != NULL ? g_strdup_printf ("%s (id %s)", sh->name, sh->id) : g_strdup ("—") };
+  cells[4] = (Cell) { "Units", g_strdup (f->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa") };
+  cells[5] = (Cell) { "Exported", f->ctx->export_date != NULL ? g_strdup (f->ctx->export_date)
+                                                              : g_date_time_format (now, "%Y-%m-%d") };
+  return 6;
+}
+
+static double
+first_column (guint  cols,
+              double width)
+{
+  /* the names need the room: the first column is the wider */
+  return cols == 3 ? 0.5 * width : 0.58 * width;
+}
+
+/* three columns when every value fits its cell, else two (and the
+ * longest values end in an ellipsis) */
+static guint
+title_columns (HlFigure *f,
+               double    width)
+{
+  static const guint column3[] = { 0, 1, 2, 0, 1, 2 };
+  Cell cells[6];
+  guint n = title_cells (f, cells);
+  gboolean fit = TRUE;
+  double w0 = first_column (3, width), wi = (width - w0) / 2, pad = 0.5 * f->text->base;
+
+  for (guint k = 0; k < n; k++)
+    {
+      double w;
+
+      hl_text_measure (f->text, HL_FONT_VALUE, cells[k].value, 0, &w, NULL);
+      fit = fit && w + 2 * pad <= (column3[k] == 0 ? w0 : wi);
+      g_free (cells[k].value);
+    }
+  return fit ? 3 : 2;
+}
+
+static double
+cell_height (HlFigure *f)
+{
+  double h1, h2;
+
+  hl_text_measure (f->text, HL_FONT_TINY, "Project", 0, NULL, &h1);
+  hl_text_measure (f->text, HL_FONT_VALUE, "Project", 0, NULL, &h2);
+  return h1 + h2 + 0.5 * f->text->base;
+}
+
+static char *
+caution_text (void)
+{
+  return g_strdup ("Caution: " HL_CAUTION);
+}
+
+double
+hl_title_block_height (HlFigure *f,
+                       double    width)
+{
+  g_autofree char *c = caution_text ();
+  guint cols = title_columns (f, width);
+  double ch;
+
+  hl_text_measure (f->text, HL_FONT_SMALL, c, width - f->text->base, NULL, &ch);
+  return (6 / cols) * cell_height (f) + ch + 0.6 * f->text->base;
+}
+
+void
+hl_title_block_draw (HlFigure     *f,
+                     const HlRect *area)
+{
+  cairo_t *cr = f->cr;
+  Cell cells[6];
+  guint n = title_cells (f, cells), cols = title_columns (f, area->width), rows = n / cols;
+  double w0 = first_column (cols, area->width);
+  double wi = (area->width - w0) / (cols - 1);
+  double chh = cell_height (f), pad = 0.5 * f->text->base;
+  g_autofree char *caution = caution_text ();
+  /* reading order in each layout: names first, then who and when */
+  static const guint order3[] = { 0, 1, 2, 3, 4, 5 };
+  static const guint order2[] = { 0, 1, 3, 2, 4, 5 };
+
+  cairo_save (cr);
+  hl_palette_set_source (cr, f->pal->ink);
+  cairo_set_line_width (cr, 0.8 * f->lw);
+  cairo_rectangle (cr, area->x, area->y, area->width, area->height);
+  cairo_stroke (cr);
+  cairo_set_line_width (cr, 0.5 * f->lw);
+  for (guint r = 1; r <= rows; r++)
+    {
+      cairo_move_to (cr, area->x, area->y + r * chh);
+      cairo_line_to (cr, area->x + area->width, area->y + r * chh);
+    }
+  for (guint c = 1; c < cols; c++)
+    {
+      double x = area->x + w0 + (c - 1) * wi;
+
+      cairo_move_to (cr, x, area->y);
+      cairo_line_to (cr, x, area->y + rows * chh);
+    }
+  cairo_stroke (cr);
+  cairo_restore (cr);
+
+  for (guint k = 0; k < n; k++)
+    {
+      const Cell *cell = &cells[cols == 3 ? order3[k] : order2[k]];
+      guint r = k / cols, c = k % cols;
+      double x = area->x + (c == 0 ? 0 : w0 + (c - 1) * wi) + pad;
+      double cw = (c == 0 ? w0 : wi) - 2 * pad;
+      HlRect lab = hl_text_draw_line (f->text, HL_FONT_TINY, cell->label, x, area->y + r * chh + 0.25 * f->text->base,
+                                      cw, f->pal->muted);
+
+      hl_text_draw_line (f->text, HL_FONT_VALUE, cell->value, x, lab.y + lab.height, cw, f->pal->ink);
+    }
+  for (guint k = 0; k < n; k++)
+    g_free (cells[k].value);
+  hl_text_draw (f->text, HL_FONT_SMALL, caution, area->x + pad, area->y + rows * chh + 0.3 * f->text->base, 0, 0,
+                area->width - 2 * pad, f->pal->ink);
+}
+
+void
+hl_problem_draw (HlFigure     *f,
+                 const HlRect *area)
+{
+  cairo_t *cr = f->cr;
+  const char *problem = f->ctx->problem_text != NULL && f->ctx->problem_text[0] ? f->ctx->problem_text
+                                                                                : "Some inputs are missing or invalid.";
+  const char *head = "These inputs cannot be solved yet";
+  const char *foot = "No results are shown until every value is valid.";
+  double w = MIN (area->width - 2 * f->gap, 42 * f->text->base);
+  double pad = f->text->base, inner = w - 2 * pad;
+  double h1, h2, h3, h, x, y;
+  HlRect r;
+
+  hl_text_measure (f->text, HL_FONT_TITLE, head, inner, NULL, &h1);
+  hl_text_measure (f->text, HL_FONT_BODY, problem, inner, NULL, &h2);
+  hl_text_measure (f->text, HL_FONT_SMALL, foot, inner, NULL, &h3);
+  h = MIN (h1 + h2 + h3 + 2 * f->gap + 2 * pad, area->height);
+  x = area->x + (area->width - w) / 2;
+  y = area->y + (area->height - h) / 2;
+
+  cairo_save (cr);
+  cairo_rectangle (cr, x, y, w, h);
+  hl_palette_set_source (cr, f->pal->problem_fill);
+  cairo_fill_preserve (cr);
+  hl_palette_set_source (cr, f->pal->problem_edge);
+  cairo_set_line_width (cr, f->lw);
+  cairo_stroke_preserve (cr);
+  cairo_clip (cr);
+  r = hl_text_draw (f->text, HL_FONT_TITLE, head, x + pad, y + pad, 0, 0, inner, f->pal->ink);
+  r = hl_text_draw (f->text, HL_FONT_BODY, problem, x + pad, r.y + r.height + f->gap, 0, 0, inner, f->pal->ink);
+  hl_text_draw (f->text, HL_FONT_SMALL, foot, x + pad, r.y + r.height + f->gap, 0, 0, inner, f->pal->muted);
+  cairo_restore (cr);
+}
