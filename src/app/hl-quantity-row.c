@@ -253,6 +253,8 @@ hl_quantity_row_init (HlQuantityRow *self)
 
   gtk_widget_init_template (GTK_WIDGET (self));
   apply_kind (self, HL_KIND_LENGTH);
+  /* Ctrl+Z belongs to the document's undo, which covers every field */
+  gtk_editable_set_enable_undo (GTK_EDITABLE (self->entry), FALSE);
   focus = gtk_event_controller_focus_new ();
   g_signal_connect (focus, "leave", G_CALLBACK (on_focus_leave_cb), self);
   gtk_widget_add_controller (GTK_WIDGET (self->entry), focus);

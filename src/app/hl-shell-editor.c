@@ -532,6 +532,9 @@ hl_shell_editor_init (HlShellEditor *self)
 {
   self->material_ids = g_ptr_array_new_with_free_func (g_free);
   gtk_widget_init_template (GTK_WIDGET (self));
+  /* Ctrl+Z belongs to the document's undo, which covers every field */
+  gtk_editable_set_enable_undo (GTK_EDITABLE (self->name_entry), FALSE);
+  gtk_editable_set_enable_undo (GTK_EDITABLE (self->material_name_entry), FALSE);
 }
 
 void

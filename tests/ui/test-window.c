@@ -455,6 +455,80 @@ test_decimal_comma (void)
   setlocale (LC_NUMERIC, old);
 }
 
+/* Editing a project material changes every shell that uses it; a
+ * built-in one is copied first so the typical values stay. */
+static void
+test_material_edit (void)
+{
+  HlWindow *window = open_demo ();
+  HlDocument *doc = hl_window_get_document (window);
+  const HlProject *project;
+  const HlShellInputs *sphere;
+
+  /* the receiver and the sphere both use p265gh in the demo */
+  type_into (window, "allowable-stress", "140");
+  project = hl_document_get_project (doc);
+  g_assert_cmpfloat (hl_project_find_material ((HlProject *) project, "p265gh")->allowable_stress.value, ==, 140);
+  sphere = hl_project_find_shell (project, "n2-sphere");
+  g_assert_cmpfloat (sphere->material.allowable_stress.value, ==, 140);
+
+  /* a shell on a built-in material gets a project copy when edited */
+  activate (window, "shell-add", NULL);
+  g_assert_nonnull (hl_material_builtin_find (hl_document_get_shell (doc)->material_ref));
+  type_into (window, "yield-strength", "300");
+  project = hl_document_get_project (doc);
+  g_assert_null (hl_material_builtin_find (hl_document_get_shell (doc)->material_ref));
+  g_assert_nonnull (hl_project_find_material ((HlProject *) project, hl_document_get_shell (doc)->material_ref));
+  g_assert_cmpfloat (hl_material_builtin (0)->yield_strength.value, !=, 300);
+  discard_window (window);
+}
+
+/* New shells take the preferred units and tolerance. */
+static void
+test_preferences_shape_new_shells (void)
+{
+  GSettings *settings = hl_application_get_settings (app);
+  HlWindow *window;
+  const HlShellInputs *shell;
+
+  g_settings_set_string (settings, "unit-system", "us");
+  g_settings_set_double (settings, "default-tolerance", 2.5);
+  window = hl_window_new (GTK_APPLICATION (app));
+  shell = hl_document_get_shell (hl_window_get_document (window));
+  g_assert_cmpstr (shell->wall_thickness.unit, ==, "in");
+  g_assert_cmpstr (shell->internal_pressure.unit, ==, "psi");
+  g_assert_cmpfloat (shell->thin_tolerance.value, ==, 2.5);
+  g_assert_nonnull (hl_document_get_solution (hl_window_get_document (window)));
+  g_assert_cmpint (hl_document_get_project (hl_window_get_document (window))->display_units, ==,
+                   HL_UNIT_SYSTEM_US);
+  g_settings_reset (settings, "unit-system");
+  g_settings_reset (settings, "default-tolerance");
+  discard_window (window);
+}
+
+/* Opening a file that a window already shows brings that window back. */
+static void
+test_open_twice_reuses_window (void)
+{
+  g_autofree char *path = demo_path ();
+  GFile *files[1];
+  guint before;
+
+  files[0] = g_file_new_for_path (path);
+  g_application_open (G_APPLICATION (app), files, 1, "");
+  iterate ();
+  before = g_list_length (gtk_application_get_windows (GTK_APPLICATION (app)));
+  g_assert_cmpuint (before, >=, 1);
+  g_application_open (G_APPLICATION (app), files, 1, "");
+  iterate ();
+  g_assert_cmpuint (g_list_length (gtk_application_get_windows (GTK_APPLICATION (app))), ==, before);
+  for (GList *l = gtk_application_get_windows (GTK_APPLICATION (app)); l != NULL;
+       l = gtk_application_get_windows (GTK_APPLICATION (app)))
+    gtk_window_destroy (l->data);
+  iterate ();
+  g_object_unref (files[0]);
+}
+
 int
 main (int    argc,
       char **argv)
@@ -495,6 +569,9 @@ main (int    argc,
   g_test_add_func ("/window/bad-file-leaves-project", test_bad_file_leaves_project);
   g_test_add_func ("/window/canvas-draws", test_canvas_draws);
   g_test_add_func ("/window/decimal-comma", test_decimal_comma);
+  g_test_add_func ("/window/material-edit", test_material_edit);
+  g_test_add_func ("/window/preferences-shape-new-shells", test_preferences_shape_new_shells);
+  g_test_add_func ("/window/open-twice-reuses-window", test_open_twice_reuses_window);
   status = g_test_run ();
   g_clear_object (&app);
   return status;
