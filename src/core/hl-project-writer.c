@@ -9,13 +9,44 @@
 
 #include <string.h>
 
+/* g_markup_escape_text() is not enough for a file that must read back
+ * exactly: it leaves \r (which the parser turns into \n) and, in
+ * attributes, tabs and newlines (which become spaces), and it writes
+ * control characters as references that XML 1.0 forbids, so the file
+ * would not load at all.  Those few characters XML cannot carry are
+ * dropped; everything else survives a round trip. */
+static char *
+escape (const char *text,
+        gboolean    attribute)
+{
+  GString *out = g_string_sized_new (text != NULL ? strlen (text) + 16 : 16);
+
+  for (const char *p = text != NULL ? text : ""; *p != '\0'; p++)
+    switch (*p)
+      {
+      case '&': g_string_append (out, "&amp;"); break;
+      case '<': g_string_append (out, "&lt;"); break;
+      case '>': g_string_append (out, "&gt;"); break;
+      case '"': g_string_append (out, "&quot;"); break;
+      case '\'': g_string_append (out, "&apos;"); break;
+      case '\r': g_string_append (out, "&#13;"); break;
+      case '\t': g_string_append (out, attribute ? "&#9;" : "\t"); break;
+      case '\n': g_string_append (out, attribute ? "&#10;" : "\n"); break;
+      default:
+        if ((guchar) *p >= 0x20)
+          g_string_append_c (out, *p);
+        break;
+      }
+  return g_string_free (out, FALSE);
+}
+
 static void
 put_text (GString    *out,
           int         indent,
           const char *element,
           const char *text)
 {
-  g_autofree char *escaped = g_markup_escape_text (text != NULL ? text : "", -1);
+  g_autofree char *escaped = escape (text, FALSE);
 
   g_string_append_printf (out, "%*s<%s>%s</%s>\n", indent, "", element, escaped, element);
 }
@@ -38,7 +69,7 @@ put_quantity (GString    *out,
               HlQuantity  q)
 {
   g_autofree char *num = hl_format_exact (q.value);
-  g_autofree char *unit = g_markup_escape_text (q.unit, -1);
+  g_autofree char *unit = escape (q.unit, TRUE);
 
   g_string_append_printf (out, "%*s<%s unit=\"%s\">%s</%s>\n", indent, "", element, unit, num, element);
 }
@@ -47,7 +78,7 @@ static void
 put_material (GString          *out,
               const HlMaterial *m)
 {
-  g_autofree char *id = g_markup_escape_text (m->id, -1);
+  g_autofree char *id = escape (m->id, TRUE);
 
   g_string_append_printf (out, "  <material id=\"%s\">\n", id);
   put_text (out, 4, "name", m->name);
@@ -62,7 +93,7 @@ static void
 put_shell (GString             *out,
            const HlShellInputs *s)
 {
-  g_autofree char *id = g_markup_escape_text (s->id, -1);
+  g_autofree char *id = escape (s->id, TRUE);
 
   g_string_append_printf (out, "  <shell id=\"%s\" form=\"%s\" ends=\"%s\">\n", id,
                           hl_form_to_string (s->form), hl_ends_to_string (s->ends));
@@ -100,11 +131,12 @@ hl_project_to_xml (const HlProject *project)
   for (guint i = 0; i < project->revisions->len; i++)
     {
       const HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
-      g_autofree char *author = g_markup_escape_text (r->author, -1);
-      g_autofree char *text = g_markup_escape_text (r->text, -1);
+      g_autofree char *author = escape (r->author, TRUE);
+      g_autofree char *date = escape (r->date, TRUE);
+      g_autofree char *text = escape (r->text, FALSE);
 
       g_string_append_printf (out, "  <revision number=\"%u\" date=\"%s\" author=\"%s\">%s</revision>\n",
-                              r->number, r->date, author, text);
+                              r->number, date, author, text);
     }
   g_string_append (out, "</hoopline-project>\n");
   return g_string_free (out, FALSE);

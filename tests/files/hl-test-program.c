@@ -7,6 +7,7 @@
 #include "hl-test-program.h"
 
 #include <gio/gio.h>
+#include <glib/gstdio.h>
 #include <string.h>
 
 typedef struct
@@ -106,18 +107,28 @@ hl_test_run_in (const char        *cwd,
 }
 
 HlRun *
+hl_test_run_valist (const char *first_arg,
+                    va_list     rest)
+{
+  g_autoptr(GPtrArray) args = g_ptr_array_new ();
+
+  for (const char *a = first_arg; a != NULL; a = va_arg (rest, const char *))
+    g_ptr_array_add (args, (gpointer) a);
+  g_ptr_array_add (args, NULL);
+  return hl_test_run_in (NULL, NULL, (const char *const *) args->pdata);
+}
+
+HlRun *
 hl_test_run (const char *first_arg,
              ...)
 {
-  g_autoptr(GPtrArray) args = g_ptr_array_new ();
+  HlRun *run;
   va_list ap;
 
   va_start (ap, first_arg);
-  for (const char *a = first_arg; a != NULL; a = va_arg (ap, const char *))
-    g_ptr_array_add (args, (gpointer) a);
+  run = hl_test_run_valist (first_arg, ap);
   va_end (ap);
-  g_ptr_array_add (args, NULL);
-  return hl_test_run_in (NULL, NULL, (const char *const *) args->pdata);
+  return run;
 }
 
 void
@@ -150,4 +161,32 @@ hl_test_read_file (const char *path)
   if (!g_file_get_contents (path, &data, &len, NULL))
     return NULL;
   return g_bytes_new_take (data, len);
+}
+
+char *
+hl_test_temp_dir (void)
+{
+  g_autoptr(GError) error = NULL;
+  char *dir = g_dir_make_tmp ("hl-test-XXXXXX", &error);
+
+  g_assert_no_error (error);
+  return dir;
+}
+
+void
+hl_test_remove_tree (const char *path)
+{
+  g_autoptr(GDir) dir = g_dir_open (path, 0, NULL);
+  const char *name;
+
+  while (dir != NULL && (name = g_dir_read_name (dir)) != NULL)
+    {
+      g_autofree char *child = g_build_filename (path, name, NULL);
+
+      if (g_file_test (child, G_FILE_TEST_IS_DIR) && !g_file_test (child, G_FILE_TEST_IS_SYMLINK))
+        hl_test_remove_tree (child);
+      else
+        g_unlink (child);
+    }
+  g_rmdir (path);
 }

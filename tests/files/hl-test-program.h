@@ -29,6 +29,8 @@ HlRun *hl_test_run_in     (const char        *cwd,
                            const char *const *args);
 HlRun *hl_test_run        (const char        *first_arg,
                            ...) G_GNUC_NULL_TERMINATED;
+HlRun *hl_test_run_valist (const char        *first_arg,
+                           va_list            rest);
 void   hl_run_free        (HlRun             *run);
 
 /* The lines of @text without the empty one a final newline leaves. */
@@ -36,6 +38,11 @@ GStrv  hl_test_lines      (const char        *text);
 
 /* Whole file, or NULL when it does not exist. */
 GBytes *hl_test_read_file (const char        *path);
+
+/* A new empty folder in the temporary folder, and its removal with all
+ * it holds. */
+char   *hl_test_temp_dir    (void);
+void    hl_test_remove_tree (const char      *path);
 
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (HlRun, hl_run_free)
 

@@ -269,24 +269,14 @@ static void
 temp_setup (TempDir      *t,
             gconstpointer data)
 {
-  t->dir = g_dir_make_tmp ("hl-bad-XXXXXX", NULL);
-  g_assert_nonnull (t->dir);
+  t->dir = hl_test_temp_dir ();
 }
 
 static void
 temp_teardown (TempDir      *t,
                gconstpointer data)
 {
-  g_autoptr(GDir) dir = g_dir_open (t->dir, 0, NULL);
-  const char *name;
-
-  while (dir != NULL && (name = g_dir_read_name (dir)) != NULL)
-    {
-      g_autofree char *path = g_build_filename (t->dir, name, NULL);
-
-      g_unlink (path);
-    }
-  g_rmdir (t->dir);
+  hl_test_remove_tree (t->dir);
   g_free (t->dir);
 }
 
