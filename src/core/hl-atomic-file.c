@@ -39,7 +39,20 @@ hl_atomic_check_target (const char *path,
       g_set_error (error, G_FILE_ERROR, G_FILE_ERROR_ISDIR, "cannot write “%s”: it is a folder", path);
       return FALSE;
     }
+  /* a save renames a new file over the target: over a device, a pipe or
+   * a socket that would replace the node itself (as root, /dev/full would
+   * become a plain file), so only regular files are replaced */
+  if (g_file_test (path, G_FILE_TEST_EXISTS) && !g_file_test (path, G_FILE_TEST_IS_REGULAR))
+    {
+      g_set_error (error, G_FILE_ERROR, G_FILE_ERROR_INVAL, "cannot write “%s”: it is not a regular file", path);
+      return FALSE;
+    }
   dir = g_path_get_dirname (path);
+  if (g_file_test (dir, G_FILE_TEST_EXISTS) && !g_file_test (dir, G_FILE_TEST_IS_DIR))
+    {
+      g_set_error (error, G_FILE_ERROR, G_FILE_ERROR_NOTDIR, "cannot write “%s”: “%s” is not a folder", path, dir);
+      return FALSE;
+    }
   if (!g_file_test (dir, G_FILE_TEST_IS_DIR))
     {
       g_set_error (error, G_FILE_ERROR, G_FILE_ERROR_NOENT, "cannot write “%s”: the folder “%s” does not exist", path, dir);
