@@ -61,6 +61,34 @@ hl_atomic_check_target (const char *path,
   return TRUE;
 }
 
+/* A save through a symbolic link updates the file it points at, as an
+ * editor does, instead of replacing the link with a plain file. */
+static char *
+resolve_links (const char *path)
+{
+  char *current = g_strdup (path);
+
+  for (int depth = 0; depth < 16 && g_file_test (current, G_FILE_TEST_IS_SYMLINK); depth++)
+    {
+      g_autofree char *target = g_file_read_link (current, NULL);
+      char *next;
+
+      if (target == NULL)
+        break;
+      if (g_path_is_absolute (target))
+        next = g_strdup (target);
+      else
+        {
+          g_autofree char *dir = g_path_get_dirname (current);
+
+          next = g_build_filename (dir, target, NULL);
+        }
+      g_free (current);
+      current = next;
+    }
+  return current;
+}
+
 gboolean
 hl_atomic_write (const char *path,
                  const char *data,
@@ -68,10 +96,12 @@ hl_atomic_write (const char *path,
                  GError    **error)
 {
   g_autoptr(GError) local = NULL;
+  g_autofree char *target = NULL;
 
   if (!hl_atomic_check_target (path, error))
     return FALSE;
-  if (!g_file_set_contents_full (path, data, length,
+  target = resolve_links (path);
+  if (!g_file_set_contents_full (target, data, length,
                                  G_FILE_SET_CONTENTS_CONSISTENT | G_FILE_SET_CONTENTS_ONLY_EXISTING,
                                  0644, &local))
     {
@@ -84,8 +114,9 @@ hl_atomic_write (const char *path,
 char *
 hl_atomic_temp_name (const char *path)
 {
-  g_autofree char *dir = g_path_get_dirname (path);
-  g_autofree char *base = g_path_get_basename (path);
+  g_autofree char *target = resolve_links (path);
+  g_autofree char *dir = g_path_get_dirname (target);
+  g_autofree char *base = g_path_get_basename (target);
   /* hidden, and unique per process and call */
   static guint counter;
 
@@ -98,6 +129,7 @@ hl_atomic_commit (const char *temp,
                   const char *path,
                   GError    **error)
 {
+  g_autofree char *target = resolve_links (path);
   int fd = g_open (temp, O_RDONLY, 0);
 
   if (fd >= 0)
@@ -114,7 +146,7 @@ hl_atomic_commit (const char *temp,
         }
       close (fd);
     }
-  if (g_rename (temp, path) != 0)
+  if (g_rename (temp, target) != 0)
     {
       int saved = errno;
 

@@ -828,6 +828,9 @@ read_shell (Reader    *rd,
     }
   g_strlcpy (s.id, id, sizeof s.id);
   g_strlcpy (s.name, id, sizeof s.name);
+  /* a pressure the file does not give is zero, not the window's
+   * new-shell example value */
+  s.internal_pressure = hl_quantity_make (0, "bar");
   if (!copy_text (rd, n, "name", s.name, sizeof s.name)
       || !copy_text (rd, n, "material-ref", s.material_ref, sizeof s.material_ref)
       || !check_id (rd, child (n, "material-ref"), "material-ref", s.material_ref))

@@ -285,6 +285,8 @@ test_tolerance_without_unit (void)
   g_assert_cmpstr (s->thin_tolerance.unit, ==, "%");
   g_assert_cmpint (s->size_kind, ==, HL_SIZE_OUTER_RADIUS);
   g_assert_cmpstr (s->size.unit, ==, "in");
+  /* DESIGN.md §3: a load the file does not give is zero (gauge) */
+  g_assert_cmpfloat (hl_quantity_si (s->internal_pressure, HL_KIND_STRESS), ==, 0);
 }
 
 static void

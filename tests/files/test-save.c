@@ -174,6 +174,26 @@ test_success (Fixture      *f,
   assert_folder_is (f->dir, (const char *const[]) { "project.hoop", NULL });
 }
 
+/* Saving through a symbolic link updates the file it points at and keeps
+ * the link, as desktop editors do (common practice). */
+static void
+test_through_symlink (Fixture      *f,
+                      gconstpointer data)
+{
+  g_autofree char *link = g_build_filename (f->dir, "link.hoop", NULL);
+  g_autofree char *xml = hl_project_to_xml (f->changed);
+  g_autoptr(GError) error = NULL;
+  g_autoptr(GBytes) now = NULL;
+
+  g_assert_cmpint (symlink ("project.hoop", link), ==, 0);
+  g_assert_true (hl_project_save (f->changed, link, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_test (link, G_FILE_TEST_IS_SYMLINK));
+  now = file_bytes (f->target);
+  g_assert_cmpmem (g_bytes_get_data (now, NULL), g_bytes_get_size (now), xml, strlen (xml));
+  assert_folder_is (f->dir, (const char *const[]) { "link.hoop", "project.hoop", NULL });
+}
+
 static void
 test_read_only_folder (Fixture      *f,
                        gconstpointer data)
@@ -301,6 +321,7 @@ main (int    argc,
 
 #define ADD(path, func) g_test_add (path, Fixture, NULL, setup, func, teardown)
   ADD ("/files/save/success", test_success);
+  ADD ("/files/save/through-symlink", test_through_symlink);
   ADD ("/files/save/read-only-folder", test_read_only_folder);
   ADD ("/files/save/target-is-folder", test_target_is_folder);
   ADD ("/files/save/missing-folder", test_missing_folder);
