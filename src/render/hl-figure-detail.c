@@ -157,17 +157,48 @@ at (const View *v,
   *y = v->cy + u * v->ty + across * v->ey;
 }
 
+/* the part of the magnified circles the frame can show: whole circles
+ * of a hundred thousand units would cost thousands of curve pieces */
+static void
+visible_angles (const View *v,
+                double      rho,
+                double     *from,
+                double     *to)
+{
+  double mid = atan2 (v->ey, v->ex);
+  double reach = 1.5 * hypot (v->U, v->V) / (rho * v->s);
+  double half = reach >= 1 ? G_PI : asin (reach);
+
+  *from = mid - half;
+  *to = mid + half;
+}
+
+static void
+arc_path (cairo_t    *cr,
+          const View *v,
+          double      rho)
+{
+  double from, to;
+
+  visible_angles (v, rho, &from, &to);
+  cairo_new_sub_path (cr);
+  cairo_arc (cr, v->cx, v->cy, rho * v->s, from, to);
+}
+
 static void
 band_path (cairo_t    *cr,
            const View *v,
            double      r0,
            double      r1)
 {
+  double from, to;
+
+  /* a sector between the two radii over the angles the inner, smaller
+   * one needs to cross the frame; the outer crosses it within them */
+  visible_angles (v, r0, &from, &to);
   cairo_new_path (cr);
-  cairo_arc (cr, v->cx, v->cy, r1 * v->s, 0, 2 * G_PI);
-  cairo_close_path (cr);
-  cairo_new_sub_path (cr);
-  cairo_arc_negative (cr, v->cx, v->cy, r0 * v->s, 2 * G_PI, 0);
+  cairo_arc (cr, v->cx, v->cy, r1 * v->s, from, to);
+  cairo_arc_negative (cr, v->cx, v->cy, r0 * v->s, to, from);
   cairo_close_path (cr);
 }
 
@@ -176,12 +207,9 @@ draw_wall (HlFigure   *f,
            const View *v)
 {
   cairo_t *cr = f->cr;
-  cairo_pattern_t *shade = hl_wall_shading (f, v->cx, v->cy, v->s);
 
   band_path (cr, v, MAX (f->sol->a, v->a_cor), v->b);
-  cairo_set_source (cr, shade);
-  cairo_fill (cr);
-  cairo_pattern_destroy (shade);
+  hl_wall_fill (f, v->cx, v->cy, v->s, MAX (f->sol->a, v->a_cor), v->b);
   if (v->a_cor > v->a_new)
     {
       band_path (cr, v, v->a_new, v->a_cor);
@@ -191,18 +219,15 @@ draw_wall (HlFigure   *f,
   cairo_save (cr);
   hl_palette_set_source (cr, f->pal->ink);
   cairo_set_line_width (cr, 1.1 * f->lw);
-  cairo_new_sub_path (cr);
-  cairo_arc (cr, v->cx, v->cy, v->b * v->s, 0, 2 * G_PI);
-  cairo_new_sub_path (cr);
-  cairo_arc (cr, v->cx, v->cy, v->a_new * v->s, 0, 2 * G_PI);
+  arc_path (cr, v, v->b);
+  arc_path (cr, v, v->a_new);
   cairo_stroke (cr);
   if (v->a_cor > v->a_new)
     {
       /* the surface after corrosion: thin and dashed, it is a future one */
       cairo_set_line_width (cr, 0.7 * f->lw);
       hl_palette_set_dash (cr, HL_DASH_DASHED, f->lw);
-      cairo_new_sub_path (cr);
-      cairo_arc (cr, v->cx, v->cy, v->a_cor * v->s, 0, 2 * G_PI);
+      arc_path (cr, v, v->a_cor);
       cairo_stroke (cr);
     }
   cairo_restore (cr);

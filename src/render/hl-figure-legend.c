@@ -1,8 +1,7 @@
 /* hl-figure-legend.c — the wall's hoop-stress shading and its colour key
  *
- * The shading reads the solution's points (evenly spaced from a to b),
- * one colour stop per sampled point, so the colour at a radius is the
- * Lamé hoop stress there and not an interpolation between the surfaces.
+ * The key runs from the lowest to the highest Lamé hoop stress in the
+ * wall, the same range hl_wall_fill() maps onto the colour scale.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -11,8 +10,6 @@
 #include "hl-figure-private.h"
 
 #include <math.h>
-
-#define MAX_STOPS 24
 
 static void
 hoop_range (const HlSolution *sol,
@@ -26,40 +23,6 @@ hoop_range (const HlSolution *sol,
       *lo = MIN (*lo, sol->points[i].hoop);
       *hi = MAX (*hi, sol->points[i].hoop);
     }
-}
-
-static double
-scale_position (double v,
-                double lo,
-                double hi)
-{
-  return hi > lo ? (v - lo) / (hi - lo) : 0.5;
-}
-
-cairo_pattern_t *
-hl_wall_shading (HlFigure *f,
-                 double    cx,
-                 double    cy,
-                 double    px_per_m)
-{
-  const HlSolution *sol = f->sol;
-  cairo_pattern_t *pat = cairo_pattern_create_radial (cx, cy, sol->a * px_per_m, cx, cy, sol->b * px_per_m);
-  guint n = sol->n_points, stride = MAX (1u, (n - 1 + MAX_STOPS - 2) / (MAX_STOPS - 1));
-  double lo, hi;
-
-  hoop_range (sol, &lo, &hi);
-  for (guint i = 0; i < n; i += stride)
-    {
-      HlRgb c = hl_palette_scale (scale_position (sol->points[i].hoop, lo, hi));
-
-      cairo_pattern_add_color_stop_rgb (pat, (double) i / (n - 1), c.r, c.g, c.b);
-    }
-  {
-    HlRgb c = hl_palette_scale (scale_position (sol->points[n - 1].hoop, lo, hi));
-
-    cairo_pattern_add_color_stop_rgb (pat, 1.0, c.r, c.g, c.b);
-  }
-  return pat;
 }
 
 typedef struct

@@ -157,28 +157,3 @@ hl_length_text (HlFigure *f,
 {
   return hl_figure_format_quantity (si, HL_ROW_LENGTH, f->units, digits, f->locale);
 }
-
-void
-hl_hatch (HlFigure *f)
-{
-  /* fills the current path with the corrosion band: a light ground and
-   * diagonal lines, which survive greyscale and colour-blind reading */
-  double step = MAX (3.0, 0.45 * f->text->base);
-  double x0, y0, x1, y1;
-
-  cairo_save (f->cr);
-  cairo_clip_preserve (f->cr);
-  hl_palette_set_source (f->cr, f->pal->corrosion);
-  cairo_fill_preserve (f->cr);
-  cairo_clip_extents (f->cr, &x0, &y0, &x1, &y1);
-  cairo_new_path (f->cr);
-  for (double s = x0 - (y1 - y0); s < x1; s += step)
-    {
-      cairo_move_to (f->cr, s, y1);
-      cairo_line_to (f->cr, s + (y1 - y0), y0);
-    }
-  cairo_set_line_width (f->cr, 0.6 * f->lw);
-  hl_palette_set_source (f->cr, f->pal->corrosion_hatch);
-  cairo_stroke (f->cr);
-  cairo_restore (f->cr);
-}

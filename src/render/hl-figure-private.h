@@ -24,6 +24,7 @@ typedef struct
   double                 lw;     /* base line width */
   double                 gap;    /* base spacing */
   HlFigureGeometry      *geom;   /* always set; the caller's or a scratch one */
+  cairo_surface_t       *hatch_tile;  /* made on first use, freed with the figure */
 } HlFigure;
 
 typedef enum
@@ -49,12 +50,18 @@ void     hl_detail_fit           (HlFigure     *f,
                                   HlSide        side);
 void     hl_detail_draw          (HlFigure     *f,
                                   const HlRect *area);
-/* shading of the analysis wall between @r0 and @r1 (user units) about
- * (@cx, @cy); used by the ring and by the detail */
-cairo_pattern_t *hl_wall_shading (HlFigure     *f,
+/* hl-figure-raster.c: fills the current path, the ring between radii
+ * @r0 and @r1 (metres) about (@cx, @cy) at @px_per_m or a piece of it,
+ * with the analysis wall's hoop-stress shading (the ring, the detail);
+ * hl_hatch() fills the current path with the corrosion band's hatching */
+void     hl_wall_fill            (HlFigure     *f,
                                   double        cx,
                                   double        cy,
-                                  double        px_per_m);
+                                  double        px_per_m,
+                                  double        r0,
+                                  double        r1);
+double   hl_wall_scale_position  (const HlSolution *sol,
+                                  double            hoop);
 /* colour legend for the hoop stress, vertical (at most @room high) or
  * horizontal */
 void     hl_stress_legend_size   (HlFigure     *f,

@@ -221,12 +221,9 @@ draw_ring (HlFigure *f,
   cairo_t *cr = f->cr;
   double s = f->geom->section.px_per_m;
   double ra = f->sol->a * s, rb = f->sol->b * s;
-  cairo_pattern_t *shade = hl_wall_shading (f, p->cx, p->cy, s);
 
   annulus (cr, p->cx, p->cy, MAX (ra, p->a_cor * s), rb);
-  cairo_set_source (cr, shade);
-  cairo_fill (cr);
-  cairo_pattern_destroy (shade);
+  hl_wall_fill (f, p->cx, p->cy, s, MAX (ra, p->a_cor * s) / s, rb / s);
   if (p->a_cor > p->a_new)
     {
       annulus (cr, p->cx, p->cy, p->a_new * s, p->a_cor * s);

@@ -219,6 +219,9 @@ hl_figure_draw_full (cairo_t               *cr,
   f.geom->font_size = f.text->base;
 
   cairo_save (cr);
+  /* a quarter of a device unit keeps curves smooth and flattens the big
+   * circles into half the pieces of cairo's default tenth */
+  cairo_set_tolerance (cr, 0.25);
   cairo_rectangle (cr, 0, 0, width, height);
   hl_palette_set_source (cr, f.pal->paper);
   cairo_fill (cr);
@@ -252,6 +255,7 @@ hl_figure_draw_full (cairo_t               *cr,
       f.text->boxes = NULL;
     }
   hl_text_free (f.text);
+  g_clear_pointer (&f.hatch_tile, cairo_surface_destroy);
 }
 
 void

@@ -62,10 +62,14 @@ hl_palette_set_dash (cairo_t *cr,
                      HlDash   dash,
                      double   unit)
 {
+  /* butt caps throughout: round-capped dots cost a polygon each, and
+   * short square dashes read as dots at line widths of a unit or two */
   double dashed[] = { 5 * unit, 3 * unit };
-  double dotted[] = { 0.01 * unit, 2.4 * unit };
-  double dash_dot[] = { 7 * unit, 2.5 * unit, 0.01 * unit, 2.5 * unit };
+  double dotted[] = { 1.2 * unit, 1.6 * unit };
+  double dash_dot[] = { 7 * unit, 2 * unit, 1.2 * unit, 2 * unit };
   double long_dash[] = { 11 * unit, 3.5 * unit };
+
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
 
   switch (dash)
     {
@@ -73,12 +77,9 @@ hl_palette_set_dash (cairo_t *cr,
       cairo_set_dash (cr, dashed, G_N_ELEMENTS (dashed), 0);
       break;
     case HL_DASH_DOTTED:
-      /* round caps turn the near-zero dashes into dots */
-      cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
       cairo_set_dash (cr, dotted, G_N_ELEMENTS (dotted), 0);
       break;
     case HL_DASH_DASH_DOT:
-      cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
       cairo_set_dash (cr, dash_dot, G_N_ELEMENTS (dash_dot), 0);
       break;
     case HL_DASH_LONG:

@@ -21,22 +21,64 @@ static const struct
   [HL_FONT_VALUE] = { 1.0, PANGO_WEIGHT_SEMIBOLD },
 };
 
+/* bounded: a window resized through many sizes would otherwise keep
+ * every size of every string */
+#define CACHE_MAX 4096
+
+typedef struct
+{
+  PangoContext *context;
+  GHashTable   *layouts;
+} Cache;
+
+static void
+cache_free (gpointer data)
+{
+  Cache *c = data;
+
+  g_hash_table_unref (c->layouts);
+  g_object_unref (c->context);
+  g_free (c);
+}
+
+static GPrivate cache_key = G_PRIVATE_INIT (cache_free);
+
+static Cache *
+cache_get (void)
+{
+  Cache *c = g_private_get (&cache_key);
+
+  if (c == NULL)
+    {
+      cairo_font_options_t *options = cairo_font_options_create ();
+
+      c = g_new0 (Cache, 1);
+      c->context = pango_font_map_create_context (pango_cairo_font_map_get_default ());
+      /* unhinted metrics: the same widths on every surface and scale, so
+       * a layout that fits on screen fits in the PDF too */
+      cairo_font_options_set_hint_metrics (options, CAIRO_HINT_METRICS_OFF);
+      cairo_font_options_set_hint_style (options, CAIRO_HINT_STYLE_NONE);
+      pango_cairo_context_set_font_options (c->context, options);
+      cairo_font_options_destroy (options);
+      c->layouts = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_object_unref);
+      g_private_set (&cache_key, c);
+    }
+  return c;
+}
+
+void
+hl_text_cache_clear (void)
+{
+  g_hash_table_remove_all (cache_get ()->layouts);
+}
+
 HlText *
 hl_text_new (cairo_t *cr,
              double   base_size)
 {
   HlText *t = g_new0 (HlText, 1);
-  cairo_font_options_t *options = cairo_font_options_create ();
 
   t->cr = cr;
-  t->layout = pango_cairo_create_layout (cr);
-  /* unhinted metrics: the same widths on every surface and scale, so a
-   * layout that fits on screen fits in the PDF too */
-  cairo_font_options_set_hint_metrics (options, CAIRO_HINT_METRICS_OFF);
-  cairo_font_options_set_hint_style (options, CAIRO_HINT_STYLE_NONE);
-  pango_cairo_context_set_font_options (pango_layout_get_context (t->layout), options);
-  pango_layout_context_changed (t->layout);
-  cairo_font_options_destroy (options);
   for (int i = 0; i < HL_N_FONTS; i++)
     {
       t->fonts[i] = pango_font_description_from_string ("Sans");
@@ -53,7 +95,6 @@ hl_text_free (HlText *t)
     return;
   for (int i = 0; i < HL_N_FONTS; i++)
     pango_font_description_free (t->fonts[i]);
-  g_clear_object (&t->layout);
   if (t->boxes != NULL)
     g_array_unref (t->boxes);
   g_free (t);
@@ -75,24 +116,43 @@ hl_text_size (HlText     *t,
   return t->base * roles[role].scale;
 }
 
-static void
+/* the laid-out string: from the cache, or made and kept */
+static PangoLayout *
 prepare (HlText     *t,
          HlFontRole  role,
          const char *str,
          double      wrap,
-         double      ax)
+         double      ax,
+         double      ellipsize_width)
 {
-  pango_layout_set_font_description (t->layout, t->fonts[role]);
-  if (wrap > 0)
+  /* alignment only matters to wrapped lines: one key for the rest */
+  PangoAlignment align = wrap <= 0 ? PANGO_ALIGN_LEFT : ax > 0.75 ? PANGO_ALIGN_RIGHT
+                         : ax > 0.25 ? PANGO_ALIGN_CENTER : PANGO_ALIGN_LEFT;
+  Cache *c = cache_get ();
+  g_autofree char *key = g_strdup_printf ("%d %d %d %d %d %s", role, (int) lround (t->base * 256),
+                                          (int) lround (wrap * 64), align, (int) lround (ellipsize_width * 64), str);
+  PangoLayout *l = g_hash_table_lookup (c->layouts, key);
+
+  if (l != NULL)
+    return l;
+  if (g_hash_table_size (c->layouts) >= CACHE_MAX)
+    g_hash_table_remove_all (c->layouts);
+  l = pango_layout_new (c->context);
+  pango_layout_set_font_description (l, t->fonts[role]);
+  if (ellipsize_width > 0)
     {
-      pango_layout_set_width (t->layout, (int) (wrap * PANGO_SCALE));
-      pango_layout_set_wrap (t->layout, PANGO_WRAP_WORD_CHAR);
+      pango_layout_set_width (l, (int) (ellipsize_width * PANGO_SCALE));
+      pango_layout_set_ellipsize (l, PANGO_ELLIPSIZE_END);
     }
-  else
-    pango_layout_set_width (t->layout, -1);
-  pango_layout_set_alignment (t->layout, ax > 0.75 ? PANGO_ALIGN_RIGHT : ax > 0.25 ? PANGO_ALIGN_CENTER
-                                                                                  : PANGO_ALIGN_LEFT);
-  pango_layout_set_text (t->layout, str, -1);
+  else if (wrap > 0)
+    {
+      pango_layout_set_width (l, (int) (wrap * PANGO_SCALE));
+      pango_layout_set_wrap (l, PANGO_WRAP_WORD_CHAR);
+    }
+  pango_layout_set_alignment (l, align);
+  pango_layout_set_text (l, str, -1);
+  g_hash_table_insert (c->layouts, g_steal_pointer (&key), l);
+  return l;
 }
 
 void
@@ -105,8 +165,7 @@ hl_text_measure (HlText     *t,
 {
   PangoRectangle logical;
 
-  prepare (t, role, str, wrap, 0);
-  pango_layout_get_extents (t->layout, NULL, &logical);
+  pango_layout_get_extents (prepare (t, role, str, wrap, 0, 0), NULL, &logical);
   if (width != NULL)
     *width = (double) logical.width / PANGO_SCALE;
   if (height != NULL)
@@ -114,17 +173,18 @@ hl_text_measure (HlText     *t,
 }
 
 static HlRect
-show (HlText *t,
-      double  x,
-      double  y,
-      double  ax,
-      double  ay,
-      HlRgb   colour)
+show (HlText      *t,
+      PangoLayout *layout,
+      double       x,
+      double       y,
+      double       ax,
+      double       ay,
+      HlRgb        colour)
 {
   PangoRectangle logical;
   HlRect box;
 
-  pango_layout_get_extents (t->layout, NULL, &logical);
+  pango_layout_get_extents (layout, NULL, &logical);
   box.width = (double) logical.width / PANGO_SCALE;
   box.height = (double) logical.height / PANGO_SCALE;
   box.x = x - ax * box.width;
@@ -134,7 +194,7 @@ show (HlText *t,
   /* wrapped layouts are as wide as the wrap width; logical.x shifts the
    * ink to the aligned side */
   cairo_move_to (t->cr, box.x - (double) logical.x / PANGO_SCALE, box.y - (double) logical.y / PANGO_SCALE);
-  pango_cairo_show_layout (t->cr, t->layout);
+  pango_cairo_show_layout (t->cr, layout);
   cairo_restore (t->cr);
   if (t->boxes != NULL)
     g_array_append_val (t->boxes, box);
@@ -152,8 +212,7 @@ hl_text_draw (HlText     *t,
               double      wrap,
               HlRgb       colour)
 {
-  prepare (t, role, str, wrap, ax);
-  return show (t, x, y, ax, ay, colour);
+  return show (t, prepare (t, role, str, wrap, ax, 0), x, y, ax, ay, colour);
 }
 
 HlRect
@@ -165,14 +224,7 @@ hl_text_draw_line (HlText     *t,
                    double      width,
                    HlRgb       colour)
 {
-  HlRect r;
-
-  prepare (t, role, str, 0, 0);
-  pango_layout_set_width (t->layout, (int) (MAX (width, 1) * PANGO_SCALE));
-  pango_layout_set_ellipsize (t->layout, PANGO_ELLIPSIZE_END);
-  r = show (t, x, y, 0, 0, colour);
-  pango_layout_set_ellipsize (t->layout, PANGO_ELLIPSIZE_NONE);
-  return r;
+  return show (t, prepare (t, role, str, 0, 0, MAX (width, 1)), x, y, 0, 0, colour);
 }
 
 HlRect
@@ -183,12 +235,12 @@ hl_text_draw_up (HlText     *t,
                  double      y,
                  HlRgb       colour)
 {
+  PangoLayout *layout = prepare (t, role, str, 0, 0, 0);
   PangoRectangle logical;
   HlRect box;
   double w, h;
 
-  prepare (t, role, str, 0, 0);
-  pango_layout_get_extents (t->layout, NULL, &logical);
+  pango_layout_get_extents (layout, NULL, &logical);
   w = (double) logical.width / PANGO_SCALE;
   h = (double) logical.height / PANGO_SCALE;
   cairo_save (t->cr);
@@ -196,10 +248,10 @@ hl_text_draw_up (HlText     *t,
   cairo_translate (t->cr, x, y);
   cairo_rotate (t->cr, -G_PI / 2);
   cairo_move_to (t->cr, -w / 2, -h / 2);
-  pango_cairo_update_layout (t->cr, t->layout);
-  pango_cairo_show_layout (t->cr, t->layout);
+  /* unhinted metrics do not change with the rotation: the layout made
+   * for the upright context draws turned as it is */
+  pango_cairo_show_layout (t->cr, layout);
   cairo_restore (t->cr);
-  pango_cairo_update_layout (t->cr, t->layout);
   box.x = x - h / 2;
   box.y = y - w / 2;
   box.width = h;

@@ -1,7 +1,10 @@
 /* hl-text.h — Pango text for the figure: measure, place, remember
  *
- * One PangoLayout is reused for every string of a figure; metrics are
- * unhinted so a figure lays out the same on screen, in PDF and in PNG.
+ * A figure measures most strings before it draws them, and the window
+ * redraws the same figure often: each string is laid out once per font
+ * size and kept in a cache of the calling thread.  Metrics are unhinted,
+ * so a figure lays out the same on screen, in PDF and in PNG, and one
+ * layout serves every surface.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -33,7 +36,6 @@ typedef struct
 typedef struct
 {
   cairo_t              *cr;
-  PangoLayout          *layout;
   PangoFontDescription *fonts[HL_N_FONTS];
   double                base;
   GArray               *boxes;   /* HlRect of every string drawn, or NULL */
@@ -82,6 +84,9 @@ HlRect  hl_text_draw_up  (HlText     *text,
                           double      x,
                           double      y,
                           HlRgb       colour);
+
+/* empties the calling thread's cache of laid-out strings */
+void     hl_text_cache_clear (void);
 
 gboolean hl_rect_overlaps (const HlRect *a,
                            const HlRect *b);
