@@ -85,6 +85,45 @@ check_finite (const char *name,
     fuzz_fail ("%s is %g", name, value);
 }
 
+/* Physics any Lamé field obeys, whatever the numbers:
+ *  - the radial stress meets the surface pressures, sigma_r(a) = -pi and
+ *    sigma_r(b) = -po (Timoshenko, Strength of Materials Part II, thick
+ *    cylinders; the same boundary conditions hold for the sphere);
+ *  - Tresca >= von Mises >= (sqrt 3 / 2) Tresca for any stress state
+ *    (Hill, The Mathematical Theory of Plasticity, 1950; from memory).
+ * The tolerance is relative to the largest stress in the wall, which
+ * sets the round-off of the differences of nearly equal terms. */
+static void
+check_physics (const HlSolution *s)
+{
+  const HlWallPoint *inner = &s->points[0];
+  const HlWallPoint *outer = &s->points[s->n_points - 1];
+  double scale = fabs (s->pi) + fabs (s->po);
+
+  for (guint i = 0; i < s->n_points; i++)
+    scale = MAX (scale, fabs (s->points[i].hoop));
+  if (inner->r != s->a || outer->r != s->b)
+    fuzz_fail ("the points do not start on a and end on b");
+  if (fabs (inner->radial + s->pi) > 1e-6 * scale || fabs (outer->radial + s->po) > 1e-6 * scale)
+    fuzz_fail ("radial stress %.17g at a and %.17g at b for pressures %.17g and %.17g",
+               inner->radial, outer->radial, s->pi, s->po);
+  for (guint i = 0; i < s->n_points; i++)
+    {
+      const HlWallPoint *p = &s->points[i];
+
+      /* squares of stresses below ~1e-154 Pa underflow */
+      if (p->tresca < 1e-140)
+        continue;
+      if (p->von_mises > p->tresca * (1 + 1e-12) || p->von_mises < p->tresca * sqrt (3.0) / 2 * (1 - 1e-12))
+        fuzz_fail ("point %u: von Mises %.17g outside the Tresca bounds of %.17g", i, p->von_mises, p->tresca);
+    }
+  /* the summary's surface values are the table's end points */
+  if (hl_result_ok (s->lame_hoop_inner) && s->lame_hoop_inner.value != inner->hoop)
+    fuzz_fail ("inner hoop stress %.17g in the summary, %.17g in the table", s->lame_hoop_inner.value, inner->hoop);
+  if (hl_result_ok (s->lame_hoop_outer) && s->lame_hoop_outer.value != outer->hoop)
+    fuzz_fail ("outer hoop stress %.17g in the summary, %.17g in the table", s->lame_hoop_outer.value, outer->hoop);
+}
+
 void
 fuzz_check_solution (const HlSolution *s)
 {
@@ -124,6 +163,8 @@ fuzz_check_solution (const HlSolution *s)
       if (p->r < s->a || p->r > s->b || (i > 0 && p->r < s->points[i - 1].r))
         fuzz_fail ("point %u at r=%.17g outside [%.17g, %.17g] or out of order", i, p->r, s->a, s->b);
     }
+
+  check_physics (s);
 
   rows = hl_result_rows (s);
   for (guint i = 0; i < rows->len; i++)
