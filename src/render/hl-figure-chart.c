@@ -333,9 +333,9 @@ hl_chart_draw (HlFigure     *f,
       const double cand[][4] = {
         { x + o, y - o, 0, 1 }, { x + o, y + o, 0, 0 }, { x - o, y - o, 1, 1 }, { x - o, y + o, 1, 0 },
         { x + o, y - 2.5 * o, 0, 1 }, { x + o, y + 2.5 * o, 0, 0 }, { x - o, y - 2.5 * o, 1, 1 },
-        { x - o, y + 2.5 * o, 1, 0 }, { x, y - 1.5 * o, 0.5, 1 }, { x, y + 1.5 * o, 0.5, 0 },
-        { x, y - 1.5 * o, 0.8, 1 }, { x, y + 1.5 * o, 0.8, 0 }, { x, y - 1.5 * o, 0.2, 1 },
-        { x, y + 1.5 * o, 0.2, 0 }, { x + 3 * o, y + 4 * o, 0, 0 }, { x + 3 * o, y - 4 * o, 0, 1 },
+        { x - o, y + 2.5 * o, 1, 0 }, { x, y - 1.8 * o, 0.5, 1 }, { x, y + 1.8 * o, 0.5, 0 },
+        { x, y - 1.8 * o, 0.8, 1 }, { x, y + 1.8 * o, 0.8, 0 }, { x, y - 1.8 * o, 0.2, 1 },
+        { x, y + 1.8 * o, 0.2, 0 }, { x + 3 * o, y + 4 * o, 0, 0 }, { x + 3 * o, y - 4 * o, 0, 1 },
         { x - 3 * o, y + 4 * o, 1, 0 }, { x - 3 * o, y - 4 * o, 1, 1 }, { x + 3 * o, y + 7 * o, 0, 0 },
         { x - 3 * o, y + 7 * o, 1, 0 }, { x + 3 * o, y - 7 * o, 0, 1 }, { x - 3 * o, y - 7 * o, 1, 1 },
       };
@@ -343,7 +343,7 @@ hl_chart_draw (HlFigure     *f,
       g->design_x = x;
       g->design_y = y;
       /* the marker goes over its leader: draw it after the label */
-      obs.boxes[obs.n_boxes++] = (HlRect) { x - o, y - o, 2 * o, 2 * o };
+      obs.boxes[obs.n_boxes++] = (HlRect) { x - 0.75 * o, y - 0.75 * o, 1.5 * o, 1.5 * o };
       place (f, &obs, HL_FONT_SMALL, label, cand, G_N_ELEMENTS (cand), x, y, f->pal->ink);
       hl_marker (f, x, y, 0.9 * f->text->base);
     }

@@ -361,12 +361,25 @@ layout (HlFigure     *f,
   hl_axes_layout (f, &l->body, hl_stress_value (f, lo), hl_stress_value (f, hi), &g->y, &g->area, &l->th);
   {
     double x_lo = hl_length_value (f, p->a_new), x_hi = hl_length_value (f, f->sol->b);
-    double widest;
-    g_autofree char *s = hl_figure_format_sig (x_hi, 5, f->locale);
 
-    /* labels like "600.5" need more room than "10": size ticks by them */
-    hl_text_measure (f->text, HL_FONT_SMALL, s, 0, &widest, NULL);
-    hl_axis_linear (&g->x, x_lo, x_hi, (guint) CLAMP (g->area.width / (widest + 2.5 * f->text->base), 2, 10), FALSE);
+    /* as many ticks as their labels leave a gap between: try dense,
+     * thin out until they fit */
+    for (guint target = 10; target >= 2; target--)
+      {
+        double widest = 0;
+
+        hl_axis_linear (&g->x, x_lo, x_hi, target, FALSE);
+        for (guint i = 0; i < g->x.n_ticks; i++)
+          {
+            g_autofree char *s = hl_axis_label (&g->x, g->x.ticks[i], f->locale);
+            double w;
+
+            hl_text_measure (f->text, HL_FONT_SMALL, s, 0, &w, NULL);
+            widest = MAX (widest, w);
+          }
+        if (g->x.n_ticks * (widest + 1.5 * f->text->base) <= g->area.width)
+          break;
+      }
   }
   hl_axis_place (&g->x, g->area.x, g->area.x + g->area.width);
 }

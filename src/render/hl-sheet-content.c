@@ -315,7 +315,7 @@ hl_sheet_rows (const HlFigureContext *ctx)
   verdict (rows, ctx);
   methods (rows, ctx);
   warnings (rows, ctx);
-  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, "Caution");
-  add (rows, HL_SHEET_BOX, NULL, FALSE, 1, HL_CAUTION);
+  /* the caution stands boxed under the header and in every page's
+   * footer; a closing copy would only push a page of its own */
   return rows;
 }
