@@ -169,6 +169,7 @@ scale_bar_size (HlFigure *f,
   double th, tw;
   g_autofree char *num = hl_figure_format_sig (value, 3, f->locale);
 
+  g_free (*label);
   *label = g_strdup_printf ("%s" HL_NBSP "%s", num, hl_length_unit (f));
   hl_text_measure (f->text, HL_FONT_TINY, *label, 0, &tw, &th);
   *len = value / unit_si * (R / p->b);
