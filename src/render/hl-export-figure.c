@@ -13,8 +13,12 @@
 
 #include <cairo-pdf.h>
 #include <cairo-svg.h>
+#include <errno.h>
+#include <fcntl.h>
 #include <gio/gio.h>
+#include <glib/gstdio.h>
 #include <string.h>
+#include <unistd.h>
 
 gboolean
 hl_export_parse_size (const char     *text,
@@ -213,6 +217,21 @@ hl_export_figure_file (const char            *path,
   if (!hl_atomic_check_target (path, error))
     return FALSE;
   temp = hl_atomic_temp_name (path);
+  /* cairo reports a folder that takes no files only as a write error;
+   * making the temporary first gives the reason in the system's words */
+  {
+    int fd = g_open (temp, O_WRONLY | O_CREAT | O_EXCL, 0644);
+
+    if (fd < 0)
+      {
+        int saved = errno;
+
+        g_set_error (error, G_FILE_ERROR, g_file_error_from_errno (saved), "cannot write “%s”: %s", path,
+                     g_strerror (saved));
+        return FALSE;
+      }
+    close (fd);
+  }
   if (!write_to (temp, path, format, width, height, ctx, figure_only, &local))
     {
       hl_atomic_abandon (temp);

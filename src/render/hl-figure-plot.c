@@ -110,11 +110,11 @@ plan_subtitle (HlFigure *f,
     {
       g_autofree char *err = hl_figure_format_sig (sol->thin_wall_error.value, 2, f->locale);
 
-      p->subtitle = g_strdup_printf ("Peak Lamé σθ %s at the %s surface; thin wall %s, %s" HL_NBSP "%% of the peak",
+      p->subtitle = g_strdup_printf ("Peak Lamé σθ %s (%s surface); thin wall σθ %s; difference %s" HL_NBSP "%%",
                                      peak_s, inner ? "inner" : "outer", thin_s, err);
     }
   else
-    p->subtitle = g_strdup_printf ("Peak Lamé σθ %s; thin wall %s", peak_s, thin_s);
+    p->subtitle = g_strdup_printf ("Peak Lamé σθ %s; thin wall σθ %s", peak_s, thin_s);
 }
 
 static void
