@@ -68,6 +68,7 @@ take_value (Bytes *b,
     DBL_MIN, DBL_MAX, DBL_EPSILON, 5e-324, NAN, INFINITY, -INFINITY,
   };
   guint8 mode = take_byte (b);
+  guint high, low;
   double mantissa;
   int exponent;
 
@@ -78,7 +79,11 @@ take_value (Bytes *b,
     case 1:
       return specials[take_pick (b, G_N_ELEMENTS (specials))];
     default:
-      mantissa = (take_byte (b) << 8 | take_byte (b)) / 6553.6;  /* 0 .. 10 */
+      /* two statements: the order of calls within one expression is
+       * unspecified, and the corpus must decode the same everywhere */
+      high = take_byte (b);
+      low = take_byte (b);
+      mantissa = (high << 8 | low) / 6553.6;  /* 0 .. 10 */
       exponent = lo_exp + (int) take_pick (b, hi_exp - lo_exp + 1);
       return (mode % 16 == 2 ? -mantissa : mantissa) * pow (10.0, exponent);
     }
