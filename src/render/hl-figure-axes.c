@@ -88,18 +88,42 @@ hl_axes_draw (HlFigure     *f,
       cairo_line_to (cr, a->x, p);
       hl_text_draw (f->text, HL_FONT_SMALL, s, a->x - tick - 0.2 * f->text->base, p, 1, 0.5, 0, f->pal->ink);
     }
-  for (guint i = 0; i < x->n_ticks; i++)
-    {
-      double p = hl_axis_map (x, x->ticks[i]);
-      g_autofree char *s = hl_axis_label (x, x->ticks[i], f->locale);
-      /* labels on the corners stay inside the frame's width, clear of
-       * the lowest y label and of the next panel */
-      double ax = fabs (p - a->x) < 0.5 ? 0 : fabs (p - a->x - a->width) < 0.5 ? 1 : 0.5;
+  /* x labels by rank: a log axis labels its decades first, then 2 and
+   * 5 where they fit between; a label that would touch one already
+   * placed is left out, its tick stays */
+  {
+    HlRect placed[HL_AXIS_MAX_TICKS];
+    guint n_placed = 0;
 
-      cairo_move_to (cr, p, a->y + a->height);
-      cairo_line_to (cr, p, a->y + a->height + tick);
-      hl_text_draw (f->text, HL_FONT_SMALL, s, p, a->y + a->height + tick, ax, 0, 0, f->pal->ink);
-    }
+    for (int rank = 0; rank < (x->log ? 2 : 1); rank++)
+      for (guint i = 0; i < x->n_ticks; i++)
+        {
+          double p = hl_axis_map (x, x->ticks[i]);
+          double mant = x->ticks[i] / pow (10, floor (log10 (x->ticks[i]) + 1e-9));
+          gboolean decade = !x->log || fabs (mant - 1) < 1e-6;
+          g_autofree char *s = NULL;
+          /* labels on the corners stay inside the frame's width, clear
+           * of the lowest y label and of the next panel */
+          double ax = fabs (p - a->x) < 0.5 ? 0 : fabs (p - a->x - a->width) < 0.5 ? 1 : 0.5;
+          double w, h;
+          HlRect r;
+          gboolean clear = TRUE;
+
+          if (decade != (rank == 0))
+            continue;
+          cairo_move_to (cr, p, a->y + a->height);
+          cairo_line_to (cr, p, a->y + a->height + tick);
+          s = hl_axis_label (x, x->ticks[i], f->locale);
+          hl_text_measure (f->text, HL_FONT_SMALL, s, 0, &w, &h);
+          r = (HlRect) { p - ax * w - 0.3 * f->text->base, a->y + a->height + tick, w + 0.6 * f->text->base, h };
+          for (guint k = 0; k < n_placed && clear; k++)
+            clear = !hl_rect_overlaps (&r, &placed[k]);
+          if (!clear)
+            continue;
+          placed[n_placed++] = r;
+          hl_text_draw (f->text, HL_FONT_SMALL, s, p, a->y + a->height + tick, ax, 0, 0, f->pal->ink);
+        }
+  }
   for (guint i = 0; i < x->n_minor; i++)
     {
       double p = hl_axis_map (x, x->minor[i]);

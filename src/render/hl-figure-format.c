@@ -53,6 +53,18 @@ hl_figure_format_sig (double   value,
                       int      digits,
                       gboolean locale)
 {
+  /* a reader of a figure gets 0.000001, not 1e-06: fixed decimals down
+   * to a billionth, trailing zeros trimmed */
+  if (value != 0 && fabs (value) < 1e-4 && fabs (value) >= 1e-9)
+    {
+      int decimals = digits - 1 - (int) floor (log10 (fabs (value)));
+      char *s = hl_figure_format_fixed (value, MIN (decimals, 12), locale);
+      char *end = s + strlen (s) - 1;
+
+      while (end > s && *end == '0')
+        *end-- = '\0';
+      return s;
+    }
   return true_minus (locale ? hl_format_display (value, digits) : hl_format_significant (value, digits));
 }
 

@@ -31,6 +31,7 @@ typedef struct
   double bar_len, bar_thick;
   double title_w, title_h, label_w, label_h;
   double hatch_w, hatch_h;
+  double end_gap;
   gboolean band;
 } Legend;
 
@@ -52,6 +53,12 @@ legend_plan (HlFigure *f,
 
   hoop_range (f->sol, &lo, &hi);
   hl_axis_linear (&l->axis, hl_stress_value (f, lo), hl_stress_value (f, hi), vertical ? 4 : 3, FALSE);
+  /* one stress all through the wall (no load): one colour, one value */
+  if (!(hi > lo))
+    {
+      l->axis.n_ticks = 1;
+      l->axis.ticks[0] = hl_stress_value (f, lo);
+    }
   l->label_w = l->label_h = 0;
   for (guint i = 0; i < l->axis.n_ticks; i++)
     {
@@ -78,8 +85,10 @@ legend_plan (HlFigure *f,
     }
   l->bar_thick = 0.8 * f->text->base;
   l->bar_len = 9 * f->text->base;
+  /* the end labels stand half their height beyond the bar */
+  l->end_gap = MAX (f->gap, l->label_h / 2 + 0.15 * f->text->base);
   if (vertical)
-    l->bar_len = CLAMP (room - l->title_h - f->gap - (l->band ? f->gap + l->hatch_h : 0), 3 * f->text->base,
+    l->bar_len = CLAMP (room - l->title_h - 2 * l->end_gap - (l->band ? l->hatch_h : 0), 3 * f->text->base,
                         l->bar_len);
 }
 
@@ -97,7 +106,7 @@ hl_stress_legend_size (HlFigure *f,
   if (vertical)
     {
       *width = MAX (MAX (l.title_w, l.bar_thick + tick + l.label_w + 0.3 * f->text->base), l.hatch_w);
-      *height = l.title_h + f->gap + l.bar_len + (l.band ? f->gap + l.hatch_h : 0);
+      *height = l.title_h + l.end_gap + l.bar_len + (l.band ? l.end_gap + l.hatch_h : 0);
     }
   else
     {
@@ -159,10 +168,18 @@ draw_bar (HlFigure     *f,
   cairo_set_line_width (cr, 0.6 * f->lw);
   hl_palette_set_source (cr, f->pal->ink);
   cairo_stroke (cr);
-  if (vertical)
-    hl_axis_place (&l->axis, bar->y + bar->height, bar->y);
-  else
-    hl_axis_place (&l->axis, bar->x, bar->x + bar->width);
+  /* the bar runs light to dark, bottom to top or left to right; the
+   * lowest stress sits at the light end, the most negative one at the
+   * dark end when the wall is in compression */
+  {
+    double light = vertical ? bar->y + bar->height : bar->x;
+    double dark = vertical ? bar->y : bar->x + bar->width;
+
+    if (hl_wall_scale_reversed (f->sol))
+      hl_axis_place (&l->axis, dark, light);
+    else
+      hl_axis_place (&l->axis, light, dark);
+  }
   for (guint i = 0; i < l->axis.n_ticks; i++)
     {
       double p = hl_axis_map (&l->axis, l->axis.ticks[i]);
@@ -204,12 +221,12 @@ hl_stress_legend_draw (HlFigure     *f,
       HlRect r = hl_text_draw (f->text, HL_FONT_TINY, t, area->x, area->y, 0, 0, 7 * f->text->base, f->pal->ink);
 
       bar.x = area->x;
-      bar.y = r.y + r.height + f->gap;
+      bar.y = r.y + r.height + l.end_gap;
       bar.width = l.bar_thick;
       bar.height = l.bar_len;
       draw_bar (f, &l, &bar, TRUE);
       if (l.band)
-        hatch_swatch (f, area->x, bar.y + bar.height + f->gap, 5.5 * f->text->base);
+        hatch_swatch (f, area->x, bar.y + bar.height + l.end_gap, 5.5 * f->text->base);
     }
   else
     {

@@ -60,8 +60,11 @@ void     hl_wall_fill            (HlFigure     *f,
                                   double        px_per_m,
                                   double        r0,
                                   double        r1);
+/* where @hoop sits on the colour scale, 0..1; reversed for a wall in
+ * compression, whose key then runs from the least to the most negative */
 double   hl_wall_scale_position  (const HlSolution *sol,
                                   double            hoop);
+gboolean hl_wall_scale_reversed  (const HlSolution *sol);
 /* colour legend for the hoop stress, vertical (at most @room high) or
  * horizontal */
 void     hl_stress_legend_size   (HlFigure     *f,

@@ -126,14 +126,26 @@ hoop_at (const HlSolution *sol,
   return sol->points[i].hoop + (x - i) * (sol->points[i + 1].hoop - sol->points[i].hoop);
 }
 
+gboolean
+hl_wall_scale_reversed (const HlSolution *sol)
+{
+  double lo, hi;
+
+  /* a wall all in compression (external pressure) is darkest where the
+   * hoop stress is most negative: the scale follows the magnitude */
+  hoop_range (sol, &lo, &hi);
+  return hi <= 0 && lo < 0;
+}
+
 double
 hl_wall_scale_position (const HlSolution *sol,
                         double            hoop)
 {
-  double lo, hi;
+  double lo, hi, t;
 
   hoop_range (sol, &lo, &hi);
-  return hi > lo ? (hoop - lo) / (hi - lo) : 0.5;
+  t = hi > lo ? (hoop - lo) / (hi - lo) : 0.5;
+  return hl_wall_scale_reversed (sol) ? 1 - t : t;
 }
 
 static cairo_pattern_t *
@@ -183,7 +195,7 @@ wall_pixels (HlFigure *f,
   const HlSolution *sol = f->sol;
   cairo_t *cr = f->cr;
   Raster r;
-  double x0, y0, lo, hi;
+  double x0, y0;
   int w, h, stride;
   cairo_surface_t *img;
   unsigned char *data;
@@ -192,12 +204,10 @@ wall_pixels (HlFigure *f,
   /* a circle stays a circle in pixels only under a uniform scale */
   if (!raster_of (cr, &r) || fabs (r.sx - r.sy) > 1e-9 || !pixel_box (cr, &r, &x0, &y0, &w, &h))
     return FALSE;
-  hoop_range (sol, &lo, &hi);
   for (int k = 0; k < LUT_SIZE; k++)
     {
       double r2 = sol->a * sol->a + (sol->b * sol->b - sol->a * sol->a) * k / (LUT_SIZE - 1);
-      double hoop = hoop_at (sol, sqrt (r2));
-      HlRgb c = hl_palette_scale (hi > lo ? (hoop - lo) / (hi - lo) : 0.5);
+      HlRgb c = hl_palette_scale (hl_wall_scale_position (sol, hoop_at (sol, sqrt (r2))));
 
       lut[k] = 0xff000000u | (guint32) lround (c.r * 255) << 16 | (guint32) lround (c.g * 255) << 8
                | (guint32) lround (c.b * 255);

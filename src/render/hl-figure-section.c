@@ -366,18 +366,18 @@ hl_section_needs_detail (HlFigure     *f,
                          const HlRect *area)
 {
   Plan p = { 0 };
-  double s, wall_px, band_px;
+  double wall_px;
 
   plan_texts (f, &p, TRUE);
   p.content = *area;
   plan_ring (f, &p);
-  s = p.R / p.b;
-  wall_px = (p.b - p.a_new) * s;
-  band_px = (p.a_cor - p.a_new) * s;
+  wall_px = (p.b - p.a_new) * p.R / p.b;
   plan_clear (&p);
-  /* a wall must show its surfaces, the shading and an arrowed dimension;
-   * a corrosion band must show its hatching */
-  return wall_px < MAX (14.0, 1.6 * f->text->base) || (band_px > 0 && band_px < 4.0);
+  /* a wall must show its surfaces, the shading and an arrowed dimension.
+   * A thin corrosion band on a wall that reads well is left to the
+   * hatching, the label and the plot: a detail of a thick wall would
+   * magnify little */
+  return wall_px < MAX (14.0, 1.6 * f->text->base);
 }
 
 void

@@ -42,9 +42,20 @@ warnings_text (HlFigure *f)
   return g_string_free (s, FALSE);
 }
 
+static gboolean
+verdict_formed (HlFigure *f)
+{
+  const HlSolution *sol = f->sol;
+
+  return hl_result_ok (sol->inputs.verdict_measure == HL_MEASURE_EQUIVALENT ? sol->thin_wall_error_equivalent
+                                                                            : sol->thin_wall_error);
+}
+
 static const char *
 tag_text (HlFigure *f)
 {
+  if (!verdict_formed (f))
+    return "N/A";
   return f->sol->is_thin ? "THIN" : "THICK";
 }
 
@@ -88,7 +99,7 @@ hl_verdict_draw (HlFigure     *f,
   hl_text_measure (f->text, HL_FONT_TITLE, "T", 0, NULL, &th);
   cairo_save (cr);
   cairo_rectangle (cr, area->x, area->y + 0.08 * th, tw, 0.84 * th);
-  hl_palette_set_source (cr, f->sol->is_thin ? f->pal->pass : f->pal->fail);
+  hl_palette_set_source (cr, !verdict_formed (f) ? f->pal->muted : f->sol->is_thin ? f->pal->pass : f->pal->fail);
   cairo_fill (cr);
   cairo_restore (cr);
   hl_text_draw (f->text, HL_FONT_HEADING, tag_text (f), area->x + tw / 2, area->y + th / 2, 0.5, 0.5, 0,

@@ -355,6 +355,45 @@ test_no_overlap (void)
     check_no_overlap (demo, NULL, sizes[k][0], sizes[k][1], HL_FIGURE_STYLE_LIGHT);
 }
 
+/* shells at the edges of what the figure must draw: external pressure,
+ * no load, a wall far thinner than any chart default, a very thick one,
+ * spheres, open and plane-strain ends, radii given instead of diameters */
+static GPtrArray *
+edge_shells (void)
+{
+  GPtrArray *list = g_ptr_array_new_with_free_func (g_free);
+  HlShellInputs base = hl_rt_cylinder (500, 10, 20, 1), *s;
+
+#define ADD(code) (s = g_memdup2 (&base, sizeof base), code, g_ptr_array_add (list, s))
+  ADD ((s->external_pressure = hl_quantity_make (40, "bar"), s->internal_pressure = hl_quantity_make (0, "bar")));
+  ADD ((s->internal_pressure = hl_quantity_make (0, "bar")));
+  ADD ((s->size = hl_quantity_make (5000, "mm"), s->wall_thickness = hl_quantity_make (0.5, "mm"),
+        s->corrosion_allowance = hl_quantity_make (0, "mm")));
+  ADD ((s->size = hl_quantity_make (20, "mm"), s->wall_thickness = hl_quantity_make (90, "mm")));
+  ADD ((s->form = HL_FORM_SPHERE, s->external_pressure = hl_quantity_make (5, "bar")));
+  ADD ((s->ends = HL_ENDS_OPEN, s->size_kind = HL_SIZE_OUTER_RADIUS));
+  ADD ((s->ends = HL_ENDS_PLANE_STRAIN, s->size_kind = HL_SIZE_INNER_RADIUS, s->thin_basis = HL_BASIS_OUTER,
+        s->verdict_measure = HL_MEASURE_EQUIVALENT));
+  ADD ((s->thin_basis = HL_BASIS_INNER, s->corrosion_allowance = hl_quantity_make (8, "mm")));
+#undef ADD
+  return list;
+}
+
+static void
+test_edge_shells (void)
+{
+  static const int sizes[][2] = { { 842, 595 }, { 600, 900 }, { 1920, 1080 }, { 800, 500 } };
+  g_autoptr(GPtrArray) shells = edge_shells ();
+
+  for (guint i = 0; i < shells->len; i++)
+    {
+      g_autoptr(HlSolution) sol = hl_rt_solve (g_ptr_array_index (shells, i));
+
+      for (guint k = 0; k < G_N_ELEMENTS (sizes); k++)
+        check_no_overlap (NULL, sol, sizes[k][0], sizes[k][1], HL_FIGURE_STYLE_LIGHT);
+    }
+}
+
 static void
 test_layouts (void)
 {
@@ -432,6 +471,7 @@ main (int    argc,
   g_test_add_func ("/render/chart/design-point", test_chart_design_point);
   g_test_add_func ("/render/layout/no-overlap", test_no_overlap);
   g_test_add_func ("/render/layout/choice", test_layouts);
+  g_test_add_func ("/render/layout/edge-shells", test_edge_shells);
   g_test_add_func ("/render/problem", test_problem);
   g_test_add_func ("/render/dark", test_dark);
   return g_test_run ();
