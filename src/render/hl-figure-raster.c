@@ -126,26 +126,42 @@ hoop_at (const HlSolution *sol,
   return sol->points[i].hoop + (x - i) * (sol->points[i + 1].hoop - sol->points[i].hoop);
 }
 
+/* a wall all in compression (external pressure) is darkest where the
+ * hoop stress is most negative: the scale follows the magnitude */
+static gboolean
+reversed_range (double lo,
+                double hi)
+{
+  return hi <= 0 && lo < 0;
+}
+
+static double
+position_in (double hoop,
+             double lo,
+             double hi)
+{
+  double t = hi > lo ? (hoop - lo) / (hi - lo) : 0.5;
+
+  return reversed_range (lo, hi) ? 1 - t : t;
+}
+
 gboolean
 hl_wall_scale_reversed (const HlSolution *sol)
 {
   double lo, hi;
 
-  /* a wall all in compression (external pressure) is darkest where the
-   * hoop stress is most negative: the scale follows the magnitude */
   hoop_range (sol, &lo, &hi);
-  return hi <= 0 && lo < 0;
+  return reversed_range (lo, hi);
 }
 
 double
 hl_wall_scale_position (const HlSolution *sol,
                         double            hoop)
 {
-  double lo, hi, t;
+  double lo, hi;
 
   hoop_range (sol, &lo, &hi);
-  t = hi > lo ? (hoop - lo) / (hi - lo) : 0.5;
-  return hl_wall_scale_reversed (sol) ? 1 - t : t;
+  return position_in (hoop, lo, hi);
 }
 
 static cairo_pattern_t *
@@ -195,7 +211,7 @@ wall_pixels (HlFigure *f,
   const HlSolution *sol = f->sol;
   cairo_t *cr = f->cr;
   Raster r;
-  double x0, y0;
+  double x0, y0, lo, hi;
   int w, h, stride;
   cairo_surface_t *img;
   unsigned char *data;
@@ -204,10 +220,11 @@ wall_pixels (HlFigure *f,
   /* a circle stays a circle in pixels only under a uniform scale */
   if (!raster_of (cr, &r) || fabs (r.sx - r.sy) > 1e-9 || !pixel_box (cr, &r, &x0, &y0, &w, &h))
     return FALSE;
+  hoop_range (sol, &lo, &hi);
   for (int k = 0; k < LUT_SIZE; k++)
     {
       double r2 = sol->a * sol->a + (sol->b * sol->b - sol->a * sol->a) * k / (LUT_SIZE - 1);
-      HlRgb c = hl_palette_scale (hl_wall_scale_position (sol, hoop_at (sol, sqrt (r2))));
+      HlRgb c = hl_palette_scale (position_in (hoop_at (sol, sqrt (r2)), lo, hi));
 
       lut[k] = 0xff000000u | (guint32) lround (c.r * 255) << 16 | (guint32) lround (c.g * 255) << 8
                | (guint32) lround (c.b * 255);
