@@ -40,6 +40,10 @@ hl_lame_init (HlLame *lame,
 
       lame->A = (pi * a3 - po * b3) / d;
       lame->B = (pi - po) * a3 * b3 / d;
+      lame->qa = pi * a3 / d;
+      lame->qb = po * b3 / d;
+      lame->an = a3;
+      lame->bn = b3;
     }
   else
     {
@@ -48,6 +52,10 @@ hl_lame_init (HlLame *lame,
 
       lame->A = (pi * a2 - po * b2) / d;
       lame->B = (pi - po) * a2 * b2 / d;
+      lame->qa = pi * a2 / d;
+      lame->qb = po * b2 / d;
+      lame->an = a2;
+      lame->bn = b2;
     }
 }
 

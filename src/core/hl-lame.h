@@ -21,6 +21,11 @@ typedef struct
   double pi, po;
   double E, nu;
   double A, B;
+  /* the same field split by load: A = qa - qb, B = qa b^n - qb a^n with
+   * n = 2 (cylinder) or 3 (sphere).  Evaluating the stresses as
+   * qa (1 -/+ b^n/r^n) - qb (1 -/+ a^n/r^n) makes the free-surface
+   * conditions exact: radial(b) is 0.0, not 1e-15, when po = 0. */
+  double qa, qb, an, bn;
 } HlLame;
 
 typedef struct
@@ -90,18 +95,18 @@ hl_lame_stress (const HlLame *lame,
 
   if (lame->form == HL_FORM_SPHERE)
     {
-      double x = lame->B / (r * r * r);
+      double rn = r * r * r;
 
-      s.radial = lame->A - x;
-      s.hoop = lame->A + x / 2.0;
+      s.radial = lame->qa * (1 - lame->bn / rn) - lame->qb * (1 - lame->an / rn);
+      s.hoop = lame->qa * (1 + lame->bn / (2 * rn)) - lame->qb * (1 + lame->an / (2 * rn));
       s.axial = s.hoop; /* both tangential directions */
       return s;
     }
   {
-    double x = lame->B / (r * r);
+    double rn = r * r;
 
-    s.radial = lame->A - x;
-    s.hoop = lame->A + x;
+    s.radial = lame->qa * (1 - lame->bn / rn) - lame->qb * (1 - lame->an / rn);
+    s.hoop = lame->qa * (1 + lame->bn / rn) - lame->qb * (1 + lame->an / rn);
     switch (lame->ends)
       {
       case HL_ENDS_CLOSED:
