@@ -283,8 +283,9 @@ test_runtime_catalogue (void)
     }
   setlocale (LC_ALL, "C");
   g_assert_cmpuint (missing, ==, 0);
+  /* reported as a skip, not a pass, so that the gap stays visible */
   if (known > 0)
-    g_test_incomplete ("labels the template cannot see yet (see known_gaps)");
+    g_test_skip ("every label but the known gaps has German (see known_gaps)");
 }
 
 int
