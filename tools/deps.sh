@@ -11,7 +11,7 @@ packages=(
   libgtk-4-dev libcairo2-dev libpango1.0-dev libgsl-dev
   # tests: virtual display, validators, locales, figure checks
   xvfb xauth desktop-file-utils appstream locales poppler-utils
-  imagemagick librsvg2-bin valgrind libclang-rt-14-dev
+  imagemagick librsvg2-bin librsvg2-common shared-mime-info valgrind libclang-rt-14-dev
   fonts-dejavu-core
 )
 
