@@ -117,6 +117,7 @@ hl_application_startup (GApplication *application)
   g_autoptr(GtkCssProvider) css = gtk_css_provider_new ();
 
   G_APPLICATION_CLASS (hl_application_parent_class)->startup (application);
+  hl_canvas_trace ("toolkit started");
 
   g_action_map_add_action_entries (G_ACTION_MAP (self), app_entries, G_N_ELEMENTS (app_entries), self);
   for (guint i = 0; i < G_N_ELEMENTS (accels); i++)
@@ -163,7 +164,9 @@ hl_application_open (GApplication  *application,
             target = active;
           else
             target = GTK_WINDOW (hl_window_new (GTK_APPLICATION (application)));
+          hl_canvas_trace ("window built");
           hl_window_load_file (HL_WINDOW (target), files[i]);
+          hl_canvas_trace ("project loaded");
         }
       gtk_window_present (target);
     }

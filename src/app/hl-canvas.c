@@ -35,6 +35,14 @@ hl_canvas_mark_start (void)
     start_time = g_get_monotonic_time ();
 }
 
+void
+hl_canvas_trace (const char *stage)
+{
+  if (start_time != 0 && g_getenv ("HL_TRACE_STARTUP") != NULL)
+    fprintf (stderr, "hoopline: %s %.1f ms after start\n", stage,
+             (g_get_monotonic_time () - start_time) / 1000.0);
+}
+
 gboolean
 hl_canvas_get_dark (HlCanvas *self)
 {

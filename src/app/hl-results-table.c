@@ -112,11 +112,20 @@ rebuild (HlResultsTable *self)
       if (skip_row (row))
         continue;
       row_value (row, units, &number, &unit);
-      shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
+      /* a long "n/a (why)" would widen the whole column: the reason goes
+       * to the tooltip here, and whole into the copied text */
+      if (row->kind != HL_ROW_WORD && !hl_result_ok (row->result))
+        shown = g_strdup (_("n/a"));
+      else
+        shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
       column = n < half ? 0 : 3;
       line = (int) (n < half ? n : n - half);
       name = cell (_(row->label), 0.0f, NULL);
       value = cell (shown, 1.0f, "numeric");
+      gtk_label_set_ellipsize (GTK_LABEL (value), PANGO_ELLIPSIZE_END);
+      gtk_label_set_max_width_chars (GTK_LABEL (value), 28);
+      if (strcmp (shown, number) != 0 && unit[0] == '\0')
+        gtk_widget_set_tooltip_text (value, number);
       if (row->source != NULL)
         gtk_widget_set_tooltip_text (name, row->source);
       gtk_grid_attach (self->grid, name, column, line, 1, 1);
@@ -186,7 +195,7 @@ hl_results_table_init (HlResultsTable *self)
   gtk_widget_set_margin_top (GTK_WIDGET (self->grid), 6);
   gtk_widget_set_margin_bottom (GTK_WIDGET (self->grid), 6);
   self->scroller = gtk_scrolled_window_new ();
-  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (self->scroller), GTK_POLICY_NEVER,
+  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (self->scroller), GTK_POLICY_AUTOMATIC,
                                   GTK_POLICY_AUTOMATIC);
   gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (self->scroller), GTK_WIDGET (self->grid));
   gtk_widget_set_vexpand (self->scroller, TRUE);

@@ -527,14 +527,45 @@ hl_shell_editor_class_init (HlShellEditorClass *klass)
 #undef CALLBACK
 }
 
+/* Material names are long; ellipsized they leave the sidebar its width,
+ * and the open list still shows them whole. */
+static void
+on_material_item_setup_cb (GtkSignalListItemFactory *factory,
+                           GtkListItem              *item,
+                           gpointer                  user_data)
+{
+  GtkWidget *label = gtk_label_new (NULL);
+
+  gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
+  gtk_label_set_xalign (GTK_LABEL (label), 0);
+  gtk_list_item_set_child (item, label);
+}
+
+static void
+on_material_item_bind_cb (GtkSignalListItemFactory *factory,
+                          GtkListItem              *item,
+                          gpointer                  user_data)
+{
+  GtkStringObject *name = gtk_list_item_get_item (item);
+  GtkWidget *label = gtk_list_item_get_child (item);
+
+  gtk_label_set_text (GTK_LABEL (label), gtk_string_object_get_string (name));
+  gtk_widget_set_tooltip_text (label, gtk_string_object_get_string (name));
+}
+
 static void
 hl_shell_editor_init (HlShellEditor *self)
 {
+  g_autoptr(GtkListItemFactory) factory = gtk_signal_list_item_factory_new ();
+
   self->material_ids = g_ptr_array_new_with_free_func (g_free);
   gtk_widget_init_template (GTK_WIDGET (self));
   /* Ctrl+Z belongs to the document's undo, which covers every field */
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->name_entry), FALSE);
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->material_name_entry), FALSE);
+  g_signal_connect (factory, "setup", G_CALLBACK (on_material_item_setup_cb), NULL);
+  g_signal_connect (factory, "bind", G_CALLBACK (on_material_item_bind_cb), NULL);
+  gtk_drop_down_set_factory (self->material_dropdown, factory);
 }
 
 void
