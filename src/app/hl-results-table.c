@@ -27,6 +27,8 @@ struct _HlResultsTable
 
   HlDocument *document;
   GString    *text;
+  GPtrArray  *names;      /* GtkLabel *, one per row, owned by the grid */
+  GPtrArray  *values;
 };
 
 G_DEFINE_FINAL_TYPE (HlResultsTable, hl_results_table, GTK_TYPE_WIDGET)
@@ -56,15 +58,6 @@ row_value (const HlResultRow *row,
   *unit = hl_row_unit (row->kind, units);
 }
 
-static void
-clear_grid (HlResultsTable *self)
-{
-  GtkWidget *child;
-
-  while ((child = gtk_widget_get_first_child (GTK_WIDGET (self->grid))) != NULL)
-    gtk_grid_remove (self->grid, child);
-}
-
 static GtkWidget *
 cell (const char *text,
       float       xalign,
@@ -73,10 +66,55 @@ cell (const char *text,
   GtkWidget *label = gtk_label_new (text);
 
   gtk_label_set_xalign (GTK_LABEL (label), xalign);
-  gtk_label_set_selectable (GTK_LABEL (label), FALSE);
   if (css != NULL)
     gtk_widget_add_css_class (label, css);
   return label;
+}
+
+/* Labels are made once per number of rows and then only relabelled:
+ * typing a value must not rebuild seventy widgets per key. */
+static void
+ensure_cells (HlResultsTable *self,
+              guint           n)
+{
+  guint half = (n + 1) / 2;
+  GtkWidget *child;
+
+  if (self->names->len == n)
+    return;
+  while ((child = gtk_widget_get_first_child (GTK_WIDGET (self->grid))) != NULL)
+    gtk_grid_remove (self->grid, child);
+  g_ptr_array_set_size (self->names, 0);
+  g_ptr_array_set_size (self->values, 0);
+  for (guint i = 0; i < n; i++)
+    {
+      /* two column pairs use the width the canvas leaves */
+      int column = i < half ? 0 : 3;
+      int line = (int) (i < half ? i : i - half);
+      GtkWidget *name = cell (NULL, 0.0f, NULL);
+      GtkWidget *value = cell (NULL, 1.0f, "numeric");
+
+      gtk_label_set_ellipsize (GTK_LABEL (value), PANGO_ELLIPSIZE_END);
+      gtk_label_set_max_width_chars (GTK_LABEL (value), 28);
+      gtk_grid_attach (self->grid, name, column, line, 1, 1);
+      gtk_grid_attach (self->grid, value, column + 1, line, 1, 1);
+      g_ptr_array_add (self->names, name);
+      g_ptr_array_add (self->values, value);
+    }
+  /* a spacer column between the pairs */
+  gtk_grid_attach (self->grid, cell ("", 0.0f, NULL), 2, 0, 1, 1);
+}
+
+/* setting an equal text or tooltip still costs a relayout */
+static void
+set_label (GtkLabel   *label,
+           const char *text,
+           const char *tooltip)
+{
+  if (g_strcmp0 (gtk_label_get_text (label), text) != 0)
+    gtk_label_set_text (label, text);
+  if (g_strcmp0 (gtk_widget_get_tooltip_text (GTK_WIDGET (label)), tooltip) != 0)
+    gtk_widget_set_tooltip_text (GTK_WIDGET (label), tooltip);
 }
 
 static void
@@ -85,9 +123,8 @@ rebuild (HlResultsTable *self)
   const HlSolution *solution = hl_document_get_solution (self->document);
   HlUnitSystem units = hl_document_get_project (self->document)->display_units;
   g_autoptr(GArray) rows = NULL;
-  guint n = 0, half;
+  guint n = 0;
 
-  clear_grid (self);
   g_string_truncate (self->text, 0);
   gtk_widget_set_visible (self->empty_label, solution == NULL);
   gtk_widget_set_visible (self->scroller, solution != NULL);
@@ -97,8 +134,7 @@ rebuild (HlResultsTable *self)
   rows = hl_result_rows (solution);
   for (guint i = 0; i < rows->len; i++)
     n += !skip_row (&g_array_index (rows, HlResultRow, i));
-  /* two column pairs use the width the canvas leaves */
-  half = (n + 1) / 2;
+  ensure_cells (self, n);
   n = 0;
   for (guint i = 0; i < rows->len; i++)
     {
@@ -106,8 +142,7 @@ rebuild (HlResultsTable *self)
       g_autofree char *number = NULL;
       g_autofree char *shown = NULL;
       const char *unit;
-      GtkWidget *name, *value;
-      int column, line;
+      GtkLabel *name, *value;
 
       if (skip_row (row))
         continue;
@@ -118,23 +153,13 @@ rebuild (HlResultsTable *self)
         shown = g_strdup (_("n/a"));
       else
         shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
-      column = n < half ? 0 : 3;
-      line = (int) (n < half ? n : n - half);
-      name = cell (_(row->label), 0.0f, NULL);
-      value = cell (shown, 1.0f, "numeric");
-      gtk_label_set_ellipsize (GTK_LABEL (value), PANGO_ELLIPSIZE_END);
-      gtk_label_set_max_width_chars (GTK_LABEL (value), 28);
-      if (strcmp (shown, number) != 0 && unit[0] == '\0')
-        gtk_widget_set_tooltip_text (value, number);
-      if (row->source != NULL)
-        gtk_widget_set_tooltip_text (name, row->source);
-      gtk_grid_attach (self->grid, name, column, line, 1, 1);
-      gtk_grid_attach (self->grid, value, column + 1, line, 1, 1);
+      name = g_ptr_array_index (self->names, n);
+      value = g_ptr_array_index (self->values, n);
+      set_label (name, _(row->label), row->source);
+      set_label (value, shown, strcmp (shown, number) != 0 ? number : NULL);
       g_string_append_printf (self->text, "%s\t%s\t%s\n", _(row->label), number, unit);
       n++;
     }
-  /* a spacer column between the pairs */
-  gtk_grid_attach (self->grid, cell ("", 0.0f, NULL), 2, 0, 1, 1);
 }
 
 static void
@@ -163,6 +188,8 @@ hl_results_table_finalize (GObject *object)
   HlResultsTable *self = HL_RESULTS_TABLE (object);
 
   g_string_free (self->text, TRUE);
+  g_ptr_array_unref (self->names);
+  g_ptr_array_unref (self->values);
   G_OBJECT_CLASS (hl_results_table_parent_class)->finalize (object);
 }
 
@@ -186,6 +213,8 @@ hl_results_table_init (HlResultsTable *self)
 
   gtk_orientable_set_orientation (GTK_ORIENTABLE (layout), GTK_ORIENTATION_VERTICAL);
   self->text = g_string_new (NULL);
+  self->names = g_ptr_array_new ();
+  self->values = g_ptr_array_new ();
 
   self->grid = GTK_GRID (gtk_grid_new ());
   gtk_grid_set_column_spacing (self->grid, 12);
