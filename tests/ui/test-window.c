@@ -315,7 +315,18 @@ test_unsaved_question (void)
   g_assert_null (hl_window_get_question (window));
   g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
 
-  /* the same question guards opening another project */
+  /* the same question guards a dropped or recent file ... */
+  {
+    g_autofree char *path = demo_path ();
+
+    activate (window, "open-file", g_variant_new_string (path));
+    g_assert_nonnull (hl_window_get_question (window));
+    gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_CANCEL);
+    iterate ();
+    g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
+  }
+
+  /* ... and a new project */
   activate (window, "new", NULL);
   g_assert_nonnull (hl_window_get_question (window));
   gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_REJECT);
