@@ -256,16 +256,17 @@ ask_unsaved_then (HlWindow     *self,
 {
   GtkWidget *dialog, *discard;
 
+  /* one question at a time: it answers for the command that raised it */
+  if (self->question != NULL)
+    {
+      gtk_window_present (GTK_WINDOW (self->question));
+      return;
+    }
   self->pending = k;
   g_set_object (&self->pending_file, file);
   if (!hl_document_get_modified (self->document))
     {
       run_pending (self);
-      return;
-    }
-  if (self->question != NULL)
-    {
-      gtk_window_present (GTK_WINDOW (self->question));
       return;
     }
   dialog = gtk_message_dialog_new (GTK_WINDOW (self), GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
