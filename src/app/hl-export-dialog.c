@@ -49,6 +49,46 @@ hl_export_preset_size (const char *preset,
   return NULL;
 }
 
+gboolean
+hl_export_document (HlDocument  *document,
+                    const char  *path,
+                    const char  *size,
+                    GError     **error)
+{
+  const HlProject *project = hl_document_get_project (document);
+  HlShellInputs *shell = (HlShellInputs *) hl_document_get_shell (document);
+  HlExportFormat format = hl_export_format_for_path (path);
+  HlExportRequest req = { 0 };
+  GList *shells = NULL;
+  int status;
+
+  g_return_val_if_fail (HL_IS_DOCUMENT (document), FALSE);
+  g_return_val_if_fail (path != NULL, FALSE);
+
+  /* the report covers the whole project, a figure or table the shell shown */
+  if (format == HL_EXPORT_TXT)
+    for (guint i = hl_project_n_shells (project); i > 0; i--)
+      shells = g_list_prepend (shells, hl_project_shell (project, i - 1));
+  else if (shell != NULL)
+    shells = g_list_prepend (shells, shell);
+  if (shells == NULL)
+    {
+      g_set_error_literal (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT, _("The project has no shells."));
+      return FALSE;
+    }
+  req.project = (HlProject *) project;
+  req.shells = shells;
+  req.path = path;
+  req.units = project->display_units;
+  req.points = HL_DEFAULT_POINTS;
+  req.size = size != NULL && size[0] != '\0' ? size : NULL;
+  req.figure_only = FALSE;
+  req.shell_given = format != HL_EXPORT_TXT;
+  status = hl_export_run (&req, error);
+  g_list_free (shells);
+  return status == 0;
+}
+
 static void
 on_custom_response_cb (GtkDialog *dialog,
                        int        response,

@@ -1,0 +1,60 @@
+/* hl-window-private.h — what the window's source files share
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-results-table.h"
+#include "hl-shell-editor.h"
+#include "hl-shell-list.h"
+#include "hl-window.h"
+
+G_BEGIN_DECLS
+
+typedef void (*HlContinuation) (HlWindow *self,
+                                GFile    *file);
+
+struct _HlWindow
+{
+  GtkApplicationWindow parent_instance;
+
+  GtkLabel       *title_label;
+  GtkLabel       *subtitle_label;
+  GtkMenuButton  *primary_menu_button;
+  GMenu          *recent_section;
+  GtkInfoBar     *info_bar;
+  GtkLabel       *info_label;
+  GtkPaned       *paned;
+  GtkPaned       *results_paned;
+  HlShellList    *shell_list;
+  HlShellEditor  *shell_editor;
+  HlCanvas       *canvas;
+  GtkLabel       *results_shell_label;
+  HlResultsTable *results_table;
+  GtkLabel       *caution_label;
+
+  HlDocument     *document;
+  GtkWidget      *question;
+  GtkNativeDialog *chooser;
+  HlContinuation  pending;       /* runs once unsaved work is dealt with */
+  GFile          *pending_file;
+  gboolean        close_confirmed;
+};
+
+void        hl_window_show_message     (HlWindow       *self,
+                                        GtkMessageType  type,
+                                        const char     *text);
+void        hl_window_hide_message     (HlWindow       *self);
+void        hl_window_set_document     (HlWindow       *self,
+                                        HlDocument     *document);
+HlDocument *hl_window_new_document     (HlWindow       *self);
+
+/* hl-window-files.c: new, open, save; the unsaved-changes question */
+void        hl_window_add_file_actions (HlWindow       *self);
+/* loads @file once unsaved work is saved or given up */
+void        hl_window_open_when_safe   (HlWindow       *self,
+                                        GFile          *file);
+/* TRUE when closing must wait for the user's answer */
+gboolean    hl_window_ask_before_close (HlWindow       *self);
+
+G_END_DECLS
