@@ -243,17 +243,8 @@ open_activated (GSimpleAction *action,
   ask_unsaved_then (HL_WINDOW (user_data), open_chooser_continuation, NULL);
 }
 
-static void
-open_recent_activated (GSimpleAction *action,
-                       GVariant      *param,
-                       gpointer       user_data)
-{
-  g_autoptr(GFile) file = g_file_new_for_uri (g_variant_get_string (param, NULL));
-
-  ask_unsaved_then (HL_WINDOW (user_data), load_continuation, file);
-}
-
-/* "open-file" with a path: the same as dropping the file on the window */
+/* "open-file" with a path or URI: the same as dropping the file on the
+ * window; recent files come this way too */
 static void
 open_file_activated (GSimpleAction *action,
                      GVariant      *param,
@@ -300,7 +291,7 @@ save_as_activated (GSimpleAction *action,
 static const GActionEntry file_entries[] = {
   { "new", new_activated },
   { "open", open_activated },
-  { "open-recent", open_recent_activated, "s" },
+  { "open-recent", open_file_activated, "s" },
   { "open-file", open_file_activated, "s" },
   { "save", save_activated },
   { "save-to", save_to_activated, "s" },
