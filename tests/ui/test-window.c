@@ -540,6 +540,60 @@ test_open_twice_reuses_window (void)
   g_object_unref (files[0]);
 }
 
+static void
+on_clipboard_text_cb (GObject      *clipboard,
+                      GAsyncResult *result,
+                      gpointer      user_data)
+{
+  char **text = user_data;
+
+  *text = gdk_clipboard_read_text_finish (GDK_CLIPBOARD (clipboard), result, NULL);
+  if (*text == NULL)
+    *text = g_strdup ("");
+}
+
+/* Copy puts the table on the clipboard as tab-separated lines. */
+static void
+test_copy_results (void)
+{
+  HlWindow *window = open_demo ();
+  GdkClipboard *clipboard = gtk_widget_get_clipboard (GTK_WIDGET (window));
+  g_autofree char *shown = hl_results_table_get_text (hl_window_get_results_table (window));
+  g_autofree char *copied = NULL;
+
+  activate (window, "copy-results", NULL);
+  gdk_clipboard_read_text_async (clipboard, NULL, on_clipboard_text_cb, &copied);
+  while (copied == NULL)
+    g_main_context_iteration (NULL, TRUE);
+  g_assert_cmpstr (copied, ==, shown);
+  g_assert_nonnull (strstr (copied, "Mean radius / thickness\t"));
+  discard_window (window);
+}
+
+/* The title names the project and the file, with a mark while modified;
+ * a revision note added gets the next number. */
+static void
+test_title_and_revisions (void)
+{
+  HlWindow *window = open_demo ();
+  HlDocument *doc = hl_window_get_document (window);
+  const HlRevision *latest;
+
+  g_assert_nonnull (strstr (gtk_window_get_title (GTK_WINDOW (window)), "Larkfield works"));
+  g_assert_nonnull (strstr (gtk_window_get_title (GTK_WINDOW (window)), "demo.hoop"));
+  g_assert_null (strstr (gtk_window_get_title (GTK_WINDOW (window)), "•"));
+  hl_document_add_revision (doc, "2026-12-01", "A. Tester", "Wall raised to 12 mm.");
+  iterate ();
+  latest = hl_project_latest_revision (hl_document_get_project (doc));
+  g_assert_cmpuint (latest->number, ==, 3);
+  g_assert_cmpstr (latest->author, ==, "A. Tester");
+  g_assert_nonnull (strstr (gtk_window_get_title (GTK_WINDOW (window)), "•"));
+  activate (window, "undo", NULL);
+  g_assert_cmpuint (hl_project_latest_revision (hl_document_get_project (doc))->number, ==, 2);
+  g_assert_null (strstr (gtk_window_get_title (GTK_WINDOW (window)), "•"));
+  discard_window (window);
+}
+
 int
 main (int    argc,
       char **argv)
@@ -583,6 +637,8 @@ main (int    argc,
   g_test_add_func ("/window/material-edit", test_material_edit);
   g_test_add_func ("/window/preferences-shape-new-shells", test_preferences_shape_new_shells);
   g_test_add_func ("/window/open-twice-reuses-window", test_open_twice_reuses_window);
+  g_test_add_func ("/window/copy-results", test_copy_results);
+  g_test_add_func ("/window/title-and-revisions", test_title_and_revisions);
   status = g_test_run ();
   g_clear_object (&app);
   return status;
