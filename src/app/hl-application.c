@@ -196,10 +196,33 @@ hl_application_class_init (HlApplicationClass *klass)
   hl_app_register_resource ();
 }
 
+/* An installed program finds its schema; one run from the build tree
+ * finds it compiled beside the build's data instead. */
+static GSettings *
+open_settings (void)
+{
+  GSettingsSchemaSource *source = g_settings_schema_source_get_default ();
+  g_autoptr(GSettingsSchema) schema = NULL;
+
+  if (source != NULL)
+    schema = g_settings_schema_source_lookup (source, HL_APPLICATION_ID, TRUE);
+  if (schema == NULL)
+    {
+      g_autoptr(GSettingsSchemaSource) local =
+        g_settings_schema_source_new_from_directory (HL_SCHEMA_BUILD_DIR, source, FALSE, NULL);
+
+      if (local != NULL)
+        schema = g_settings_schema_source_lookup (local, HL_APPLICATION_ID, FALSE);
+    }
+  if (schema == NULL)
+    g_error ("the settings schema %s is not installed", HL_APPLICATION_ID);
+  return g_settings_new_full (schema, NULL, NULL);
+}
+
 static void
 hl_application_init (HlApplication *self)
 {
-  self->settings = g_settings_new (HL_APPLICATION_ID);
+  self->settings = open_settings ();
 }
 
 HlApplication *
