@@ -73,7 +73,7 @@ hl_export_document (HlDocument  *document,
     shells = g_list_prepend (shells, shell);
   if (shells == NULL)
     {
-      g_set_error_literal (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT, _("The project has no shells."));
+      g_set_error_literal (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT, _("The project has no shells. Add one to see results."));
       return FALSE;
     }
   req.project = (HlProject *) project;

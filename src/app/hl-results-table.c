@@ -147,10 +147,10 @@ rebuild (HlResultsTable *self)
       if (skip_row (row))
         continue;
       row_value (row, units, &number, &unit);
-      /* a long "n/a (why)" would widen the whole column: the reason goes
-       * to the tooltip here, and whole into the copied text */
+      /* a long "n/a (why)" would widen the whole column: a dash stands
+       * for it, the reason goes to the tooltip and whole into the copy */
       if (row->kind != HL_ROW_WORD && !hl_result_ok (row->result))
-        shown = g_strdup (_("n/a"));
+        shown = g_strdup ("—");
       else
         shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
       name = g_ptr_array_index (self->names, n);
