@@ -11,6 +11,7 @@
 #define G_LOG_DOMAIN "hl-project-reader"
 
 #include "hl-project-file.h"
+#include "hl-project-reader-private.h"
 #include "hl-shell-check.h"
 #include "hl-core-resources.h"
 
@@ -22,24 +23,10 @@
 
 G_DEFINE_QUARK (hl-project-file-error-quark, hl_project_file_error)
 
-typedef struct
-{
-  const char *name;         /* file name for messages */
-  GPtrArray  *warnings;
-  GError     *error;        /* first error only */
-  GHashTable *shell_ids;    /* seen so far: a linear search made big files quadratic */
-} Reader;
 
-static void
-fail (Reader     *rd,
-      int         code,
-      long        line,
-      const char *element,
-      const char *format,
-      ...) G_GNUC_PRINTF (5, 6);
 
-static void
-fail (Reader     *rd,
+void
+hl_reader_fail (HlReader     *rd,
       int         code,
       long        line,
       const char *element,
@@ -60,126 +47,13 @@ fail (Reader     *rd,
     g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s", rd->name, MAX (line, 1), msg);
 }
 
-/* ---- before parsing ------------------------------------------------ */
-
-static long
-line_of_offset (const char *data,
-                gsize       offset)
-{
-  long line = 1;
-
-  for (gsize i = 0; i < offset; i++)
-    if (data[i] == '\n')
-      line++;
-  return line;
-}
-
-/* The format is UTF-8, the only thing the writer writes.  Checking the
- * bytes before libxml2 sees them also closes a side door: a file that
- * declares another encoding (UTF-7, EBCDIC) can spell "<!DOCTYPE" in
- * bytes that the plain search in refuse_declarations() does not see. */
-static gboolean
-check_encoding (Reader     *rd,
-                const char *data,
-                gsize       length)
-{
-  const guchar *u = (const guchar *) data;
-  const char *nul = memchr (data, '\0', length);
-  const char *bad = NULL;
-
-  if (length >= 2 && ((u[0] == 0xFE && u[1] == 0xFF) || (u[0] == 0xFF && u[1] == 0xFE)))
-    {
-      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL,
-            "the file is UTF-16 text (it starts with a UTF-16 byte-order mark): project files are UTF-8");
-      return FALSE;
-    }
-  if (length >= 2 && ((u[0] == '<' && u[1] == 0) || (u[0] == 0 && u[1] == '<')))
-    {
-      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is UTF-16 text: project files are UTF-8");
-      return FALSE;
-    }
-  if (nul != NULL)
-    {
-      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, nul - data), NULL,
-            "the file contains a NUL byte: not a text project file");
-      return FALSE;
-    }
-  if (!g_utf8_validate_len (data, length, &bad))
-    {
-      fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, bad - data), NULL,
-            "the file is not valid UTF-8 (byte 0x%02X): project files are UTF-8", *(const guchar *) bad);
-      return FALSE;
-    }
-  return TRUE;
-}
-
-/* The declaration may name only an encoding that reads the same as UTF-8. */
-static gboolean
-check_declared_encoding (Reader     *rd,
-                         const char *data,
-                         gsize       length)
-{
-  gsize skip = length >= 3 && memcmp (data, "\xEF\xBB\xBF", 3) == 0 ? 3 : 0;
-  const char *decl = data + skip;
-  gsize span = MIN (length - skip, 256);
-  const char *close, *enc;
-  g_autofree char *name = NULL;
-  char quote;
-
-  if (span < 5 || memcmp (decl, "<?xml", 5) != 0
-      || (close = g_strstr_len (decl, span, "?>")) == NULL
-      || (enc = g_strstr_len (decl, close - decl, "encoding")) == NULL)
-    return TRUE;
-  enc += strlen ("encoding");
-  while (enc < close && (*enc == ' ' || *enc == '=' || *enc == '\t' || *enc == '\r' || *enc == '\n'))
-    enc++;
-  quote = enc < close ? *enc : '\0';
-  if (quote == '"' || quote == '\'')
-    {
-      const char *end = memchr (enc + 1, quote, close - enc - 1);
-
-      if (end != NULL)
-        name = g_strndup (enc + 1, end - enc - 1);
-    }
-  if (name == NULL)
-    return TRUE;  /* malformed: the parser says so */
-  if (g_ascii_strcasecmp (name, "UTF-8") == 0 || g_ascii_strcasecmp (name, "UTF8") == 0
-      || g_ascii_strcasecmp (name, "US-ASCII") == 0 || g_ascii_strcasecmp (name, "ASCII") == 0)
-    return TRUE;
-  fail (rd, HL_PROJECT_FILE_ERROR_SYNTAX, line_of_offset (data, enc - data), NULL,
-        "the file declares the encoding “%s”: project files are UTF-8", name);
-  return FALSE;
-}
-
-static gboolean
-refuse_declarations (Reader     *rd,
-                     const char *data,
-                     gsize       length)
-{
-  static const char *const forbidden[] = { "<!DOCTYPE", "<!ENTITY", "<!ELEMENT", "<!ATTLIST" };
-  const char *end = data + length;
-
-  if (!check_encoding (rd, data, length) || !check_declared_encoding (rd, data, length))
-    return FALSE;
-  /* one pass over the markup openings, not one search per word */
-  for (const char *p = data; (p = memchr (p, '<', end - p)) != NULL; p++)
-    for (guint f = 0; f < G_N_ELEMENTS (forbidden) && end - p >= 2 && p[1] == '!'; f++)
-      if ((gsize) (end - p) >= strlen (forbidden[f]) && memcmp (p, forbidden[f], strlen (forbidden[f])) == 0)
-        {
-          fail (rd, HL_PROJECT_FILE_ERROR_UNSAFE, line_of_offset (data, p - data), NULL,
-                "document type declarations and entities are not allowed in a project file");
-          return FALSE;
-        }
-  return TRUE;
-}
-
 /* ---- libxml2 error capture ---------------------------------------- */
 
 static void
 on_structured_error (void        *user_data,
                      xmlErrorPtr  err)
 {
-  Reader *rd = user_data;
+  HlReader *rd = user_data;
   g_autofree char *msg = NULL;
   const char *element = NULL;
   int code = err->domain == XML_FROM_RELAXNGV || err->domain == XML_FROM_RELAXNGP
@@ -199,39 +73,18 @@ on_structured_error (void        *user_data,
       if (line <= 0)
         line = xmlGetLineNo (err->node);
     }
-  fail (rd, code, line, element, "%s", msg);
+  hl_reader_fail (rd, code, line, element, "%s", msg);
 }
 
 /* ---- tree checks --------------------------------------------------- */
 
-static gboolean
-check_depth (Reader    *rd,
-             xmlNodePtr node,
-             int        depth)
-{
-  for (xmlNodePtr n = node; n != NULL; n = n->next)
-    {
-      if (n->type != XML_ELEMENT_NODE)
-        continue;
-      if (depth > HL_PROJECT_FILE_MAX_DEPTH)
-        {
-          fail (rd, HL_PROJECT_FILE_ERROR_UNSAFE, xmlGetLineNo (n), (const char *) n->name,
-                "elements nested deeper than %d levels", HL_PROJECT_FILE_MAX_DEPTH);
-          return FALSE;
-        }
-      if (!check_depth (rd, n->children, depth + 1))
-        return FALSE;
-    }
-  return TRUE;
-}
-
-static const char *const known_project[] = {
+const char *const hl_reader_known_project[] = {
   "title", "engineer", "description", "display-units", "material", "shell", "revision", NULL
 };
-static const char *const known_material[] = {
+const char *const hl_reader_known_material[] = {
   "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
 };
-static const char *const known_shell[] = {
+const char *const hl_reader_known_shell[] = {
   "name", "material-ref", "inner-diameter", "outer-diameter", "inner-radius", "outer-radius",
   "wall-thickness", "corrosion-allowance", "internal-pressure", "external-pressure",
   "joint-efficiency", "thin-radius-basis", "thin-tolerance", "verdict-measure",
@@ -241,7 +94,7 @@ static const char *const known_shell[] = {
 /* A newer minor format may add elements; this version skips them with a
  * warning instead of refusing the file. */
 static void
-drop_unknown (Reader            *rd,
+drop_unknown (HlReader            *rd,
               xmlNodePtr         parent,
               const char *const *known)
 {
@@ -262,10 +115,10 @@ drop_unknown (Reader            *rd,
               xmlUnlinkNode (n);
               xmlFreeNode (n);
             }
-          else if (known == known_project && xmlStrEqual (n->name, BAD_CAST "material"))
-            drop_unknown (rd, n, known_material);
-          else if (known == known_project && xmlStrEqual (n->name, BAD_CAST "shell"))
-            drop_unknown (rd, n, known_shell);
+          else if (known == hl_reader_known_project && xmlStrEqual (n->name, BAD_CAST "material"))
+            drop_unknown (rd, n, hl_reader_known_material);
+          else if (known == hl_reader_known_project && xmlStrEqual (n->name, BAD_CAST "shell"))
+            drop_unknown (rd, n, hl_reader_known_shell);
         }
       n = next;
     }
@@ -296,7 +149,7 @@ fast_schema_text (const char *data,
 }
 
 static xmlRelaxNGPtr
-load_schema (Reader *rd)
+load_schema (HlReader *rd)
 {
   /* looked up in our own resource: a static library drops unreferenced
    * constructors, so global registration cannot be relied on */
@@ -311,7 +164,7 @@ load_schema (Reader *rd)
 
   if (bytes == NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema is missing from this build");
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema is missing from this build");
       return NULL;
     }
   data = g_bytes_get_data (bytes, &size);
@@ -320,15 +173,13 @@ load_schema (Reader *rd)
   schema = xmlRelaxNGParse (pctx);
   xmlRelaxNGFreeParserCtxt (pctx);
   if (schema == NULL)
-    fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
+    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
   return schema;
 }
 
-static void explain_invalid (Reader    *rd,
-                             xmlNodePtr root);
 
 static gboolean
-validate (Reader   *rd,
+validate (HlReader   *rd,
           xmlDocPtr doc)
 {
   static xmlRelaxNGPtr schema; /* parsed once, read-only afterwards */
@@ -343,7 +194,7 @@ validate (Reader   *rd,
     }
   if (schema == NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
       return FALSE;
     }
   vctx = xmlRelaxNGNewValidCtxt (schema);
@@ -354,13 +205,13 @@ validate (Reader   *rd,
     {
       GError *schema_error = g_steal_pointer (&rd->error);
 
-      explain_invalid (rd, xmlDocGetRootElement (doc));
+      hl_reader_explain_invalid (rd, xmlDocGetRootElement (doc));
       if (rd->error != NULL)
         g_clear_error (&schema_error);
       else
         rd->error = schema_error;
       if (rd->error == NULL)
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (xmlDocGetRootElement (doc)), NULL,
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (xmlDocGetRootElement (doc)), NULL,
               "the file does not follow the Hoopline project format");
     }
   return rc == 0;
@@ -368,8 +219,8 @@ validate (Reader   *rd,
 
 /* ---- values -------------------------------------------------------- */
 
-static char *
-text_of (xmlNodePtr n)
+char *
+hl_reader_text (xmlNodePtr n)
 {
   xmlChar *raw = xmlNodeGetContent (n);
   char *text = g_strdup (raw != NULL ? (const char *) raw : "");
@@ -378,8 +229,8 @@ text_of (xmlNodePtr n)
   return text;
 }
 
-static xmlNodePtr
-child (xmlNodePtr  parent,
+xmlNodePtr
+hl_reader_child (xmlNodePtr  parent,
        const char *name)
 {
   for (xmlNodePtr n = parent->children; n != NULL; n = n->next)
@@ -389,29 +240,29 @@ child (xmlNodePtr  parent,
 }
 
 static gboolean
-read_number (Reader    *rd,
+read_number (HlReader    *rd,
              xmlNodePtr n,
              double    *value)
 {
-  g_autofree char *text = text_of (n);
+  g_autofree char *text = hl_reader_text (n);
   g_autoptr(GError) local = NULL;
 
   if (!hl_parse_number (text, value, &local))
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), (const char *) n->name, "%s", local->message);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), (const char *) n->name, "%s", local->message);
       return FALSE;
     }
   return TRUE;
 }
 
 static gboolean
-read_quantity (Reader        *rd,
+read_quantity (HlReader        *rd,
                xmlNodePtr     parent,
                const char    *name,
                HlQuantityKind kind,
                HlQuantity    *q)
 {
-  xmlNodePtr n = child (parent, name);
+  xmlNodePtr n = hl_reader_child (parent, name);
   xmlChar *unit;
   const char *canonical;
   double value;
@@ -425,7 +276,7 @@ read_quantity (Reader        *rd,
                            : hl_unit_default (kind, HL_UNIT_SYSTEM_SI);
   if (canonical == NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name, "unknown unit “%s”", (const char *) unit);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name, "unknown unit “%s”", (const char *) unit);
       xmlFree (unit);
       return FALSE;
     }
@@ -437,22 +288,22 @@ read_quantity (Reader        *rd,
 /* Refuses rather than truncates: a cut could split a UTF-8 character
  * and would change the project without a word. */
 static gboolean
-copy_text (Reader     *rd,
+copy_text (HlReader     *rd,
            xmlNodePtr  parent,
            const char *name,
            char       *dest,
            gsize       size)
 {
-  xmlNodePtr n = child (parent, name);
+  xmlNodePtr n = hl_reader_child (parent, name);
   g_autofree char *text = NULL;
 
   if (n == NULL)
     return TRUE;
-  text = text_of (n);
+  text = hl_reader_text (n);
   g_strstrip (text);
   if (strlen (text) >= size)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name,
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name,
             "is too long (%" G_GSIZE_FORMAT " bytes of UTF-8; this version keeps at most %" G_GSIZE_FORMAT ")",
             strlen (text), size - 1);
       return FALSE;
@@ -461,8 +312,8 @@ copy_text (Reader     *rd,
   return TRUE;
 }
 
-static char *
-prop (xmlNodePtr  n,
+char *
+hl_reader_prop (xmlNodePtr  n,
       const char *name)
 {
   xmlChar *raw = xmlGetProp (n, BAD_CAST name);
@@ -472,245 +323,18 @@ prop (xmlNodePtr  n,
   return value;
 }
 
-static gboolean
-valid_date (const char *date)
-{
-  guint64 y, m, d;
-
-  if (date == NULL || strlen (date) != 10 || date[4] != '-' || date[7] != '-')
-    return FALSE;
-  for (guint i = 0; i < 10; i++)
-    if (i != 4 && i != 7 && !g_ascii_isdigit (date[i]))
-      return FALSE;
-  y = g_ascii_strtoull (date, NULL, 10);
-  m = g_ascii_strtoull (date + 5, NULL, 10);
-  d = g_ascii_strtoull (date + 8, NULL, 10);
-  return y >= 1 && g_date_valid_dmy ((GDateDay) d, (GDateMonth) m, (GDateYear) y);
-}
-
-/* ---- plain reasons for schema failures ----------------------------- */
-/* libxml2's RELAX NG messages name the pattern that failed ("Extra
- * element title in interleave") rather than the mistake.  Once the
- * schema has refused a file, these checks look for the usual mistakes
- * and say them plainly.  They only choose the message: whether a file
- * loads is decided by the schema and the value checks alone. */
-
-static const char *const number_elements[] = {
-  "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", "inner-diameter",
-  "outer-diameter", "inner-radius", "outer-radius", "wall-thickness", "corrosion-allowance",
-  "internal-pressure", "external-pressure", "joint-efficiency", "thin-tolerance", NULL
-};
-static const char *const size_elements[] = {
-  "inner-diameter", "outer-diameter", "inner-radius", "outer-radius", NULL
-};
-static const struct { const char *element, *words; } word_elements[] = {
-  { "display-units", "si us" }, { "thin-radius-basis", "inner mean outer" },
-  { "verdict-measure", "hoop equivalent" }, { "sizing-criterion", "von-mises tresca" },
-};
-
-static gboolean
-valid_id (const char *id)
-{
-  gsize len = id != NULL ? strlen (id) : 0;
-
-  if (len == 0 || len >= HL_ID_MAX || !(g_ascii_isalnum (id[0]) || id[0] == '_'))
-    return FALSE;
-  for (gsize i = 1; i < len; i++)
-    if (!(g_ascii_isalnum (id[i]) || strchr ("_.-", id[i]) != NULL))
-      return FALSE;
-  return TRUE;
-}
-
 /* ids are not left to the schema (see fast_schema_text) */
 static gboolean
-check_id (Reader     *rd,
+check_id (HlReader     *rd,
           xmlNodePtr  n,
           const char *element,
           const char *id)
 {
-  if (valid_id (id))
+  if (hl_reader_valid_id (id))
     return TRUE;
-  fail (rd, HL_PROJECT_FILE_ERROR_VALUE, n != NULL ? xmlGetLineNo (n) : 1, element,
+  hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, n != NULL ? xmlGetLineNo (n) : 1, element,
         "id “%s” is not 1 to %d letters, digits, “_”, “.” or “-”", id != NULL ? id : "", HL_ID_MAX - 1);
   return FALSE;
-}
-
-static void
-explain_value (Reader    *rd,
-               xmlNodePtr n)
-{
-  const char *name = (const char *) n->name;
-  g_autofree char *text = text_of (n);
-  g_autofree char *unit = prop (n, "unit");
-  long line = xmlGetLineNo (n);
-  glong chars = g_utf8_strlen (text, -1);
-  glong limit = g_strv_contains ((const char *const[]) { "description", "revision", NULL }, name) ? 100000 : 1000;
-
-  for (xmlNodePtr c = n->children; c != NULL; c = c->next)
-    if (c->type == XML_ELEMENT_NODE)
-      {
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), name, "holds the element <%s> where a value belongs", c->name);
-        return;
-      }
-  if (g_strv_contains (number_elements, name))
-    {
-      g_autoptr(GError) local = NULL;
-      double v;
-
-      if (!hl_parse_number (text, &v, &local))
-        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "%s", local->message);
-      else if (unit == NULL && !g_strv_contains ((const char *const[]) { "poisson-ratio", "joint-efficiency", "thin-tolerance", NULL }, name))
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the unit attribute is missing");
-      return;
-    }
-  for (guint i = 0; i < G_N_ELEMENTS (word_elements); i++)
-    if (strcmp (name, word_elements[i].element) == 0)
-      {
-        g_auto(GStrv) words = g_strsplit (word_elements[i].words, " ", -1);
-        g_autofree char *list = g_strjoinv (", ", words);
-
-        if (!g_strv_contains ((const char *const *) words, g_strstrip (text)))
-          fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not one of %s", text, list);
-        return;
-      }
-  if (strcmp (name, "material-ref") == 0 && !valid_id (g_strstrip (text)))
-    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not an id", text);
-  else if (chars > limit)
-    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "is %ld characters long; at most %ld are allowed", chars, limit);
-}
-
-static void
-explain_attributes (Reader    *rd,
-                    xmlNodePtr n)
-{
-  static const char *const shell_attrs[] = { "id", "form", "ends", NULL };
-  static const char *const revision_attrs[] = { "number", "date", "author", NULL };
-  const char *name = (const char *) n->name;
-  const char *const *allowed = strcmp (name, "shell") == 0 ? shell_attrs
-                               : strcmp (name, "revision") == 0 ? revision_attrs
-                               : strcmp (name, "material") == 0 ? (const char *const[]) { "id", NULL }
-                               : strcmp (name, "hoopline-project") == 0 ? (const char *const[]) { "format", NULL }
-                               : g_strv_contains (number_elements, name) ? (const char *const[]) { "unit", NULL }
-                               : (const char *const[]) { NULL };
-  g_autofree char *id = prop (n, "id");
-  g_autofree char *form = prop (n, "form");
-  g_autofree char *ends = prop (n, "ends");
-  long line = xmlGetLineNo (n);
-  HlForm f;
-  HlEnds e;
-
-  for (xmlAttrPtr a = n->properties; a != NULL; a = a->next)
-    if (!g_strv_contains (allowed, (const char *) a->name))
-      {
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "has no attribute “%s” in this format", a->name);
-        return;
-      }
-  if (allowed == shell_attrs || strcmp (name, "material") == 0)
-    {
-      if (id == NULL)
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the id attribute is missing");
-      else if (!valid_id (id))
-        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name,
-              "id “%s” is not 1 to %d letters, digits, “_”, “.” or “-”", id, HL_ID_MAX - 1);
-    }
-  if (strcmp (name, "hoopline-project") == 0)
-    {
-      g_autofree char *format = prop (n, "format");
-
-      if (format != NULL && !g_regex_match_simple ("^1(\\.[0-9]+)?$", format, 0, 0))
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "format “%s” is not a version such as 1 or 1.2", format);
-    }
-  if (form != NULL && !hl_form_from_string (form, &f))
-    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "form “%s” is not one of cylinder, sphere", form);
-  if (ends != NULL && !hl_ends_from_string (ends, &e))
-    fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "ends “%s” is not one of closed, open, plane-strain", ends);
-  if (allowed == revision_attrs)
-    {
-      g_autofree char *number = prop (n, "number");
-      g_autofree char *date = prop (n, "date");
-      guint64 v;
-
-      if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, 1000000, &v, NULL))
-        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to 1000000",
-              number != NULL ? number : "");
-      else if (!valid_date (date))
-        fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "date “%s” is not a YYYY-MM-DD date", date != NULL ? date : "");
-    }
-}
-
-/* Element children of @n against what it may hold: unknown, repeated,
- * missing.  @required lists what must be there. */
-static void
-explain_children (Reader            *rd,
-                  xmlNodePtr         n,
-                  const char *const *known,
-                  const char *const *required)
-{
-  const char *name = (const char *) n->name;
-  g_autoptr(GHashTable) seen = g_hash_table_new (g_str_hash, g_str_equal);
-  const char *size = NULL;
-
-  for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
-    {
-      const char *cname = (const char *) c->name;
-
-      if (c->type != XML_ELEMENT_NODE)
-        continue;
-      if (!g_strv_contains (known, cname))
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "is not an element of <%s> in format 1", name);
-      else if (g_strv_contains (size_elements, cname) && size != NULL)
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname,
-              "a second size after <%s>: give exactly one of inner-diameter, outer-diameter, inner-radius, outer-radius", size);
-      else if (g_hash_table_contains (seen, cname)
-               && !g_strv_contains ((const char *const[]) { "material", "shell", "revision", NULL }, cname))
-        fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "appears twice in <%s>", name);
-      g_hash_table_add (seen, (gpointer) cname);
-      if (g_strv_contains (size_elements, cname))
-        size = cname;
-    }
-  for (guint i = 0; required[i] != NULL && rd->error == NULL; i++)
-    if (!g_hash_table_contains (seen, required[i]))
-      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name, "<%s> is missing", required[i]);
-  if (rd->error == NULL && strcmp (name, "shell") == 0 && size == NULL)
-    fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name,
-          "no size given: one of inner-diameter, outer-diameter, inner-radius, outer-radius");
-}
-
-static void
-explain_invalid (Reader    *rd,
-                 xmlNodePtr root)
-{
-  static const char *const material_required[] = {
-    "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
-  };
-  static const char *const shell_required[] = { "material-ref", "wall-thickness", NULL };
-
-  explain_attributes (rd, root);
-  explain_children (rd, root, known_project, (const char *const[]) { "shell", NULL });
-  for (xmlNodePtr n = root->children; n != NULL && rd->error == NULL; n = n->next)
-    {
-      gboolean material = xmlStrEqual (n->name, BAD_CAST "material");
-      gboolean shell = xmlStrEqual (n->name, BAD_CAST "shell");
-
-      if (n->type != XML_ELEMENT_NODE)
-        continue;
-      explain_attributes (rd, n);
-      if (material || shell)
-        {
-          if (rd->error == NULL)
-            explain_children (rd, n, material ? known_material : known_shell,
-                              material ? material_required : shell_required);
-          for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
-            if (c->type == XML_ELEMENT_NODE)
-              {
-                explain_attributes (rd, c);
-                if (rd->error == NULL)
-                  explain_value (rd, c);
-              }
-        }
-      else if (rd->error == NULL)
-        explain_value (rd, n);
-    }
 }
 
 /* Line of the element a problem's field names, else of @parent. */
@@ -718,18 +342,18 @@ static long
 field_line (xmlNodePtr  parent,
             const char *field)
 {
-  xmlNodePtr n = child (parent, field);
+  xmlNodePtr n = hl_reader_child (parent, field);
 
   return xmlGetLineNo (n != NULL ? n : parent);
 }
 
 static gboolean
-read_material (Reader    *rd,
+read_material (HlReader    *rd,
                HlProject *project,
                xmlNodePtr n)
 {
   HlMaterial m = hl_material_default ();
-  g_autofree char *id = prop (n, "id");
+  g_autofree char *id = hl_reader_prop (n, "id");
   g_autoptr(GPtrArray) problems = NULL;
   HlShellInputs probe;
   xmlNodePtr nu;
@@ -738,7 +362,7 @@ read_material (Reader    *rd,
     return FALSE;
   if (hl_project_find_material (project, id) != NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "material", "the id “%s” is used twice", id);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "material", "the id “%s” is used twice", id);
       return FALSE;
     }
   g_strlcpy (m.id, id, sizeof m.id);
@@ -748,7 +372,7 @@ read_material (Reader    *rd,
       || !read_quantity (rd, n, "yield-strength", HL_KIND_STRESS, &m.yield_strength)
       || !read_quantity (rd, n, "allowable-stress", HL_KIND_STRESS, &m.allowable_stress))
     return FALSE;
-  nu = child (n, "poisson-ratio");
+  nu = hl_reader_child (n, "poisson-ratio");
   if (nu != NULL && !read_number (rd, nu, &m.poisson_ratio))
     return FALSE;
   /* checked here, where the values stand, and even when no shell uses
@@ -760,7 +384,7 @@ read_material (Reader    *rd,
     {
       HlProblem *p = g_ptr_array_index (problems, 0);
 
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s", p->message);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s", p->message);
       return FALSE;
     }
   g_array_append_val (project->materials, m);
@@ -777,7 +401,7 @@ size_node (xmlNodePtr  shell,
 
   for (guint i = 0; i < G_N_ELEMENTS (kinds); i++)
     {
-      xmlNodePtr n = child (shell, hl_size_kind_to_element (kinds[i]));
+      xmlNodePtr n = hl_reader_child (shell, hl_size_kind_to_element (kinds[i]));
 
       if (n != NULL)
         {
@@ -797,24 +421,24 @@ read_choice (xmlNodePtr  parent,
              ChoiceFunc  from_string,
              gpointer    out)
 {
-  xmlNodePtr n = child (parent, name);
+  xmlNodePtr n = hl_reader_child (parent, name);
   g_autofree char *text = NULL;
 
   if (n == NULL)
     return;
-  text = text_of (n);
+  text = hl_reader_text (n);
   from_string (g_strstrip (text), out);
 }
 
 static gboolean
-read_shell (Reader    *rd,
+read_shell (HlReader    *rd,
             HlProject *project,
             xmlNodePtr n)
 {
   HlShellInputs s = hl_shell_inputs_default ();
-  g_autofree char *id = prop (n, "id");
-  g_autofree char *form = prop (n, "form");
-  g_autofree char *ends = prop (n, "ends");
+  g_autofree char *id = hl_reader_prop (n, "id");
+  g_autofree char *form = hl_reader_prop (n, "form");
+  g_autofree char *ends = hl_reader_prop (n, "ends");
   g_autoptr(GPtrArray) problems = NULL;
   const HlMaterial *material;
   xmlNodePtr nsize, n_je;
@@ -823,7 +447,7 @@ read_shell (Reader    *rd,
     return FALSE;
   if (!g_hash_table_add (rd->shell_ids, g_strdup (id)))
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "the id “%s” is used twice", id);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "the id “%s” is used twice", id);
       return FALSE;
     }
   g_strlcpy (s.id, id, sizeof s.id);
@@ -833,7 +457,7 @@ read_shell (Reader    *rd,
   s.internal_pressure = hl_quantity_make (0, "bar");
   if (!copy_text (rd, n, "name", s.name, sizeof s.name)
       || !copy_text (rd, n, "material-ref", s.material_ref, sizeof s.material_ref)
-      || !check_id (rd, child (n, "material-ref"), "material-ref", s.material_ref))
+      || !check_id (rd, hl_reader_child (n, "material-ref"), "material-ref", s.material_ref))
     return FALSE;
   if (form != NULL)
     hl_form_from_string (form, &s.form);
@@ -845,7 +469,7 @@ read_shell (Reader    *rd,
     material = hl_material_builtin_find (s.material_ref);
   if (material == NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, "material-ref"), "material-ref",
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, "material-ref"), "material-ref",
             "no material with the id “%s” in this project", s.material_ref);
       return FALSE;
     }
@@ -854,7 +478,7 @@ read_shell (Reader    *rd,
   nsize = size_node (n, &s.size_kind);
   if (nsize == NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "no size given");
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "no size given");
       return FALSE;
     }
   if (!read_quantity (rd, n, hl_size_kind_to_element (s.size_kind), HL_KIND_LENGTH, &s.size)
@@ -864,7 +488,7 @@ read_shell (Reader    *rd,
       || !read_quantity (rd, n, "external-pressure", HL_KIND_STRESS, &s.external_pressure)
       || !read_quantity (rd, n, "thin-tolerance", HL_KIND_PERCENT, &s.thin_tolerance))
     return FALSE;
-  n_je = child (n, "joint-efficiency");
+  n_je = hl_reader_child (n, "joint-efficiency");
   if (n_je != NULL && !read_number (rd, n_je, &s.joint_efficiency))
     return FALSE;
   read_choice (n, "thin-radius-basis", (ChoiceFunc) hl_basis_from_string, &s.thin_basis);
@@ -876,9 +500,9 @@ read_shell (Reader    *rd,
     {
       HlProblem *p = g_ptr_array_index (problems, 0);
       /* material fields live in the material element */
-      gboolean in_material = child (n, p->field) == NULL && hl_project_find_material (project, s.material_ref) != NULL;
+      gboolean in_material = hl_reader_child (n, p->field) == NULL && hl_project_find_material (project, s.material_ref) != NULL;
 
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s%s", p->message,
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s%s", p->message,
             in_material ? " (in the shell's material)" : "");
       return FALSE;
     }
@@ -887,25 +511,25 @@ read_shell (Reader    *rd,
 }
 
 static gboolean
-read_revision (Reader    *rd,
+read_revision (HlReader    *rd,
                HlProject *project,
                xmlNodePtr n)
 {
-  g_autofree char *number = prop (n, "number");
-  g_autofree char *date = prop (n, "date");
-  g_autofree char *author = prop (n, "author");
-  g_autofree char *text = text_of (n);
+  g_autofree char *number = hl_reader_prop (n, "number");
+  g_autofree char *date = hl_reader_prop (n, "date");
+  g_autofree char *author = hl_reader_prop (n, "author");
+  g_autofree char *text = hl_reader_text (n);
   guint64 value = 0;
 
   if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, 1000000, &value, NULL))
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
       return FALSE;
     }
   /* the schema's date type also takes time zones and five-digit years */
-  if (!valid_date (g_strstrip (date)))
+  if (!hl_reader_valid_date (g_strstrip (date)))
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "date “%s” is not a YYYY-MM-DD date", date);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "date “%s” is not a YYYY-MM-DD date", date);
       return FALSE;
     }
   hl_project_add_revision (project, (guint) value, g_strstrip (date), author, g_strstrip (text));
@@ -913,21 +537,21 @@ read_revision (Reader    *rd,
 }
 
 static HlProject *
-build_project (Reader    *rd,
+build_project (HlReader    *rd,
                xmlNodePtr root)
 {
   g_autoptr(HlProject) project = hl_project_new ();
   g_autofree char *title = NULL, *engineer = NULL, *description = NULL, *units = NULL;
   xmlNodePtr n;
 
-  if ((n = child (root, "title")) != NULL)
-    hl_project_set_title (project, g_strstrip (title = text_of (n)));
-  if ((n = child (root, "engineer")) != NULL)
-    hl_project_set_engineer (project, g_strstrip (engineer = text_of (n)));
-  if ((n = child (root, "description")) != NULL)
-    hl_project_set_description (project, g_strstrip (description = text_of (n)));
-  if ((n = child (root, "display-units")) != NULL)
-    project->display_units = strcmp (g_strstrip (units = text_of (n)), "us") == 0
+  if ((n = hl_reader_child (root, "title")) != NULL)
+    hl_project_set_title (project, g_strstrip (title = hl_reader_text (n)));
+  if ((n = hl_reader_child (root, "engineer")) != NULL)
+    hl_project_set_engineer (project, g_strstrip (engineer = hl_reader_text (n)));
+  if ((n = hl_reader_child (root, "description")) != NULL)
+    hl_project_set_description (project, g_strstrip (description = hl_reader_text (n)));
+  if ((n = hl_reader_child (root, "display-units")) != NULL)
+    project->display_units = strcmp (g_strstrip (units = hl_reader_text (n)), "us") == 0
                                ? HL_UNIT_SYSTEM_US : HL_UNIT_SYSTEM_SI;
 
   /* materials first: shells refer to them wherever they stand */
@@ -947,7 +571,7 @@ build_project (Reader    *rd,
 }
 
 static gboolean
-check_root (Reader    *rd,
+check_root (HlReader    *rd,
             xmlNodePtr root)
 {
   g_autofree char *format = NULL;
@@ -956,26 +580,26 @@ check_root (Reader    *rd,
 
   if (root == NULL || !xmlStrEqual (root->name, BAD_CAST "hoopline-project"))
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, root != NULL ? xmlGetLineNo (root) : 1, NULL,
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, root != NULL ? xmlGetLineNo (root) : 1, NULL,
             "not a Hoopline project (the root element is <%s>, expected <hoopline-project>)",
             root != NULL ? (const char *) root->name : "nothing");
       return FALSE;
     }
-  format = prop (root, "format");
+  format = hl_reader_prop (root, "format");
   if (format == NULL)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (root), "hoopline-project", "the format attribute is missing");
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (root), "hoopline-project", "the format attribute is missing");
       return FALSE;
     }
   major = g_ascii_strtoull (format, &end, 10);
   if (end == format || major != 1)
     {
-      fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (root), "hoopline-project",
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (root), "hoopline-project",
             "format “%s” is not supported by this version (it reads format 1)", format);
       return FALSE;
     }
   if (*end == '.')
-    drop_unknown (rd, root, known_project);
+    drop_unknown (rd, root, hl_reader_known_project);
   return TRUE;
 }
 
@@ -997,7 +621,7 @@ hl_project_load_bytes (const char  *data,
                        GPtrArray  **warnings,
                        GError     **error)
 {
-  Reader rd = { display_name != NULL ? display_name : "project", NULL, NULL,
+  HlReader rd = { display_name != NULL ? display_name : "project", NULL, NULL,
                 g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL) };
   xmlParserCtxtPtr ctxt;
   xmlDocPtr doc = NULL;
@@ -1009,13 +633,13 @@ hl_project_load_bytes (const char  *data,
   if (warnings != NULL)
     rd.warnings = g_ptr_array_new_with_free_func (g_free);
   if (length > HL_PROJECT_FILE_MAX_BYTES)
-    fail (&rd, HL_PROJECT_FILE_ERROR_TOO_LARGE, 1, NULL, "the file is larger than %d MiB: not a project file",
+    hl_reader_fail (&rd, HL_PROJECT_FILE_ERROR_TOO_LARGE, 1, NULL, "the file is larger than %d MiB: not a project file",
           HL_PROJECT_FILE_MAX_BYTES / (1024 * 1024));
   else if (length == 0)
-    fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty");
+    hl_reader_fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty");
   else if (only_space (data, length))
-    fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty (white space only)");
-  else if (refuse_declarations (&rd, data, length))
+    hl_reader_fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "the file is empty (white space only)");
+  else if (hl_reader_refuse_declarations (&rd, data, length))
     {
       ctxt = xmlNewParserCtxt ();
       xmlSetStructuredErrorFunc (&rd, on_structured_error);
@@ -1026,12 +650,12 @@ hl_project_load_bytes (const char  *data,
                                | XML_PARSE_COMPACT);
       xmlSetStructuredErrorFunc (NULL, NULL);
       if (doc == NULL && rd.error == NULL)
-        fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "not a well-formed XML document");
+        hl_reader_fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "not a well-formed XML document");
       xmlFreeParserCtxt (ctxt);
     }
 
   if (doc != NULL && rd.error == NULL
-      && check_depth (&rd, xmlDocGetRootElement (doc), 1)
+      && hl_reader_check_depth (&rd, xmlDocGetRootElement (doc), 1)
       && check_root (&rd, xmlDocGetRootElement (doc))
       && validate (&rd, doc))
     project = build_project (&rd, xmlDocGetRootElement (doc));

@@ -1,0 +1,236 @@
+/* hl-project-explain.c — plain reasons for files the schema refuses
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-project-reader"
+
+#include "hl-project-reader-private.h"
+
+#include <string.h>
+
+gboolean
+hl_reader_valid_date (const char *date)
+{
+  guint64 y, m, d;
+
+  if (date == NULL || strlen (date) != 10 || date[4] != '-' || date[7] != '-')
+    return FALSE;
+  for (guint i = 0; i < 10; i++)
+    if (i != 4 && i != 7 && !g_ascii_isdigit (date[i]))
+      return FALSE;
+  y = g_ascii_strtoull (date, NULL, 10);
+  m = g_ascii_strtoull (date + 5, NULL, 10);
+  d = g_ascii_strtoull (date + 8, NULL, 10);
+  return y >= 1 && g_date_valid_dmy ((GDateDay) d, (GDateMonth) m, (GDateYear) y);
+}
+
+/* ---- plain reasons for schema failures ----------------------------- */
+/* libxml2's RELAX NG messages name the pattern that failed ("Extra
+ * element title in interleave") rather than the mistake.  Once the
+ * schema has refused a file, these checks look for the usual mistakes
+ * and say them plainly.  They only choose the message: whether a file
+ * loads is decided by the schema and the value checks alone. */
+
+static const char *const number_elements[] = {
+  "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", "inner-diameter",
+  "outer-diameter", "inner-radius", "outer-radius", "wall-thickness", "corrosion-allowance",
+  "internal-pressure", "external-pressure", "joint-efficiency", "thin-tolerance", NULL
+};
+static const char *const size_elements[] = {
+  "inner-diameter", "outer-diameter", "inner-radius", "outer-radius", NULL
+};
+static const struct { const char *element, *words; } word_elements[] = {
+  { "display-units", "si us" }, { "thin-radius-basis", "inner mean outer" },
+  { "verdict-measure", "hoop equivalent" }, { "sizing-criterion", "von-mises tresca" },
+};
+
+gboolean
+hl_reader_valid_id (const char *id)
+{
+  gsize len = id != NULL ? strlen (id) : 0;
+
+  if (len == 0 || len >= HL_ID_MAX || !(g_ascii_isalnum (id[0]) || id[0] == '_'))
+    return FALSE;
+  for (gsize i = 1; i < len; i++)
+    if (!(g_ascii_isalnum (id[i]) || strchr ("_.-", id[i]) != NULL))
+      return FALSE;
+  return TRUE;
+}
+
+static void
+explain_value (HlReader    *rd,
+               xmlNodePtr n)
+{
+  const char *name = (const char *) n->name;
+  g_autofree char *text = hl_reader_text (n);
+  g_autofree char *unit = hl_reader_prop (n, "unit");
+  long line = xmlGetLineNo (n);
+  glong chars = g_utf8_strlen (text, -1);
+  glong limit = g_strv_contains ((const char *const[]) { "description", "revision", NULL }, name) ? 100000 : 1000;
+
+  for (xmlNodePtr c = n->children; c != NULL; c = c->next)
+    if (c->type == XML_ELEMENT_NODE)
+      {
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), name, "holds the element <%s> where a value belongs", c->name);
+        return;
+      }
+  if (g_strv_contains (number_elements, name))
+    {
+      g_autoptr(GError) local = NULL;
+      double v;
+
+      if (!hl_parse_number (text, &v, &local))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "%s", local->message);
+      else if (unit == NULL && !g_strv_contains ((const char *const[]) { "poisson-ratio", "joint-efficiency", "thin-tolerance", NULL }, name))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the unit attribute is missing");
+      return;
+    }
+  for (guint i = 0; i < G_N_ELEMENTS (word_elements); i++)
+    if (strcmp (name, word_elements[i].element) == 0)
+      {
+        g_auto(GStrv) words = g_strsplit (word_elements[i].words, " ", -1);
+        g_autofree char *list = g_strjoinv (", ", words);
+
+        if (!g_strv_contains ((const char *const *) words, g_strstrip (text)))
+          hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not one of %s", text, list);
+        return;
+      }
+  if (strcmp (name, "material-ref") == 0 && !hl_reader_valid_id (g_strstrip (text)))
+    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not an id", text);
+  else if (chars > limit)
+    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "is %ld characters long; at most %ld are allowed", chars, limit);
+}
+
+static void
+explain_attributes (HlReader    *rd,
+                    xmlNodePtr n)
+{
+  static const char *const shell_attrs[] = { "id", "form", "ends", NULL };
+  static const char *const revision_attrs[] = { "number", "date", "author", NULL };
+  const char *name = (const char *) n->name;
+  const char *const *allowed = strcmp (name, "shell") == 0 ? shell_attrs
+                               : strcmp (name, "revision") == 0 ? revision_attrs
+                               : strcmp (name, "material") == 0 ? (const char *const[]) { "id", NULL }
+                               : strcmp (name, "hoopline-project") == 0 ? (const char *const[]) { "format", NULL }
+                               : g_strv_contains (number_elements, name) ? (const char *const[]) { "unit", NULL }
+                               : (const char *const[]) { NULL };
+  g_autofree char *id = hl_reader_prop (n, "id");
+  g_autofree char *form = hl_reader_prop (n, "form");
+  g_autofree char *ends = hl_reader_prop (n, "ends");
+  long line = xmlGetLineNo (n);
+  HlForm f;
+  HlEnds e;
+
+  for (xmlAttrPtr a = n->properties; a != NULL; a = a->next)
+    if (!g_strv_contains (allowed, (const char *) a->name))
+      {
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "has no attribute “%s” in this format", a->name);
+        return;
+      }
+  if (allowed == shell_attrs || strcmp (name, "material") == 0)
+    {
+      if (id == NULL)
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the id attribute is missing");
+      else if (!hl_reader_valid_id (id))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name,
+              "id “%s” is not 1 to %d letters, digits, “_”, “.” or “-”", id, HL_ID_MAX - 1);
+    }
+  if (strcmp (name, "hoopline-project") == 0)
+    {
+      g_autofree char *format = hl_reader_prop (n, "format");
+
+      if (format != NULL && !g_regex_match_simple ("^1(\\.[0-9]+)?$", format, 0, 0))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "format “%s” is not a version such as 1 or 1.2", format);
+    }
+  if (form != NULL && !hl_form_from_string (form, &f))
+    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "form “%s” is not one of cylinder, sphere", form);
+  if (ends != NULL && !hl_ends_from_string (ends, &e))
+    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "ends “%s” is not one of closed, open, plane-strain", ends);
+  if (allowed == revision_attrs)
+    {
+      g_autofree char *number = hl_reader_prop (n, "number");
+      g_autofree char *date = hl_reader_prop (n, "date");
+      guint64 v;
+
+      if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, 1000000, &v, NULL))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to 1000000",
+              number != NULL ? number : "");
+      else if (!hl_reader_valid_date (date))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "date “%s” is not a YYYY-MM-DD date", date != NULL ? date : "");
+    }
+}
+
+/* Element children of @n against what it may hold: unknown, repeated,
+ * missing.  @required lists what must be there. */
+static void
+explain_children (HlReader            *rd,
+                  xmlNodePtr         n,
+                  const char *const *known,
+                  const char *const *required)
+{
+  const char *name = (const char *) n->name;
+  g_autoptr(GHashTable) seen = g_hash_table_new (g_str_hash, g_str_equal);
+  const char *size = NULL;
+
+  for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
+    {
+      const char *cname = (const char *) c->name;
+
+      if (c->type != XML_ELEMENT_NODE)
+        continue;
+      if (!g_strv_contains (known, cname))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "is not an element of <%s> in format 1", name);
+      else if (g_strv_contains (size_elements, cname) && size != NULL)
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname,
+              "a second size after <%s>: give exactly one of inner-diameter, outer-diameter, inner-radius, outer-radius", size);
+      else if (g_hash_table_contains (seen, cname)
+               && !g_strv_contains ((const char *const[]) { "material", "shell", "revision", NULL }, cname))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "appears twice in <%s>", name);
+      g_hash_table_add (seen, (gpointer) cname);
+      if (g_strv_contains (size_elements, cname))
+        size = cname;
+    }
+  for (guint i = 0; required[i] != NULL && rd->error == NULL; i++)
+    if (!g_hash_table_contains (seen, required[i]))
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name, "<%s> is missing", required[i]);
+  if (rd->error == NULL && strcmp (name, "shell") == 0 && size == NULL)
+    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name,
+          "no size given: one of inner-diameter, outer-diameter, inner-radius, outer-radius");
+}
+
+void
+hl_reader_explain_invalid (HlReader    *rd,
+                 xmlNodePtr root)
+{
+  static const char *const material_required[] = {
+    "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
+  };
+  static const char *const shell_required[] = { "material-ref", "wall-thickness", NULL };
+
+  explain_attributes (rd, root);
+  explain_children (rd, root, hl_reader_known_project, (const char *const[]) { "shell", NULL });
+  for (xmlNodePtr n = root->children; n != NULL && rd->error == NULL; n = n->next)
+    {
+      gboolean material = xmlStrEqual (n->name, BAD_CAST "material");
+      gboolean shell = xmlStrEqual (n->name, BAD_CAST "shell");
+
+      if (n->type != XML_ELEMENT_NODE)
+        continue;
+      explain_attributes (rd, n);
+      if (material || shell)
+        {
+          if (rd->error == NULL)
+            explain_children (rd, n, material ? hl_reader_known_material : hl_reader_known_shell,
+                              material ? material_required : shell_required);
+          for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
+            if (c->type == XML_ELEMENT_NODE)
+              {
+                explain_attributes (rd, c);
+                if (rd->error == NULL)
+                  explain_value (rd, c);
+              }
+        }
+      else if (rd->error == NULL)
+        explain_value (rd, n);
+    }
+}

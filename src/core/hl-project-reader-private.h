@@ -1,0 +1,53 @@
+/* hl-project-reader-private.h — shared by the project reader's files
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-project-file.h"
+
+#include <libxml/tree.h>
+
+G_BEGIN_DECLS
+
+typedef struct
+{
+  const char *name;         /* file name for messages */
+  GPtrArray  *warnings;
+  GError     *error;        /* first error only */
+  GHashTable *shell_ids;    /* seen so far: a linear search made big files quadratic */
+} HlReader;
+
+/* Records the first error only: "NAME:LINE: element: message". */
+void        hl_reader_fail                (HlReader   *rd,
+                                           int         code,
+                                           long        line,
+                                           const char *element,
+                                           const char *format,
+                                           ...) G_GNUC_PRINTF (5, 6);
+
+char       *hl_reader_text                (xmlNodePtr  n);
+xmlNodePtr  hl_reader_child               (xmlNodePtr  parent,
+                                           const char *name);
+char       *hl_reader_prop                (xmlNodePtr  n,
+                                           const char *name);
+gboolean    hl_reader_valid_id            (const char *id);
+gboolean    hl_reader_valid_date          (const char *date);
+
+extern const char *const hl_reader_known_project[];
+extern const char *const hl_reader_known_material[];
+extern const char *const hl_reader_known_shell[];
+
+/* hl-project-guard.c */
+gboolean    hl_reader_refuse_declarations (HlReader   *rd,
+                                           const char *data,
+                                           gsize       length);
+gboolean    hl_reader_check_depth         (HlReader   *rd,
+                                           xmlNodePtr  node,
+                                           int         depth);
+
+/* hl-project-explain.c */
+void        hl_reader_explain_invalid     (HlReader   *rd,
+                                           xmlNodePtr  root);
+
+G_END_DECLS
