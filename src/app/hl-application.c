@@ -9,6 +9,7 @@
 #include "hl-app-resources.h"
 #include "hl-canvas.h"
 #include "hl-preferences.h"
+#include "hl-recovery.h"
 #include "hl-report.h"
 #include "hl-window.h"
 
@@ -139,6 +140,23 @@ hl_application_activate (GApplication *application)
   if (window == NULL)
     window = GTK_WINDOW (hl_window_new (GTK_APPLICATION (application)));
   gtk_window_present (window);
+  hl_recovery_offer (GTK_APPLICATION (application), window);
+}
+
+/* HL_TEST_EDIT with HL_TEST_HOOKS=1: an edit right after loading, so a
+ * test can crash a run that has unsaved work */
+static void
+apply_test_edit (GtkWindow *window)
+{
+  const char *title = g_getenv ("HL_TEST_EDIT");
+  HlDocument *document;
+  const HlProject *p;
+
+  if (g_strcmp0 (g_getenv ("HL_TEST_HOOKS"), "1") != 0 || title == NULL || !HL_IS_WINDOW (window))
+    return;
+  document = hl_window_get_document (HL_WINDOW (window));
+  p = hl_document_get_project (document);
+  hl_document_set_info (document, title, p->engineer, p->description, p->display_units);
 }
 
 /* A file already open is shown again; otherwise it opens in an untouched
@@ -165,11 +183,14 @@ hl_application_open (GApplication  *application,
           else
             target = GTK_WINDOW (hl_window_new (GTK_APPLICATION (application)));
           hl_canvas_trace ("window built");
-          hl_window_load_file (HL_WINDOW (target), files[i]);
+          if (hl_window_load_file (HL_WINDOW (target), files[i]))
+            apply_test_edit (target);
           hl_canvas_trace ("project loaded");
         }
       gtk_window_present (target);
     }
+  hl_recovery_offer (GTK_APPLICATION (application),
+                     gtk_application_get_active_window (GTK_APPLICATION (application)));
 }
 
 static void

@@ -195,6 +195,25 @@ hl_document_new (const HlShellInputs *first_shell,
   return self;
 }
 
+HlDocument *
+hl_document_new_restored (HlProject *project,
+                          GFile     *file)
+{
+  HlDocument *self = g_object_new (HL_TYPE_DOCUMENT, NULL);
+  g_autofree char *path = file != NULL ? g_file_get_path (file) : NULL;
+
+  self->project = project;
+  /* the file as it is now, so that the mark shows what saving would change;
+   * a file gone or unreadable compares as nothing saved yet */
+  if (path != NULL)
+    self->saved = hl_project_load (path, NULL, NULL);
+  if (self->saved == NULL)
+    self->saved = hl_project_new ();
+  g_set_object (&self->file, file);
+  update (self);
+  return self;
+}
+
 gboolean
 hl_document_load (HlDocument  *self,
                   GFile       *file,

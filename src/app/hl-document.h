@@ -21,6 +21,12 @@ G_DECLARE_FINAL_TYPE (HlDocument, hl_document, HL, DOCUMENT, GObject)
 HlDocument          *hl_document_new             (const HlShellInputs *first_shell,
                                                   HlUnitSystem         units);
 
+/* A project brought back from a crash-recovery copy: takes @project; it
+ * counts as modified against @file's content (or as never saved), and
+ * saving writes to @file (nullable). */
+HlDocument          *hl_document_new_restored    (HlProject           *project,
+                                                  GFile               *file);
+
 /* Replaces the content with the file's; on failure nothing changes.
  * @warnings (nullable) receives the loader's warnings. */
 gboolean             hl_document_load            (HlDocument  *self,

@@ -58,6 +58,9 @@ on_question_response_cb (GtkDialog *dialog,
                          int        response,
                          HlWindow  *self)
 {
+  /* the answer may close this window while the signal still holds the
+   * dialog: it must not point at a window that is gone */
+  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
   gtk_window_destroy (GTK_WINDOW (dialog));
   self->question = NULL;
 

@@ -4,6 +4,7 @@
  */
 #pragma once
 
+#include "hl-autosave.h"
 #include "hl-results-table.h"
 #include "hl-shell-editor.h"
 #include "hl-shell-list.h"
@@ -39,6 +40,8 @@ struct _HlWindow
   HlContinuation  pending;       /* runs once unsaved work is dealt with */
   GFile          *pending_file;
   gboolean        close_confirmed;
+  HlAutosave     *autosave;      /* crash-recovery copy of unsaved edits */
+  guint           autosave_timer;
 };
 
 void        hl_window_show_message     (HlWindow       *self,
@@ -56,5 +59,13 @@ void        hl_window_open_when_safe   (HlWindow       *self,
                                         GFile          *file);
 /* TRUE when closing must wait for the user's answer */
 gboolean    hl_window_ask_before_close (HlWindow       *self);
+
+/* hl-window-autosave.c: the crash-recovery copy.  _update after every
+ * change of the document, _now to write at once, _finish when the window
+ * goes (the work was saved or given up on purpose). */
+void        hl_window_autosave_init    (HlWindow       *self);
+void        hl_window_autosave_update  (HlWindow       *self);
+void        hl_window_autosave_now     (HlWindow       *self);
+void        hl_window_autosave_finish  (HlWindow       *self);
 
 G_END_DECLS

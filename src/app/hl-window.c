@@ -114,6 +114,7 @@ on_document_changed_cb (HlDocument *document,
   update_title (self);
   update_actions (self);
   gtk_label_set_text (self->results_shell_label, shell != NULL ? shell->name : "");
+  hl_window_autosave_update (self);
 }
 
 void
@@ -387,6 +388,7 @@ hl_window_dispose (GObject *object)
 {
   HlWindow *self = HL_WINDOW (object);
 
+  hl_window_autosave_finish (self);
   if (self->document != NULL)
     g_signal_handlers_disconnect_by_data (self->document, self);
   g_clear_object (&self->document);
@@ -438,6 +440,7 @@ hl_window_init (HlWindow *self)
   GtkDropTarget *drop;
 
   gtk_widget_init_template (GTK_WIDGET (self));
+  hl_window_autosave_init (self);
   g_action_map_add_action_entries (G_ACTION_MAP (self), win_entries, G_N_ELEMENTS (win_entries), self);
   hl_window_add_file_actions (self);
   gtk_label_set_text (self->caution_label, _(HL_CAUTION));

@@ -10,6 +10,7 @@
 
 #include "hl-config.h"
 #include "hl-application.h"
+#include "hl-ui-test-util.h"
 #include "hl-project-file.h"
 #include "hl-shell-check.h"
 #include "hl-window.h"
@@ -22,51 +23,16 @@
 
 static HlApplication *app;
 
-static void
-iterate (void)
-{
-  while (g_main_context_pending (NULL))
-    g_main_context_iteration (NULL, FALSE);
-}
-
-static gboolean
-timeout_cb (gpointer data)
-{
-  *(gboolean *) data = TRUE;
-  return G_SOURCE_REMOVE;
-}
-
-/* runs the main loop for @ms so that layout and drawing happen */
-static void
-run_for (guint ms)
-{
-  gboolean done = FALSE;
-
-  g_timeout_add (ms, timeout_cb, &done);
-  while (!done)
-    g_main_context_iteration (NULL, TRUE);
-  iterate ();
-}
-
-static char *
-demo_path (void)
-{
-  const char *src = g_getenv ("HL_SOURCE_DIR");
-
-  g_assert_nonnull (src);
-  return g_build_filename (src, "data", "examples", "demo.hoop", NULL);
-}
-
 static HlWindow *
 open_demo (void)
 {
-  g_autofree char *path = demo_path ();
+  g_autofree char *path = hl_ui_demo_path ();
   g_autoptr(GFile) file = g_file_new_for_path (path);
   HlWindow *window = hl_window_new (GTK_APPLICATION (app));
 
   g_assert_true (hl_window_load_file (window, file));
   gtk_window_present (GTK_WINDOW (window));
-  iterate ();
+  hl_ui_iterate ();
   return window;
 }
 
@@ -75,7 +41,7 @@ static void
 discard_window (HlWindow *window)
 {
   gtk_window_destroy (GTK_WINDOW (window));
-  iterate ();
+  hl_ui_iterate ();
 }
 
 static HlQuantityRow *
@@ -94,7 +60,7 @@ type_into (HlWindow   *window,
            const char *text)
 {
   gtk_editable_set_text (hl_quantity_row_get_entry (row (window, field)), text);
-  iterate ();
+  hl_ui_iterate ();
 }
 
 static const HlSolution *
@@ -110,7 +76,7 @@ activate (HlWindow   *window,
 {
   g_assert_true (g_action_group_get_action_enabled (G_ACTION_GROUP (window), action));
   g_action_group_activate_action (G_ACTION_GROUP (window), action, param);
-  iterate ();
+  hl_ui_iterate ();
 }
 
 /* The demo's air receiver: ID 1200 mm, t 10 mm, c 1.5 mm, 11 bar. */
@@ -193,7 +159,7 @@ test_unit_change_keeps_quantity (void)
       inch = i;
   g_assert_cmpuint (inch, >, 0);
   gtk_drop_down_set_selected (units, inch);
-  iterate ();
+  hl_ui_iterate ();
   shell = hl_document_get_shell (hl_window_get_document (window));
   g_assert_cmpstr (shell->wall_thickness.unit, ==, "in");
   /* 1 in = 25.4 mm exactly (NIST SP 811): 10 mm = 0.3937007874 in */
@@ -292,7 +258,7 @@ test_failed_save_keeps_modified (void)
   /* a folder that does not exist cannot take the file */
   g_action_group_activate_action (G_ACTION_GROUP (window), "save-to",
                                   g_variant_new_string ("/nonexistent-hoopline-dir/x.hoop"));
-  iterate ();
+  hl_ui_iterate ();
   g_assert_true (hl_document_get_modified (doc));
   discard_window (window);
 }
@@ -306,23 +272,23 @@ test_unsaved_question (void)
   /* unmodified: nothing to ask */
   type_into (window, "wall-thickness", "11");
   gtk_window_close (GTK_WINDOW (window));
-  iterate ();
+  hl_ui_iterate ();
   question = hl_window_get_question (window);
   g_assert_nonnull (question);
   g_assert_true (gtk_widget_get_visible (GTK_WIDGET (window)));
   gtk_dialog_response (GTK_DIALOG (question), GTK_RESPONSE_CANCEL);
-  iterate ();
+  hl_ui_iterate ();
   g_assert_null (hl_window_get_question (window));
   g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
 
   /* the same question guards a dropped or recent file ... */
   {
-    g_autofree char *path = demo_path ();
+    g_autofree char *path = hl_ui_demo_path ();
 
     activate (window, "open-file", g_variant_new_string (path));
     g_assert_nonnull (hl_window_get_question (window));
     gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_CANCEL);
-    iterate ();
+    hl_ui_iterate ();
     g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
   }
 
@@ -330,7 +296,7 @@ test_unsaved_question (void)
   activate (window, "new", NULL);
   g_assert_nonnull (hl_window_get_question (window));
   gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_REJECT);
-  iterate ();
+  hl_ui_iterate ();
   g_assert_null (hl_document_get_file (hl_window_get_document (window)));
   g_assert_false (hl_document_get_modified (hl_window_get_document (window)));
 
@@ -339,7 +305,7 @@ test_unsaved_question (void)
 
     g_object_add_weak_pointer (G_OBJECT (w), (gpointer *) &w);
     gtk_window_close (GTK_WINDOW (window));
-    iterate ();
+    hl_ui_iterate ();
     /* nothing to lose now: closed without a question */
     g_assert_null (w);
   }
@@ -428,12 +394,12 @@ test_canvas_draws (void)
   HlCanvas *canvas = hl_window_get_canvas (window);
   guint drawn;
 
-  run_for (300);
+  hl_ui_run_for (300);
   drawn = hl_canvas_get_n_draws (canvas);
   g_assert_cmpuint (drawn, >, 0);
   g_assert_cmpint (gtk_widget_get_width (GTK_WIDGET (canvas)), >, 300);
   type_into (window, "internal-pressure", "12");
-  run_for (100);
+  hl_ui_run_for (100);
   g_assert_cmpuint (hl_canvas_get_n_draws (canvas), >, drawn);
   discard_window (window);
 }
@@ -521,22 +487,22 @@ test_preferences_shape_new_shells (void)
 static void
 test_open_twice_reuses_window (void)
 {
-  g_autofree char *path = demo_path ();
+  g_autofree char *path = hl_ui_demo_path ();
   GFile *files[1];
   guint before;
 
   files[0] = g_file_new_for_path (path);
   g_application_open (G_APPLICATION (app), files, 1, "");
-  iterate ();
+  hl_ui_iterate ();
   before = g_list_length (gtk_application_get_windows (GTK_APPLICATION (app)));
   g_assert_cmpuint (before, >=, 1);
   g_application_open (G_APPLICATION (app), files, 1, "");
-  iterate ();
+  hl_ui_iterate ();
   g_assert_cmpuint (g_list_length (gtk_application_get_windows (GTK_APPLICATION (app))), ==, before);
   for (GList *l = gtk_application_get_windows (GTK_APPLICATION (app)); l != NULL;
        l = gtk_application_get_windows (GTK_APPLICATION (app)))
     gtk_window_destroy (l->data);
-  iterate ();
+  hl_ui_iterate ();
   g_object_unref (files[0]);
 }
 
@@ -583,7 +549,7 @@ test_title_and_revisions (void)
   g_assert_nonnull (strstr (gtk_window_get_title (GTK_WINDOW (window)), "demo.hoop"));
   g_assert_null (strstr (gtk_window_get_title (GTK_WINDOW (window)), "•"));
   hl_document_add_revision (doc, "2026-12-01", "A. Tester", "Wall raised to 12 mm.");
-  iterate ();
+  hl_ui_iterate ();
   latest = hl_project_latest_revision (hl_document_get_project (doc));
   g_assert_cmpuint (latest->number, ==, 3);
   g_assert_cmpstr (latest->author, ==, "A. Tester");
@@ -598,7 +564,6 @@ int
 main (int    argc,
       char **argv)
 {
-  g_autoptr(GError) error = NULL;
   int status;
 
   setlocale (LC_ALL, "C.UTF-8");
@@ -609,16 +574,7 @@ main (int    argc,
       printf ("1..0 # SKIP no display\n");
       return 0;
     }
-  app = hl_application_new (G_APPLICATION_NON_UNIQUE);
-  {
-    /* a test machine may have no session bus, and GTK warns about it at
-     * start-up; the window needs none */
-    GLogLevelFlags fatal = g_log_set_always_fatal (G_LOG_FATAL_MASK);
-
-    if (!g_application_register (G_APPLICATION (app), NULL, &error))
-      g_error ("cannot register the application: %s", error->message);
-    g_log_set_always_fatal (fatal);
-  }
+  app = hl_ui_application_new ();
   /* startup has run: actions, accelerators, style */
 
   g_test_add_func ("/window/demo-edit-changes-results", test_demo_edit_changes_results);

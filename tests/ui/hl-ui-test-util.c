@@ -1,0 +1,56 @@
+/* hl-ui-test-util.c — what the window's tests share
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-ui-test"
+
+#include "hl-ui-test-util.h"
+
+void
+hl_ui_iterate (void)
+{
+  while (g_main_context_pending (NULL))
+    g_main_context_iteration (NULL, FALSE);
+}
+
+static gboolean
+timeout_cb (gpointer data)
+{
+  *(gboolean *) data = TRUE;
+  return G_SOURCE_REMOVE;
+}
+
+void
+hl_ui_run_for (guint ms)
+{
+  gboolean done = FALSE;
+
+  g_timeout_add (ms, timeout_cb, &done);
+  while (!done)
+    g_main_context_iteration (NULL, TRUE);
+  hl_ui_iterate ();
+}
+
+char *
+hl_ui_demo_path (void)
+{
+  const char *src = g_getenv ("HL_SOURCE_DIR");
+
+  g_assert_nonnull (src);
+  return g_build_filename (src, "data", "examples", "demo.hoop", NULL);
+}
+
+HlApplication *
+hl_ui_application_new (void)
+{
+  g_autoptr(GError) error = NULL;
+  HlApplication *app = hl_application_new (G_APPLICATION_NON_UNIQUE);
+  /* a test machine may have no session bus, and GTK warns about it at
+   * start-up; the window needs none */
+  GLogLevelFlags fatal = g_log_set_always_fatal (G_LOG_FATAL_MASK);
+
+  if (!g_application_register (G_APPLICATION (app), NULL, &error))
+    g_error ("cannot register the application: %s", error->message);
+  g_log_set_always_fatal (fatal);
+  return app;
+}

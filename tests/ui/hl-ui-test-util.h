@@ -1,0 +1,21 @@
+/* hl-ui-test-util.h — what the window's tests share: the main loop, the
+ * demo project, an application registered without a session bus
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include "hl-application.h"
+
+G_BEGIN_DECLS
+
+/* runs whatever is ready, without waiting */
+void           hl_ui_iterate         (void);
+/* runs the main loop for @ms so that layout, drawing and timers happen */
+void           hl_ui_run_for         (guint ms);
+/* data/examples/demo.hoop in the source tree (HL_SOURCE_DIR) */
+char          *hl_ui_demo_path       (void);
+/* a registered application (its startup has run), not unique */
+HlApplication *hl_ui_application_new (void);
+
+G_END_DECLS
