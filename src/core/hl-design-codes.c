@@ -9,14 +9,16 @@
  */
 #define G_LOG_DOMAIN "hl-design-codes"
 
+#include "hl-config.h"
 #include "hl-design-codes.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 
-#define NO_NET_PRESSURE "no net internal pressure (external-pressure rules apply, not checked)"
-#define UG27_RANGE      "outside the UG-27 range (t <= R/2, P <= 0.385 S E): use the code's thick-shell rules"
-#define UG27D_RANGE     "outside the UG-27(d) range (t <= 0.356 R, P <= 0.665 S E): use the code's thick-shell rules"
-#define EN_RANGE        "outside the EN 13445-3 7.4 range (e/De <= 0.16): use the code's thick-shell rules"
+#define NO_NET_PRESSURE N_("no net internal pressure (external-pressure rules apply, not checked)")
+#define UG27_RANGE      N_("outside the UG-27 range (t <= R/2, P <= 0.385 S E): use the code's thick-shell rules")
+#define UG27D_RANGE     N_("outside the UG-27(d) range (t <= 0.356 R, P <= 0.665 S E): use the code's thick-shell rules")
+#define EN_RANGE        N_("outside the EN 13445-3 7.4 range (e/De <= 0.16): use the code's thick-shell rules")
 
 static HlCodeResult
 ug27_cylinder (const HlCodeWall *w)

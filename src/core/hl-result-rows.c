@@ -4,8 +4,10 @@
  */
 #define G_LOG_DOMAIN "hl-result-rows"
 
+#include "hl-config.h"
 #include "hl-result-rows.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 
 static void
@@ -32,6 +34,21 @@ word (GArray     *rows,
   g_array_append_val (rows, r);
 }
 
+static const char *
+ends_word (HlEnds ends)
+{
+  switch (ends)
+    {
+    case HL_ENDS_OPEN:
+      return N_("open");
+    case HL_ENDS_PLANE_STRAIN:
+      return N_("plane-strain");
+    case HL_ENDS_CLOSED:
+    default:
+      return N_("closed");
+    }
+}
+
 static HlResult
 value (double v)
 {
@@ -49,12 +66,14 @@ hl_result_rows (const HlSolution *s)
 
   word (rows, "shell", "Shell", in->name);
   word (rows, "id", "Id", in->id);
-  word (rows, "form", "Form", hl_form_to_string (in->form));
-  word (rows, "ends", "Ends", sphere ? "n/a (sphere)" : hl_ends_to_string (in->ends));
+  /* the same words as hl_form_to_string() and hl_ends_to_string(), so
+   * the summary keeps its values, but marked for the displaying layers */
+  word (rows, "form", "Form", sphere ? N_("sphere") : N_("cylinder"));
+  word (rows, "ends", "Ends", sphere ? N_("n/a (sphere)") : ends_word (in->ends));
   row (rows, "analysis_inner_radius", "Inner radius (analysis)", HL_ROW_LENGTH, value (s->a), NULL);
   row (rows, "analysis_wall_thickness", "Wall thickness (analysis)", HL_ROW_LENGTH, value (s->t), NULL);
   row (rows, "mean_radius_over_thickness", "Mean radius / thickness", HL_ROW_RATIO, value (s->mean_ratio), NULL);
-  row (rows, "thin_hoop_stress", sphere ? "Thin-wall membrane stress" : "Thin-wall hoop stress", HL_ROW_STRESS,
+  row (rows, "thin_hoop_stress", sphere ? N_("Thin-wall membrane stress") : N_("Thin-wall hoop stress"), HL_ROW_STRESS,
        s->thin_hoop, sphere ? "p R / 2t" : "p R / t");
   row (rows, "thin_axial_stress", "Thin-wall axial stress", HL_ROW_STRESS, s->thin_axial,
        sphere ? "p R / 2t" : "p R / 2t (closed), 0 (open), nu hoop (plane strain)");
@@ -65,8 +84,8 @@ hl_result_rows (const HlSolution *s)
   row (rows, "lame_axial_stress", "Lamé axial stress", HL_ROW_STRESS, s->lame_axial, "Lamé");
   row (rows, "thin_wall_error", "Thin-wall error (hoop)", HL_ROW_PERCENT, s->thin_wall_error, NULL);
   row (rows, "thin_wall_error_equivalent", "Thin-wall error (von Mises)", HL_ROW_PERCENT, s->thin_wall_error_equivalent, NULL);
-  word (rows, "thin_wall_verdict", "Thin-wall verdict", s->is_thin ? "thin" : "thick");
-  word (rows, "rule_of_thumb", "Rule of thumb (R/t >= 10)", s->rule_of_thumb ? "met" : "not met");
+  word (rows, "thin_wall_verdict", "Thin-wall verdict", s->is_thin ? N_("thin") : N_("thick"));
+  word (rows, "rule_of_thumb", "Rule of thumb (R/t >= 10)", s->rule_of_thumb ? N_("met") : N_("not met"));
   row (rows, "ratio_for_tolerance", "R/t where the error meets the tolerance", HL_ROW_RATIO, s->ratio_for_tolerance, NULL);
   row (rows, "von_mises_max", "Peak von Mises stress", HL_ROW_STRESS, s->von_mises_max, "Lamé");
   row (rows, "tresca_max", "Peak Tresca stress", HL_ROW_STRESS, s->tresca_max, "Lamé");
@@ -160,7 +179,7 @@ hl_row_format (const HlResultRow *r,
   if (r->kind == HL_ROW_WORD)
     return g_strdup (r->word != NULL ? r->word : "");
   if (r->result.reason != NULL || !isfinite (r->result.value))
-    return g_strdup_printf ("n/a (%s)", r->result.reason != NULL ? r->result.reason : "not computable");
+    return g_strdup_printf ("n/a (%s)", r->result.reason != NULL ? r->result.reason : N_("not computable"));
   {
     double v = hl_row_convert (r->kind, system, r->result.value);
 

@@ -4,9 +4,11 @@
  */
 #define G_LOG_DOMAIN "hl-sizing"
 
+#include "hl-config.h"
 #include "hl-sizing.h"
 #include "hl-roots.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 
 #define RATIO_MIN 0.5000005   /* b/a about 1e6 */
@@ -133,19 +135,19 @@ hl_ratio_for_tolerance (const HlLame     *lame,
       }
   if (last_bad == RATIO_GRID - 1)
     {
-      *reason = "no wall ratio brings the error within the tolerance";
+      *reason = N_("no wall ratio brings the error within the tolerance");
       return FALSE;
     }
   if (last_bad < 0)
     {
-      *reason = "every wall ratio is within the tolerance";
+      *reason = N_("every wall ratio is within the tolerance");
       return FALSE;
     }
   if (!hl_root_bracketed (error_excess, &sp, last_bad_m,
                           RATIO_MIN * exp (step * (last_bad + 1)),
                           HL_SIZING_REL_TOL, TRUE, ratio))
     {
-      *reason = "the error could not be evaluated";
+      *reason = N_("the error could not be evaluated");
       return FALSE;
     }
   return TRUE;
@@ -181,7 +183,7 @@ hl_lame_max_pressure (const HlLame *lame,
       lo = 0.0;
       if (peak_excess_pressure (lo, &sp) > 0.0)
         {
-          *reason = "the external pressure alone exceeds the allowable";
+          *reason = N_("the external pressure alone exceeds the allowable");
           return FALSE;
         }
     }
@@ -190,14 +192,14 @@ hl_lame_max_pressure (const HlLame *lame,
     {
       if (i > 200)
         {
-          *reason = "no finite pressure reaches the allowable";
+          *reason = N_("no finite pressure reaches the allowable");
           return FALSE;
         }
       hi *= 2.0;
     }
   if (!hl_root_bracketed (peak_excess_pressure, &sp, lo, hi, HL_SIZING_REL_TOL, FALSE, pressure))
     {
-      *reason = "the pressure could not be bracketed";
+      *reason = N_("the pressure could not be bracketed");
       return FALSE;
     }
   return TRUE;
@@ -232,24 +234,24 @@ hl_lame_required_wall (const HlLame *lame,
 
   if (lame->pi == lame->po)
     {
-      *reason = "no pressure difference across the wall";
+      *reason = N_("no pressure difference across the wall");
       return FALSE;
     }
   if (peak_excess_wall (hi, &sp) > 0.0)
     {
-      *reason = "the allowable is below what any thickness can carry";
+      *reason = N_("the allowable is below what any thickness can carry");
       return FALSE;
     }
   if (peak_excess_wall (lo, &sp) <= 0.0)
     {
       /* thinner than this the difference b - a has too few digits left to
        * be an answer; say so instead of returning the search bound */
-      *reason = "the load is so small that a wall of 1e-9 of the radius carries it";
+      *reason = N_("the load is so small that a wall of 1e-9 of the radius carries it");
       return FALSE;
     }
   if (!hl_root_bracketed (peak_excess_wall, &sp, lo, hi, HL_SIZING_REL_TOL, TRUE, thickness))
     {
-      *reason = "the thickness could not be bracketed";
+      *reason = N_("the thickness could not be bracketed");
       return FALSE;
     }
   return TRUE;

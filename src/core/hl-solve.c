@@ -7,11 +7,13 @@
  */
 #define G_LOG_DOMAIN "hl-solve"
 
+#include "hl-config.h"
 #include "hl-solution.h"
 #include "hl-shell-check.h"
 #include "hl-sizing.h"
 #include "hl-design-codes.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 
 #define RULE_OF_THUMB_RATIO 10.0   /* common practice: R/t >= 10 is thin */
@@ -26,7 +28,7 @@ ok (double value)
   if (!isfinite (value))
     {
       r.value = NAN;
-      r.reason = "not computable for this shell";
+      r.reason = N_("not computable for this shell");
     }
   return r;
 }
@@ -104,14 +106,14 @@ solve_membrane_and_lame (HlSolution *s)
   s->lame_radial_inner = ok (inner.radial);
   s->lame_radial_outer = ok (outer.radial);
   if (in->form == HL_FORM_SPHERE)
-    s->lame_axial = na ("a sphere has two equal tangential stresses: see the hoop stress");
+    s->lame_axial = na (N_("a sphere has two equal tangential stresses: see the hoop stress"));
   else
     s->lame_axial = ok (inner.axial);
 
   err_hoop = hl_thin_wall_error (&s->lame, in->thin_basis, HL_MEASURE_HOOP);
   err_eq = hl_thin_wall_error (&s->lame, in->thin_basis, HL_MEASURE_EQUIVALENT);
-  s->thin_wall_error = isfinite (err_hoop) ? ok (err_hoop) : na ("no hoop stress under this load");
-  s->thin_wall_error_equivalent = isfinite (err_eq) ? ok (err_eq) : na ("no equivalent stress under this load");
+  s->thin_wall_error = isfinite (err_hoop) ? ok (err_hoop) : na (N_("no hoop stress under this load"));
+  s->thin_wall_error_equivalent = isfinite (err_eq) ? ok (err_eq) : na (N_("no equivalent stress under this load"));
   chosen = in->verdict_measure == HL_MEASURE_EQUIVALENT ? err_eq : err_hoop;
   s->is_thin = isfinite (chosen) && fabs (chosen) <= s->tolerance;
   s->rule_of_thumb = s->mean_ratio >= RULE_OF_THUMB_RATIO;
@@ -159,8 +161,8 @@ solve_yield_and_collapse (HlSolution *s)
   load = internal ? unit.pi : unit.po;
   vm = hl_lame_peak_equivalent (&unit, HL_CRITERION_VON_MISES);
   tr = hl_lame_peak_equivalent (&unit, HL_CRITERION_TRESCA);
-  s->first_yield_von_mises = vm > 0 ? ok (load * s->yield / vm) : na ("no stress under this load");
-  s->first_yield_tresca = tr > 0 ? ok (load * s->yield / tr) : na ("no stress under this load");
+  s->first_yield_von_mises = vm > 0 ? ok (load * s->yield / vm) : na (N_("no stress under this load"));
+  s->first_yield_tresca = tr > 0 ? ok (load * s->yield / tr) : na (N_("no stress under this load"));
 
   /* Hill (1950): perfectly plastic wall, internal pressure over the
    * external one */
@@ -171,7 +173,7 @@ solve_yield_and_collapse (HlSolution *s)
      * other two in the incompressible plastic state (Hill 1950) */
     s->plastic_collapse = ok (s->po + 2 / sqrt (3) * s->yield * log (s->k));
   else
-    s->plastic_collapse = na ("no closed form for open ends (von Mises)");
+    s->plastic_collapse = na (N_("no closed form for open ends (von Mises)"));
   /* Tresca: the yield condition does not involve the axial stress, so the
    * cylinder result holds for every end condition */
   if (in->form == HL_FORM_SPHERE)
@@ -201,11 +203,11 @@ solve_allowables (HlSolution *s)
    * radius moving with t: inner fixed Rb = a + alpha t, outer fixed
    * Rb = b - (1 - alpha) t */
   if (!(net > 0))
-    s->treq_thin = na ("no net internal pressure (external-pressure rules apply, not checked)");
+    s->treq_thin = na (N_("no net internal pressure (external-pressure rules apply, not checked)"));
   else if (outer_fixed)
     s->treq_thin = ok (net * s->b / (f * allow + (1 - alpha) * net) + c);
   else if (f * allow - alpha * net <= 0)
-    s->treq_thin = na ("the allowable is below what any thickness can carry");
+    s->treq_thin = na (N_("the allowable is below what any thickness can carry"));
   else
     s->treq_thin = ok (net * s->a / (f * allow - alpha * net) + c);
 
@@ -230,14 +232,14 @@ solve_allowables (HlSolution *s)
     s->mawp_en13445 = en.mawp_reason ? na (en.mawp_reason) : ok (en.mawp + s->po);
     s->en13445_clause = en.clause;
     if (ug.out_of_range)
-      warn (s, "this wall is outside the range of the %s formulas: use the code's thick-shell rules", ug.clause);
+      warn (s, N_("this wall is outside the range of the UG-27 formulas: use the code's thick-shell rules"));
     if (en.out_of_range)
-      warn (s, "this wall is outside the range of %s (e/De <= 0.16): use the code's thick-shell rules", en.clause);
+      warn (s, N_("this wall is outside the range of EN 13445-3 7.4 (e/De <= 0.16): use the code's thick-shell rules"));
   }
   if (in->form == HL_FORM_CYLINDER)
     s->barlow_pressure = ok (s->po + 2 * allow * s->t / (2 * s->b));
   else
-    s->barlow_pressure = na ("Barlow's formula is for pipe (cylinders)");
+    s->barlow_pressure = na (N_("Barlow's formula is for pipe (cylinders)"));
 }
 
 static void
@@ -245,23 +247,24 @@ collect_warnings (HlSolution *s)
 {
   const HlShellInputs *in = &s->inputs;
   double peak = hl_lame_peak_equivalent (&s->lame, in->sizing_criterion);
+  gboolean tresca = in->sizing_criterion == HL_CRITERION_TRESCA;
 
   if (s->pi == 0.0 && s->po == 0.0)
-    warn (s, "no pressure is applied: every stress is zero");
+    warn (s, N_("no pressure is applied: every stress is zero"));
   if (s->po > 0.0)
-    warn (s, "external pressure acts: buckling may govern and is not checked here");
+    warn (s, N_("external pressure acts: buckling may govern and is not checked here"));
   if (s->po > s->pi)
-    warn (s, "the net pressure is external: the wall is in compression");
+    warn (s, N_("the net pressure is external: the wall is in compression"));
   if (peak > s->yield)
-    warn (s, "the wall yields: the peak %s stress exceeds the yield strength",
-          in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises");
+    warn (s, "%s", tresca ? N_("the wall yields: the peak Tresca stress exceeds the yield strength")
+                          : N_("the wall yields: the peak von Mises stress exceeds the yield strength"));
   else if (peak > s->allowable)
-    warn (s, "the peak %s stress exceeds the allowable stress times the joint efficiency",
-          in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises");
+    warn (s, "%s", tresca ? N_("the peak Tresca stress exceeds the allowable stress times the joint efficiency")
+                          : N_("the peak von Mises stress exceeds the allowable stress times the joint efficiency"));
   if (s->allowable / in->joint_efficiency > s->yield)
-    warn (s, "the allowable stress is above the yield strength: check the material data");
+    warn (s, N_("the allowable stress is above the yield strength: check the material data"));
   if (!s->is_thin && (s->pi != 0.0 || s->po != 0.0))
-    warn (s, "the thin-wall formulas are outside the tolerance here: use the Lamé (thick-wall) results");
+    warn (s, N_("the thin-wall formulas are outside the tolerance here: use the Lamé (thick-wall) results"));
 }
 
 HlSolution *
