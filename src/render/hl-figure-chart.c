@@ -140,18 +140,20 @@ subtitle (HlFigure *f)
 {
   const HlSolution *sol = f->sol;
   const HlShellInputs *in = &sol->inputs;
-  const char *basis = in->thin_basis == HL_BASIS_INNER ? "inner" : in->thin_basis == HL_BASIS_OUTER ? "outer" : "mean";
-  const char *measure = in->verdict_measure == HL_MEASURE_EQUIVALENT ? "von Mises" : "hoop";
-  g_autofree char *form = in->form == HL_FORM_SPHERE ? g_strdup ("sphere")
-                                                     : g_strdup_printf ("cylinder, %s ends", hl_ends_to_string (in->ends));
+  const char *basis = in->thin_basis == HL_BASIS_INNER ? _("inner radius")
+                      : in->thin_basis == HL_BASIS_OUTER ? _("outer radius") : _("mean radius");
+  const char *measure = in->verdict_measure == HL_MEASURE_EQUIVALENT ? _("von Mises stress") : _("hoop stress");
   GString *s = g_string_new (NULL);
 
-  g_string_printf (s, "%s; %s radius; %s stress", form, basis, measure);
+  g_string_printf (s, "%s; %s; %s", hl_figure_form_text (in), basis, measure);
   if (hl_result_ok (sol->ratio_for_tolerance))
     {
       g_autofree char *m = hl_figure_format_sig (sol->ratio_for_tolerance.value, 3, f->locale);
 
-      g_string_append_printf (s, "; within tolerance for R/t" HL_NBSP "≥" HL_NBSP "%s", m);
+      g_autofree char *bound = g_strdup_printf ("R/t" HL_NBSP "≥" HL_NBSP "%s", m);
+
+      g_string_append (s, "; ");
+      g_string_append_printf (s, _("within tolerance for %s"), bound);
     }
   return g_string_free (s, FALSE);
 }
@@ -200,7 +202,7 @@ layout (HlFigure     *f,
   HlRect body = *area;
 
   l->subtitle = subtitle (f);
-  body.y += hl_panel_heading_height (f, area->width, "Thin-wall error against R/t", l->subtitle);
+  body.y += hl_panel_heading_height (f, area->width, _("Thin-wall error against R/t"), l->subtitle);
   body.height -= body.y - area->y;
   m_hi = MAX (M_MAX, pow (10, ceil (log10 (MAX (sol->mean_ratio, 1.0)))));
   hl_chart_curve (sol, M_MIN, m_hi, N_CURVE, l->m, l->err);
@@ -240,7 +242,7 @@ hl_chart_draw (HlFigure     *f,
 
   layout (f, area, &l);
   th = l.th;
-  hl_panel_heading (f, area, "Thin-wall error against R/t", l.subtitle);
+  hl_panel_heading (f, area, _("Thin-wall error against R/t"), l.subtitle);
   g->drawn = TRUE;
   obs.area = *a;
 
@@ -306,7 +308,9 @@ hl_chart_draw (HlFigure     *f,
     double xr = hl_axis_map (&g->x, RULE_OF_THUMB), pad = 0.3 * f->text->base;
     double y_top = hl_axis_map (&g->y, sol->tolerance), y_bot = hl_axis_map (&g->y, -sol->tolerance);
     g_autofree char *tol = hl_figure_format_sig (sol->tolerance, 3, f->locale);
-    g_autofree char *tol_text = g_strdup_printf ("tolerance ±%s" HL_NBSP "%%", tol);
+    g_autofree char *tol_pct = g_strdup_printf ("±%s" HL_NBSP "%%", tol);
+    g_autofree char *tol_text = g_strdup_printf (_("tolerance %s"), tol_pct);
+    g_autofree char *rule_text = g_strdup_printf (_("rule of thumb %s"), "R/t" HL_NBSP "=" HL_NBSP "10");
     const double rule_cand[][4] = {
       { xr + pad, a->y + pad, 0, 0 }, { xr - pad, a->y + pad, 1, 0 },
       { xr + pad, a->y + a->height - pad, 0, 1 }, { xr - pad, a->y + a->height - pad, 1, 1 },
@@ -317,7 +321,7 @@ hl_chart_draw (HlFigure     *f,
       { a->x + pad, y_bot + pad, 0, 0 },
     };
 
-    place (f, &obs, HL_FONT_TINY, "rule of thumb R/t" HL_NBSP "=" HL_NBSP "10", rule_cand, G_N_ELEMENTS (rule_cand),
+    place (f, &obs, HL_FONT_TINY, rule_text, rule_cand, G_N_ELEMENTS (rule_cand),
            NAN, NAN, f->pal->muted);
     place (f, &obs, HL_FONT_TINY, tol_text, tol_cand, G_N_ELEMENTS (tol_cand), NAN, NAN, f->pal->muted);
   }
@@ -329,7 +333,8 @@ hl_chart_draw (HlFigure     *f,
       double o = 0.6 * f->text->base;
       g_autofree char *mr = hl_figure_format_sig (sol->mean_ratio, 3, f->locale);
       g_autofree char *e = hl_figure_format_sig (d.value, 2, f->locale);
-      g_autofree char *label = g_strdup_printf ("this design: R/t" HL_NBSP "=" HL_NBSP "%s, %s" HL_NBSP "%%", mr, e);
+      g_autofree char *values = g_strdup_printf ("R/t" HL_NBSP "=" HL_NBSP "%s, %s" HL_NBSP "%%", mr, e);
+      g_autofree char *label = g_strdup_printf (_("this design: %s"), values);
       const double cand[][4] = {
         { x + o, y - o, 0, 1 }, { x + o, y + o, 0, 0 }, { x - o, y - o, 1, 1 }, { x - o, y + o, 1, 0 },
         { x + o, y - 2.5 * o, 0, 1 }, { x + o, y + 2.5 * o, 0, 0 }, { x - o, y - 2.5 * o, 1, 1 },
@@ -349,9 +354,9 @@ hl_chart_draw (HlFigure     *f,
     }
 
   {
-    g_autofree char *yt = g_strdup ("thin-wall error, %");
+    g_autofree char *yt = g_strdup (_("thin-wall error, %"));
 
-    hl_text_draw (f->text, HL_FONT_SMALL, "mean radius / thickness R/t (log scale)", a->x + a->width / 2,
+    hl_text_draw (f->text, HL_FONT_SMALL, _("mean radius / thickness R/t (log scale)"), a->x + a->width / 2,
                   a->y + a->height + tick + th, 0.5, 0, 0, f->pal->muted);
     hl_text_draw_up (f->text, HL_FONT_SMALL, yt, area->x + th / 2, a->y + a->height / 2, f->pal->muted);
   }

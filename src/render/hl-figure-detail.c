@@ -45,7 +45,7 @@ caption_height (HlFigure *f)
 {
   double h;
 
-  hl_text_measure (f->text, HL_FONT_HEADING, "Detail A", 0, NULL, &h);
+  hl_text_measure (f->text, HL_FONT_HEADING, _("Detail A"), 0, NULL, &h);
   return h + 2 * f->gap;
 }
 
@@ -309,7 +309,11 @@ draw_labels (HlFigure   *f,
   at (v, u_t, v->b, &x1, &y1);
   hl_dimension (f, x0, y0, x1, y1);
   if (v->a_cor > v->a_new)
-    t_text = g_strdup_printf ("t" HL_NBSP "=" HL_NBSP "%s new, %s after corrosion", t_new, t_cor);
+    {
+      g_autofree char *t_eq = g_strdup_printf ("t" HL_NBSP "=" HL_NBSP "%s", t_new);
+
+      t_text = g_strdup_printf (_("%s new, %s after corrosion"), t_eq, t_cor);
+    }
   else
     t_text = g_strdup_printf ("t" HL_NBSP "=" HL_NBSP "%s", t_new);
   if (!side_text (f, v, &placed, u_t, v->b, 1, 0.5, t_text, flat ? 0.62 * v->U : wrap))
@@ -318,7 +322,7 @@ draw_labels (HlFigure   *f,
   if (v->a_cor > v->a_new)
     {
       g_autofree char *c = hl_length_text (f, v->a_cor - v->a_new, 3);
-      g_autofree char *c_text = g_strdup_printf ("corrosion allowance %s", c);
+      g_autofree char *c_text = g_strdup_printf (_("corrosion allowance %s"), c);
 
       at (v, u_c, v->a_new, &x0, &y0);
       at (v, u_c, v->a_cor, &x1, &y1);
@@ -334,12 +338,12 @@ draw_labels (HlFigure   *f,
   hl_palette_set_source (f->cr, f->pal->ink);
   hl_arrow_head (f, x0, y0, (peak_inner ? 1 : -1) * v->ex, (peak_inner ? 1 : -1) * v->ey);
   cairo_restore (f->cr);
-  p_text = g_strdup_printf ("peak σθ %s", peak);
+  p_text = g_strdup_printf (_("peak σθ %s"), peak);
   side_text (f, v, &placed, u_p, peak_inner ? v->a_new : v->b, peak_inner ? -1 : 1, 0.5, p_text, wrap);
 
   /* bore and outside named at the start of the frame */
-  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->a_new, -1, 0, "bore", 0);
-  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->b, 1, 0, "outside", 0);
+  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->a_new, -1, 0, _("bore"), 0);
+  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->b, 1, 0, _("outside"), 0);
 }
 
 static void
@@ -380,8 +384,8 @@ hl_detail_draw (HlFigure     *f,
   View v;
   double leg_w, leg_h, note_w, note_h;
   g_autofree char *mag = hl_figure_format_sig (g->magnification, 3, f->locale);
-  g_autofree char *cap = g_strdup_printf ("Detail A  ×%s", mag);
-  g_autofree char *note = g_strdup_printf ("the wall magnified %s times; shaded by the hoop stress", mag);
+  g_autofree char *cap = g_strdup_printf (_("Detail A  ×%s"), mag);
+  g_autofree char *note = g_strdup_printf (_("the wall magnified %s times; shaded by the hoop stress"), mag);
   HlRect r;
 
   view_init (f, &v);

@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-figure-format"
 
 #include "hl-figure-format.h"
+#include "hl-report.h"
 
 #include <math.h>
 #include <string.h>
@@ -31,7 +32,7 @@ hl_figure_format_fixed (double   value,
   char buf[G_ASCII_DTOSTR_BUF_SIZE];
 
   if (!isfinite (value))
-    return g_strdup ("n/a");
+    return g_strdup (_("n/a"));
   decimals = CLAMP (decimals, 0, 12);
   /* "-0.0" is not a value anyone wants to read on an axis */
   if (fabs (value) < 0.5 * pow (10, -decimals))
@@ -83,4 +84,33 @@ hl_figure_format_quantity (double       si,
   if (strcmp (unit, "%") == 0)
     return g_strconcat (number, HL_NBSP "%", NULL);
   return g_strconcat (number, HL_NBSP, unit, NULL);
+}
+
+char *
+hl_figure_caution (void)
+{
+  return g_strdup_printf (_("Caution: %s"), _(HL_CAUTION));
+}
+
+const char *
+hl_figure_form_text (const HlShellInputs *in)
+{
+  if (in->form == HL_FORM_SPHERE)
+    return _("sphere");
+  switch (in->ends)
+    {
+    case HL_ENDS_OPEN:
+      return _("cylinder, open ends");
+    case HL_ENDS_PLANE_STRAIN:
+      return _("cylinder, plane-strain ends");
+    case HL_ENDS_CLOSED:
+    default:
+      return _("cylinder, closed ends");
+    }
+}
+
+const char *
+hl_figure_core_text (const char *text)
+{
+  return text != NULL && text[0] != '\0' ? g_dgettext (GETTEXT_PACKAGE, text) : text;
 }

@@ -4,7 +4,12 @@
  */
 #pragma once
 
+#include "hl-config.h"
 #include "hl-result-rows.h"
+
+/* gettext is libc/GLib, not GTK: the words drawn follow the user's
+ * language; numbers follow HlFigureContext.locale_numbers only */
+#include <glib/gi18n-lib.h>
 
 G_BEGIN_DECLS
 
@@ -27,5 +32,13 @@ char *hl_figure_format_quantity (double       si,
                                  HlUnitSystem system,
                                  int          digits,
                                  gboolean     locale);
+
+/* "Caution: " and HL_CAUTION in the user's language */
+char       *hl_figure_caution       (void);
+/* "sphere", "cylinder, closed ends", ... in the user's language */
+const char *hl_figure_form_text     (const HlShellInputs *inputs);
+/* the core's untranslated text (row label, word, reason, warning) in
+ * the user's language; the core only marks it with N_() */
+const char *hl_figure_core_text     (const char *text);
 
 G_END_DECLS

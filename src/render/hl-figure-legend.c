@@ -38,7 +38,7 @@ typedef struct
 static const char *
 title (HlFigure *f)
 {
-  return f->sol->inputs.form == HL_FORM_SPHERE ? "σθ Lamé (tangential)" : "σθ Lamé (hoop)";
+  return f->sol->inputs.form == HL_FORM_SPHERE ? _("σθ Lamé (tangential)") : _("σθ Lamé (hoop)");
 }
 
 /* @room: the height a vertical legend may take; the bar shrinks to fit */
@@ -79,7 +79,7 @@ legend_plan (HlFigure *f,
   l->hatch_w = l->hatch_h = 0;
   if (l->band)
     {
-      hl_text_measure (f->text, HL_FONT_TINY, "corrosion allowance", vertical ? 5.5 * f->text->base : 0, &w, &h);
+      hl_text_measure (f->text, HL_FONT_TINY, _("corrosion allowance"), vertical ? 5.5 * f->text->base : 0, &w, &h);
       l->hatch_w = 1.6 * f->text->base + w;
       l->hatch_h = MAX (h, 0.9 * f->text->base);
     }
@@ -132,7 +132,7 @@ hatch_swatch (HlFigure *f,
   hl_palette_set_source (f->cr, f->pal->ink);
   cairo_stroke (f->cr);
   cairo_restore (f->cr);
-  hl_text_draw (f->text, HL_FONT_TINY, "corrosion allowance", x + 1.6 * f->text->base, y + sz / 2, 0, 0.5, wrap,
+  hl_text_draw (f->text, HL_FONT_TINY, _("corrosion allowance"), x + 1.6 * f->text->base, y + sz / 2, 0, 0.5, wrap,
                 f->pal->muted);
 }
 

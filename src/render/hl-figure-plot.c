@@ -72,24 +72,26 @@ plan_curves (HlFigure *f,
   const HlSolution *sol = f->sol;
   const HlShellInputs *in = &sol->inputs;
   gboolean sphere = in->form == HL_FORM_SPHERE;
-  const char *basis = in->thin_basis == HL_BASIS_INNER ? "inner" : in->thin_basis == HL_BASIS_OUTER ? "outer" : "mean";
+  const char *thin = in->thin_basis == HL_BASIS_INNER ? _("σθ thin wall (inner radius)")
+                     : in->thin_basis == HL_BASIS_OUTER ? _("σθ thin wall (outer radius)")
+                                                        : _("σθ thin wall (mean radius)");
   gboolean axial_zero = TRUE;
   double dummy;
 
   for (guint i = 0; i < sol->n_points; i++)
     axial_zero = axial_zero && sol->points[i].axial == 0.0;
-  p->curves[CURVE_HOOP] = (CurveStyle) { TRUE, g_strdup (sphere ? "σθ tangential, Lamé" : "σθ hoop, Lamé"),
+  p->curves[CURVE_HOOP] = (CurveStyle) { TRUE, g_strdup (sphere ? _("σθ tangential, Lamé") : _("σθ hoop, Lamé")),
                                          f->pal->hoop, HL_DASH_SOLID, 2.0 };
-  p->curves[CURVE_THIN_HOOP] = (CurveStyle) { TRUE, g_strdup_printf ("σθ thin wall (%s radius)", basis),
+  p->curves[CURVE_THIN_HOOP] = (CurveStyle) { TRUE, g_strdup (thin),
                                               f->pal->thin_hoop, HL_DASH_DASHED, 1.8 };
-  p->curves[CURVE_RADIAL] = (CurveStyle) { TRUE, g_strdup ("σr radial, Lamé"), f->pal->radial, HL_DASH_SOLID, 2.0 };
-  p->curves[CURVE_THIN_RADIAL] = (CurveStyle) { TRUE, g_strdup ("σr thin wall: 0 by convention"), f->pal->radial,
+  p->curves[CURVE_RADIAL] = (CurveStyle) { TRUE, g_strdup (_("σr radial, Lamé")), f->pal->radial, HL_DASH_SOLID, 2.0 };
+  p->curves[CURVE_THIN_RADIAL] = (CurveStyle) { TRUE, g_strdup (_("σr thin wall: 0 by convention")), f->pal->radial,
                                                 HL_DASH_DOTTED, 1.8 };
   p->curves[CURVE_AXIAL] = (CurveStyle) { !sphere && !axial_zero,
-                                          g_strdup (in->ends == HL_ENDS_PLANE_STRAIN ? "σz axial, Lamé (plane strain)"
-                                                                                     : "σz axial, Lamé (closed ends)"),
+                                          g_strdup (in->ends == HL_ENDS_PLANE_STRAIN ? _("σz axial, Lamé (plane strain)")
+                                                                                     : _("σz axial, Lamé (closed ends)")),
                                           f->pal->axial, HL_DASH_DASH_DOT, 1.3 };
-  p->curves[CURVE_VON_MISES] = (CurveStyle) { TRUE, g_strdup ("σeq von Mises, Lamé"), f->pal->von_mises, HL_DASH_LONG,
+  p->curves[CURVE_VON_MISES] = (CurveStyle) { TRUE, g_strdup (_("σeq von Mises, Lamé")), f->pal->von_mises, HL_DASH_LONG,
                                               1.3 };
   hl_shell_inputs_radii (in, FALSE, &p->a_new, &dummy);
   hl_shell_inputs_radii (in, TRUE, &p->a_cor, &dummy);
@@ -110,11 +112,14 @@ plan_subtitle (HlFigure *f,
     {
       g_autofree char *err = hl_figure_format_sig (sol->thin_wall_error.value, 2, f->locale);
 
-      p->subtitle = g_strdup_printf ("Peak Lamé σθ %s (%s surface); thin wall σθ %s; difference %s" HL_NBSP "%%",
-                                     peak_s, inner ? "inner" : "outer", thin_s, err);
+      g_autofree char *pct = g_strdup_printf ("%s" HL_NBSP "%%", err);
+
+      p->subtitle = g_strdup_printf (inner ? _("Peak Lamé σθ %s (inner surface); thin wall σθ %s; difference %s")
+                                           : _("Peak Lamé σθ %s (outer surface); thin wall σθ %s; difference %s"),
+                                     peak_s, thin_s, pct);
     }
   else
-    p->subtitle = g_strdup_printf ("Peak Lamé σθ %s; thin wall σθ %s", peak_s, thin_s);
+    p->subtitle = g_strdup_printf (_("Peak Lamé σθ %s; thin wall σθ %s"), peak_s, thin_s);
 }
 
 static void
@@ -149,7 +154,7 @@ legend_entries_size (HlFigure *f,
       }
   if (p->band)
     {
-      hl_text_measure (f->text, HL_FONT_SMALL, "corrosion allowance", 0, &lw, &lh);
+      hl_text_measure (f->text, HL_FONT_SMALL, _("corrosion allowance"), 0, &lw, &lh);
       *w = MAX (*w, lw);
     }
   *w += sample_width (f) + 0.5 * f->text->base;
@@ -212,7 +217,7 @@ draw_legend (HlFigure     *f,
           cairo_rectangle (f->cr, x, y - sz / 2, sample_width (f) - 0.3 * f->text->base, sz);
           hl_hatch (f);
           cairo_new_path (f->cr);
-          hl_text_draw (f->text, HL_FONT_SMALL, "corrosion allowance", x + sample_width (f), y, 0, 0.5, 0,
+          hl_text_draw (f->text, HL_FONT_SMALL, _("corrosion allowance"), x + sample_width (f), y, 0, 0.5, 0,
                         f->pal->ink);
         }
       k++;
@@ -334,7 +339,7 @@ layout (HlFigure     *f,
   HlPlotGeometry *g = &f->geom->plot;
   double lo, hi, entry_h;
 
-  l->head_h = hl_panel_heading_height (f, area->width, "Stress through the wall", p->subtitle);
+  l->head_h = hl_panel_heading_height (f, area->width, _("Stress through the wall"), p->subtitle);
   legend_entries_size (f, p, &l->entry_w, &entry_h);
   l->row_h = entry_h * 1.15;
   l->body = *area;
@@ -411,14 +416,14 @@ hl_plot_draw (HlFigure     *f,
   Plan p = { 0 };
   Layout l;
   double tick = hl_axes_tick_length (f);
-  g_autofree char *xt = g_strdup_printf ("radius r, %s", hl_length_unit (f));
-  g_autofree char *yt = g_strdup_printf ("stress, %s", hl_stress_unit (f));
+  g_autofree char *xt = g_strdup_printf (_("radius r, %s"), hl_length_unit (f));
+  g_autofree char *yt = g_strdup_printf (_("stress, %s"), hl_stress_unit (f));
 
   plan_curves (f, &p);
   plan_subtitle (f, &p);
   layout (f, &p, area, &l);
   g->drawn = TRUE;
-  hl_panel_heading (f, area, "Stress through the wall", p.subtitle);
+  hl_panel_heading (f, area, _("Stress through the wall"), p.subtitle);
   draw_axes (f, g);
   draw_curves (f, &p, g);
   hl_text_draw (f->text, HL_FONT_SMALL, xt, g->area.x + g->area.width / 2, g->area.y + g->area.height + tick + l.th,

@@ -59,7 +59,7 @@ plan_texts (HlFigure *f,
             gboolean  wall_label)
 {
   static const char *const what[] = {
-    "inner diameter, new", "outer diameter", "inner radius, new", "outer radius"
+    N_("inner diameter, new"), N_("outer diameter"), N_("inner radius, new"), N_("outer radius")
   };
   const HlShellInputs *in = &f->sol->inputs;
   double dummy;
@@ -71,7 +71,7 @@ plan_texts (HlFigure *f,
   hl_shell_inputs_radii (in, TRUE, &p->a_cor, &dummy);
   size = hl_length_text (f, (inner ? p->a_new : p->b) * (diameter ? 2 : 1), 5);
   p->size_value = g_strdup_printf ("%s%s", diameter ? "Ø" HL_NBSP : "R" HL_NBSP, size);
-  p->size_what = g_strdup (what[in->size_kind]);
+  p->size_what = g_strdup (_(what[in->size_kind]));
   two_lines (f, p->size_value, p->size_what, &p->size_w, &p->size_h);
   if (wall_label)
     {
@@ -82,10 +82,10 @@ plan_texts (HlFigure *f,
         {
           g_autofree char *c = hl_length_text (f, p->a_cor - p->a_new, 3);
 
-          p->wall_what = g_strdup_printf ("new wall; hatched: corrosion allowance %s", c);
+          p->wall_what = g_strdup_printf (_("new wall; hatched: corrosion allowance %s"), c);
         }
       else
-        p->wall_what = g_strdup ("wall thickness");
+        p->wall_what = g_strdup (_("wall thickness"));
       two_lines (f, p->wall_value, p->wall_what, &p->wall_w, &p->wall_h);
     }
 }
@@ -387,8 +387,8 @@ hl_section_draw (HlFigure     *f,
                  HlSide        detail_side)
 {
   HlSectionGeometry *g = &f->geom->section;
-  const char *sub = f->sol->inputs.form == HL_FORM_SPHERE ? "sphere: section through the centre"
-                                                           : "cylinder: ring cross-section";
+  const char *sub = f->sol->inputs.form == HL_FORM_SPHERE ? _("sphere: section through the centre")
+                                                           : _("cylinder: ring cross-section");
   Plan p = { 0 };
   double bar_w, bar_h, bar_len, head_h;
   g_autofree char *bar_label = NULL;
@@ -399,7 +399,7 @@ hl_section_draw (HlFigure     *f,
    * the heading; a first guess of R is close enough for its width */
   scale_bar_size (f, &p, MIN (area->width, area->height) / 2, &bar_w, &bar_h, &bar_len, &bar_label);
   head.width = MAX (area->width - bar_w - f->gap, area->width / 2);
-  head_h = MAX (hl_panel_heading_height (f, head.width, "Section to scale", sub), bar_h + f->gap);
+  head_h = MAX (hl_panel_heading_height (f, head.width, _("Section to scale"), sub), bar_h + f->gap);
   p.content = *area;
   p.content.y += head_h;
   p.content.height -= head_h;
@@ -424,7 +424,7 @@ hl_section_draw (HlFigure     *f,
   if (detail != NULL)
     hl_detail_fit (f, detail, detail_side);
 
-  hl_panel_heading (f, &head, "Section to scale", sub);
+  hl_panel_heading (f, &head, _("Section to scale"), sub);
   scale_bar_size (f, &p, p.R, &bar_w, &bar_h, &bar_len, &bar_label);
   draw_scale_bar (f, area->x + area->width, area->y, bar_len, bar_label);
   draw_ring (f, &p);

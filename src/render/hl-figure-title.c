@@ -15,17 +15,31 @@ verdict_text (HlFigure *f)
   const HlSolution *sol = f->sol;
   gboolean eq = sol->inputs.verdict_measure == HL_MEASURE_EQUIVALENT;
   HlResult err = eq ? sol->thin_wall_error_equivalent : sol->thin_wall_error;
-  const char *what = eq ? "Thin-wall von Mises stress" : "Thin-wall formulas";
+  
   g_autofree char *tol = hl_figure_format_sig (sol->tolerance, 3, f->locale);
-  g_autofree char *e = NULL;
+  g_autofree char *e = NULL, *e_pct = NULL, *tol_pct = NULL;
 
   if (!hl_result_ok (err))
-    return g_strdup_printf ("The thin-wall error cannot be formed: %s.", err.reason);
+    return g_strdup_printf (_("The thin-wall error cannot be formed: %s."), hl_figure_core_text (err.reason));
   e = hl_figure_format_sig (fabs (err.value), 2, f->locale);
+  e_pct = g_strdup_printf ("%s" HL_NBSP "%%", e);
+  tol_pct = g_strdup_printf ("%s" HL_NBSP "%%", tol);
+  /* whole sentences, so that a translation can order its words */
   if (sol->is_thin)
-    return g_strdup_printf ("%s within %s" HL_NBSP "%% of Lamé (tolerance %s" HL_NBSP "%%)", what, e, tol);
-  return g_strdup_printf ("%s %s" HL_NBSP "%% %s Lamé: outside the %s" HL_NBSP "%% tolerance; use the Lamé "
-                          "(thick-wall) results", what, e, err.value < 0 ? "below" : "above", tol);
+    return g_strdup_printf (eq ? _("Thin-wall von Mises stress within %s of Lamé (tolerance %s)")
+                               : _("Thin-wall formulas within %s of Lamé (tolerance %s)"),
+                            e_pct, tol_pct);
+  if (err.value < 0)
+    return g_strdup_printf (eq ? _("Thin-wall von Mises stress %s below Lamé: outside the %s tolerance; use the "
+                                   "Lamé (thick-wall) results")
+                               : _("Thin-wall formulas %s below Lamé: outside the %s tolerance; use the Lamé "
+                                   "(thick-wall) results"),
+                            e_pct, tol_pct);
+  return g_strdup_printf (eq ? _("Thin-wall von Mises stress %s above Lamé: outside the %s tolerance; use the "
+                                 "Lamé (thick-wall) results")
+                             : _("Thin-wall formulas %s above Lamé: outside the %s tolerance; use the Lamé "
+                                 "(thick-wall) results"),
+                          e_pct, tol_pct);
 }
 
 static char *
@@ -38,7 +52,8 @@ warnings_text (HlFigure *f)
     return NULL;
   s = g_string_new (NULL);
   for (guint i = 0; i < w->len; i++)
-    g_string_append_printf (s, "%s⚠ %s", i ? "    " : "", (const char *) g_ptr_array_index (w, i));
+    g_string_append_printf (s, "%s⚠ %s", i ? "    " : "",
+                            hl_figure_core_text (g_ptr_array_index (w, i)));
   return g_string_free (s, FALSE);
 }
 
@@ -55,8 +70,8 @@ static const char *
 tag_text (HlFigure *f)
 {
   if (!verdict_formed (f))
-    return "N/A";
-  return f->sol->is_thin ? "THIN" : "THICK";
+    return _("N/A");
+  return f->sol->is_thin ? _("THIN") : _("THICK");
 }
 
 static double
@@ -64,8 +79,8 @@ tag_width (HlFigure *f)
 {
   double w1, w2;
 
-  hl_text_measure (f->text, HL_FONT_HEADING, "THIN", 0, &w1, NULL);
-  hl_text_measure (f->text, HL_FONT_HEADING, "THICK", 0, &w2, NULL);
+  hl_text_measure (f->text, HL_FONT_HEADING, _("THIN"), 0, &w1, NULL);
+  hl_text_measure (f->text, HL_FONT_HEADING, _("THICK"), 0, &w2, NULL);
   return MAX (w1, w2) + 1.2 * f->text->base;
 }
 
@@ -124,13 +139,13 @@ title_cells (HlFigure *f,
   const HlRevision *rev = pr != NULL ? hl_project_latest_revision (pr) : NULL;
   g_autoptr(GDateTime) now = g_date_time_new_now_local ();
 
-  cells[0] = (Cell) { "Project", g_strdup (pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : "(untitled)") };
-  cells[1] = (Cell) { "Engineer", g_strdup (pr != NULL && pr->engineer != NULL && pr->engineer[0] ? pr->engineer
-                                                                                                   : "(not given)") };
-  cells[2] = (Cell) { "Revision", rev != NULL ? g_strdup_printf ("%u, %s", rev->number, rev->date) : g_strdup ("none") };
-  cells[3] = (Cell) { "Shell", sh != NULL ? g_strdup_printf ("%s (id %s)", sh->name, sh->id) : g_strdup ("—") };
-  cells[4] = (Cell) { "Units", g_strdup (f->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa") };
-  cells[5] = (Cell) { "Exported", f->ctx->export_date != NULL ? g_strdup (f->ctx->export_date)
+  cells[0] = (Cell) { _("Project"), g_strdup (pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : _("(untitled)")) };
+  cells[1] = (Cell) { _("Engineer"), g_strdup (pr != NULL && pr->engineer != NULL && pr->engineer[0] ? pr->engineer
+                                                                                                      : _("(not given)")) };
+  cells[2] = (Cell) { _("Revision"), rev != NULL ? g_strdup_printf ("%u, %s", rev->number, rev->date) : g_strdup (_("none")) };
+  cells[3] = (Cell) { _("Shell"), sh != NULL ? g_strdup_printf (_("%s (id %s)"), sh->name, sh->id) : g_strdup ("—") };
+  cells[4] = (Cell) { _("Units"), g_strdup (f->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa") };
+  cells[5] = (Cell) { _("Exported"), f->ctx->export_date != NULL ? g_strdup (f->ctx->export_date)
                                                               : g_date_time_format (now, "%Y-%m-%d") };
   return 6;
 }
@@ -171,15 +186,15 @@ cell_height (HlFigure *f)
 {
   double h1, h2;
 
-  hl_text_measure (f->text, HL_FONT_TINY, "Project", 0, NULL, &h1);
-  hl_text_measure (f->text, HL_FONT_VALUE, "Project", 0, NULL, &h2);
+  hl_text_measure (f->text, HL_FONT_TINY, _("Project"), 0, NULL, &h1);
+  hl_text_measure (f->text, HL_FONT_VALUE, _("Project"), 0, NULL, &h2);
   return h1 + h2 + 0.5 * f->text->base;
 }
 
 static char *
 caution_text (void)
 {
-  return g_strdup ("Caution: " HL_CAUTION);
+  return hl_figure_caution ();
 }
 
 double
@@ -253,9 +268,9 @@ hl_problem_draw (HlFigure     *f,
 {
   cairo_t *cr = f->cr;
   const char *problem = f->ctx->problem_text != NULL && f->ctx->problem_text[0] ? f->ctx->problem_text
-                                                                                : "Some inputs are missing or invalid.";
-  const char *head = "These inputs cannot be solved yet";
-  const char *foot = "No results are shown until every value is valid.";
+                                                                                : _("Some inputs are missing or invalid.");
+  const char *head = _("These inputs cannot be solved yet");
+  const char *foot = _("No results are shown until every value is valid.");
   double w = MIN (area->width - 2 * f->gap, 42 * f->text->base);
   double pad = f->text->base, inner = w - 2 * pad;
   double h1, h2, h3, h, x, y;

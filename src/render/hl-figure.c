@@ -153,7 +153,7 @@ plan_small (HlFigure *f,
     return TRUE;
   l->title_shown = FALSE;
   l->caution_only = TRUE;
-  caution = g_strdup ("Caution: " HL_CAUTION);
+  caution = hl_figure_caution ();
   for (double fs = f->text->base; fs >= FONT_TINY; fs *= 0.9)
     {
       set_font (f, fs);
@@ -232,8 +232,11 @@ hl_figure_draw_full (cairo_t               *cr,
   if (l.title_shown)
     hl_title_block_draw (&f, &l.title);
   else if (l.caution_only)
-    hl_text_draw (f.text, HL_FONT_SMALL, "Caution: " HL_CAUTION, l.title.x, l.title.y, 0, 0, l.title.width,
-                  f.pal->ink);
+    {
+      g_autofree char *caution = hl_figure_caution ();
+
+      hl_text_draw (f.text, HL_FONT_SMALL, caution, l.title.x, l.title.y, 0, 0, l.title.width, f.pal->ink);
+    }
   if (body && f.sol == NULL)
     hl_problem_draw (&f, &l.body);
   else if (body)

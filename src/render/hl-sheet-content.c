@@ -62,6 +62,29 @@ add_text (GArray         *rows,
   g_free (owned);
 }
 
+/* the radius basis in three grammatical places: a value on its own,
+ * "on the … radius" and "R is the … radius" */
+static const char *
+basis_word (HlRadiusBasis basis)
+{
+  return basis == HL_BASIS_INNER ? C_("radius basis", "inner")
+         : basis == HL_BASIS_OUTER ? C_("radius basis", "outer") : C_("radius basis", "mean");
+}
+
+static const char *
+basis_on (HlRadiusBasis basis)
+{
+  return basis == HL_BASIS_INNER ? C_("on the … radius", "inner")
+         : basis == HL_BASIS_OUTER ? C_("on the … radius", "outer") : C_("on the … radius", "mean");
+}
+
+static const char *
+basis_is (HlRadiusBasis basis)
+{
+  return basis == HL_BASIS_INNER ? C_("R is the … radius", "inner")
+         : basis == HL_BASIS_OUTER ? C_("R is the … radius", "outer") : C_("R is the … radius", "mean");
+}
+
 static void
 header (GArray                *rows,
         const HlFigureContext *ctx)
@@ -71,21 +94,21 @@ header (GArray                *rows,
   const HlRevision *rev = pr != NULL ? hl_project_latest_revision (pr) : NULL;
   g_autoptr(GDateTime) now = g_date_time_new_now_local ();
   g_autofree char *today = g_date_time_format (now, "%Y-%m-%d");
-  g_autofree char *shell = g_strdup_printf ("%s (id %s)", in->name, in->id);
+  g_autofree char *shell = g_strdup_printf (_("%s (id %s)"), in->name, in->id);
   g_autofree char *revision = rev != NULL ? g_strdup_printf ("%u, %s, %s: %s", rev->number, rev->date,
                                                              rev->author != NULL ? rev->author : "",
                                                              rev->text != NULL ? rev->text : "")
-                                          : g_strdup ("none recorded");
+                                          : g_strdup (_("none recorded"));
 
-  add (rows, HL_SHEET_TITLE, NULL, FALSE, 2, "Calculation sheet", shell);
-  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, "Project",
-       pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : "(untitled)");
-  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, "Engineer",
-       pr != NULL && pr->engineer != NULL && pr->engineer[0] ? pr->engineer : "(not given)");
-  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, "Latest revision", revision);
-  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, "Units", ctx->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa");
-  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, "Exported", ctx->export_date != NULL ? ctx->export_date : today);
-  add (rows, HL_SHEET_BOX, NULL, FALSE, 1, "Caution: " HL_CAUTION);
+  add (rows, HL_SHEET_TITLE, NULL, FALSE, 2, _("Calculation sheet"), shell);
+  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, _("Project"),
+       pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : _("(untitled)"));
+  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, _("Engineer"),
+       pr != NULL && pr->engineer != NULL && pr->engineer[0] ? pr->engineer : _("(not given)"));
+  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, _("Latest revision"), revision);
+  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, _("Units"), ctx->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa");
+  add (rows, HL_SHEET_TABLE, cols_pair, FALSE, 2, _("Exported"), ctx->export_date != NULL ? ctx->export_date : today);
+  add_text (rows, HL_SHEET_BOX, hl_figure_caution ());
 }
 
 static void
@@ -123,34 +146,32 @@ inputs (GArray                *rows,
         const HlFigureContext *ctx)
 {
   static const char *const size_labels[] = {
-    "Inner diameter", "Outer diameter", "Inner radius", "Outer radius"
+    N_("Inner diameter"), N_("Outer diameter"), N_("Inner radius"), N_("Outer radius")
   };
   const HlShellInputs *in = &ctx->solution->inputs;
-  g_autofree char *form = in->form == HL_FORM_SPHERE ? g_strdup ("sphere")
-                                                     : g_strdup_printf ("cylinder, %s ends", hl_ends_to_string (in->ends));
   g_autofree char *nu = hl_figure_format_sig (in->material.poisson_ratio, 6, ctx->locale_numbers);
   g_autofree char *je = hl_figure_format_sig (in->joint_efficiency, 6, ctx->locale_numbers);
   g_autofree char *mat = g_strdup_printf ("%s (%s)", in->material.name, in->material.id);
 
-  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, "Inputs");
-  add (rows, HL_SHEET_TABLE, cols_input, TRUE, 3, "Quantity", "As entered", "In the sheet's units");
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Form", form, "");
-  input_row (rows, ctx, size_labels[in->size_kind], in->size, HL_KIND_LENGTH);
-  input_row (rows, ctx, "Wall thickness (new)", in->wall_thickness, HL_KIND_LENGTH);
-  input_row (rows, ctx, "Corrosion allowance", in->corrosion_allowance, HL_KIND_LENGTH);
-  input_row (rows, ctx, "Internal pressure (gauge)", in->internal_pressure, HL_KIND_STRESS);
-  input_row (rows, ctx, "External pressure (gauge)", in->external_pressure, HL_KIND_STRESS);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Material", mat, "");
-  input_row (rows, ctx, "Elastic modulus E", in->material.elastic_modulus, HL_KIND_MODULUS);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Poisson's ratio ν", nu, "");
-  input_row (rows, ctx, "Yield strength", in->material.yield_strength, HL_KIND_STRESS);
-  input_row (rows, ctx, "Allowable stress S", in->material.allowable_stress, HL_KIND_STRESS);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Weld joint efficiency", je, "");
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Thin-wall radius basis", hl_basis_to_string (in->thin_basis), "");
-  input_row (rows, ctx, "Thin-wall tolerance", in->thin_tolerance, HL_KIND_PERCENT);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Verdict measure",
-       in->verdict_measure == HL_MEASURE_EQUIVALENT ? "von Mises stress" : "hoop stress", "");
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, "Sizing criterion",
+  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Inputs"));
+  add (rows, HL_SHEET_TABLE, cols_input, TRUE, 3, _("Quantity"), _("As entered"), _("In the sheet's units"));
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Form"), hl_figure_form_text (in), "");
+  input_row (rows, ctx, _(size_labels[in->size_kind]), in->size, HL_KIND_LENGTH);
+  input_row (rows, ctx, _("Wall thickness (new)"), in->wall_thickness, HL_KIND_LENGTH);
+  input_row (rows, ctx, _("Corrosion allowance"), in->corrosion_allowance, HL_KIND_LENGTH);
+  input_row (rows, ctx, _("Internal pressure (gauge)"), in->internal_pressure, HL_KIND_STRESS);
+  input_row (rows, ctx, _("External pressure (gauge)"), in->external_pressure, HL_KIND_STRESS);
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Material"), mat, "");
+  input_row (rows, ctx, _("Elastic modulus E"), in->material.elastic_modulus, HL_KIND_MODULUS);
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Poisson's ratio ν"), nu, "");
+  input_row (rows, ctx, _("Yield strength"), in->material.yield_strength, HL_KIND_STRESS);
+  input_row (rows, ctx, _("Allowable stress S"), in->material.allowable_stress, HL_KIND_STRESS);
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Weld joint efficiency"), je, "");
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Thin-wall radius basis"), basis_word (in->thin_basis), "");
+  input_row (rows, ctx, _("Thin-wall tolerance"), in->thin_tolerance, HL_KIND_PERCENT);
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Verdict measure"),
+       in->verdict_measure == HL_MEASURE_EQUIVALENT ? _("von Mises stress") : _("hoop stress"), "");
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Sizing criterion"),
        in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises", "");
 }
 
@@ -159,9 +180,9 @@ value_text (const HlResultRow     *row,
             const HlFigureContext *ctx)
 {
   if (row->kind == HL_ROW_WORD)
-    return g_strdup (row->word != NULL ? row->word : "");
+    return g_strdup (row->word != NULL ? hl_figure_core_text (row->word) : "");
   if (!hl_result_ok (row->result))
-    return g_strdup ("n/a");
+    return g_strdup (_("n/a"));
   /* a stress below a micropascal is rounding left in a difference of
    * large terms (the outer radial stress A - B/b^2): show it as zero */
   if (row->kind == HL_ROW_STRESS && fabs (row->result.value) < 1e-6)
@@ -173,8 +194,9 @@ static char *
 source_text (const HlResultRow *row)
 {
   if (row->kind != HL_ROW_WORD && !hl_result_ok (row->result) && row->result.reason != NULL)
-    return row->source != NULL ? g_strdup_printf ("%s; n/a: %s", row->source, row->result.reason)
-                               : g_strdup_printf ("n/a: %s", row->result.reason);
+    return row->source != NULL ? g_strdup_printf (_("%s; n/a: %s"), row->source,
+                                                  hl_figure_core_text (row->result.reason))
+                               : g_strdup_printf (_("n/a: %s"), hl_figure_core_text (row->result.reason));
   return g_strdup (row->source != NULL ? row->source : "");
 }
 
@@ -186,11 +208,12 @@ results (GArray                *rows,
   g_autoptr(GArray) cor = hl_result_rows (ctx->solution);
   g_autoptr(GArray) nw = new_wall != NULL ? hl_result_rows (new_wall) : NULL;
 
-  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, "Results");
+  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Results"));
   if (nw != NULL)
-    add (rows, HL_SHEET_TABLE, cols_result2, TRUE, 4, "Result", "New wall", "Corroded wall", "Formula or source");
+    add (rows, HL_SHEET_TABLE, cols_result2, TRUE, 4, _("Result"), _("New wall"), _("Corroded wall"),
+         _("Formula or source"));
   else
-    add (rows, HL_SHEET_TABLE, cols_result1, TRUE, 3, "Result", "Value", "Formula or source");
+    add (rows, HL_SHEET_TABLE, cols_result1, TRUE, 3, _("Result"), _("Value"), _("Formula or source"));
   for (guint i = 0; i < cor->len; i++)
     {
       const HlResultRow *rc = &g_array_index (cor, HlResultRow, i);
@@ -205,10 +228,10 @@ results (GArray                *rows,
         {
           g_autofree char *vn = value_text (&g_array_index (nw, HlResultRow, i), ctx);
 
-          add (rows, HL_SHEET_TABLE, cols_result2, FALSE, 4, rc->label, vn, vc, src);
+          add (rows, HL_SHEET_TABLE, cols_result2, FALSE, 4, hl_figure_core_text (rc->label), vn, vc, src);
         }
       else
-        add (rows, HL_SHEET_TABLE, cols_result1, FALSE, 3, rc->label, vc, src);
+        add (rows, HL_SHEET_TABLE, cols_result1, FALSE, 3, hl_figure_core_text (rc->label), vc, src);
     }
 }
 
@@ -223,30 +246,40 @@ verdict (GArray                *rows,
   g_autofree char *tol = hl_figure_format_sig (s->tolerance, 3, loc);
   g_autofree char *mr = hl_figure_format_sig (s->mean_ratio, 4, loc);
 
-  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, "Thin-wall verdict");
+  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Thin-wall verdict"));
   if (!hl_result_ok (err))
-    add_text (rows, HL_SHEET_PARAGRAPH, g_strdup_printf ("The thin-wall error cannot be formed: %s.", err.reason));
+    add_text (rows, HL_SHEET_PARAGRAPH, g_strdup_printf (_("The thin-wall error cannot be formed: %s."),
+                                                        hl_figure_core_text (err.reason)));
   else
     {
       g_autofree char *e = hl_figure_format_sig (err.value, 3, loc);
+      /* whole sentences, so that a translation can order its words */
+      g_autofree char *gap = g_strdup_printf (eq ? _("On the %s radius, the thin-wall von Mises stress is %s %% "
+                                                     "from the Lamé peak")
+                                                 : _("On the %s radius, the thin-wall hoop stress is %s %% from "
+                                                     "the Lamé peak"),
+                                              basis_on (s->inputs.thin_basis), e);
+      g_autofree char *fit = g_strdup_printf (s->is_thin ? _("With a tolerance of %s %% the thin-wall formulas are "
+                                                             "adequate for this wall.")
+                                                         : _("With a tolerance of %s %% the thin-wall formulas are "
+                                                             "not adequate for this wall; use the Lamé (thick-wall) "
+                                                             "results."),
+                                              tol);
 
       add_text (rows, HL_SHEET_PARAGRAPH,
-                g_strdup_printf ("On the %s radius, the thin-wall %s stress is %s %% from the Lamé peak "
-                                 "(%s). With a tolerance of %s %% the thin-wall formulas are %s for this wall%s",
-                                 hl_basis_to_string (s->inputs.thin_basis), eq ? "von Mises" : "hoop", e,
-                                 err.value < 0 ? "below it: unconservative" : "above it: conservative", tol,
-                                 s->is_thin ? "adequate" : "not adequate",
-                                 s->is_thin ? "." : "; use the Lamé (thick-wall) results."));
+                g_strdup_printf ("%s %s %s", gap, err.value < 0 ? _("(below it: unconservative).")
+                                                                 : _("(above it: conservative)."), fit));
     }
   add_text (rows, HL_SHEET_PARAGRAPH,
-            g_strdup_printf ("Mean radius / thickness R/t = %s; the common rule of thumb (R/t ≥ 10) is %s.", mr,
-                             s->rule_of_thumb ? "met" : "not met"));
+            g_strdup_printf (_("Mean radius / thickness R/t = %s; the common rule of thumb (R/t ≥ 10) is %s."), mr,
+                             s->rule_of_thumb ? _("met") : _("not met")));
   if (hl_result_ok (s->ratio_for_tolerance))
     {
       g_autofree char *rt = hl_figure_format_sig (s->ratio_for_tolerance.value, 4, loc);
 
       add_text (rows, HL_SHEET_PARAGRAPH,
-                g_strdup_printf ("The error equals the tolerance at R/t = %s; every wall with a larger R/t is within it.", rt));
+                g_strdup_printf (_("The error equals the tolerance at R/t = %s; every wall with a larger R/t is "
+                                   "within it."), rt));
     }
 }
 
@@ -256,31 +289,32 @@ methods (GArray                *rows,
 {
   const HlSolution *s = ctx->solution;
 
-  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, "Methods and sources");
+  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Methods and sources"));
   add_text (rows, HL_SHEET_BULLET,
-            g_strdup_printf ("Thin wall (membrane), radial stress taken as zero: cylinder hoop σθ = p R / t, axial "
-                             "σz = p R / 2t (closed ends), 0 (open ends), ν σθ (plane strain); sphere σ = p R / 2t. "
-                             "R is the %s radius, p the net pressure.", hl_basis_to_string (s->inputs.thin_basis)));
+            g_strdup_printf (_("Thin wall (membrane), radial stress taken as zero: cylinder hoop σθ = p R / t, "
+                               "axial σz = p R / 2t (closed ends), 0 (open ends), ν σθ (plane strain); sphere "
+                               "σ = p R / 2t. R is the %s radius, p the net pressure."),
+                             basis_is (s->inputs.thin_basis)));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
-       "Lamé thick wall: cylinder σr = A − B/r², σθ = A + B/r² (Timoshenko, Strength of Materials, Part II; "
-       "Lai, Rubin & Krempl, Introduction to Continuum Mechanics, §5.18); sphere σr = C − D/r³, "
-       "σθ = C + D/2r³ (§5.21).");
+       _("Lamé thick wall: cylinder σr = A − B/r², σθ = A + B/r² (Timoshenko, Strength of Materials, Part II; "
+         "Lai, Rubin & Krempl, Introduction to Continuum Mechanics, §5.18); sphere σr = C − D/r³, "
+         "σθ = C + D/2r³ (§5.21)."));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
-       "Equivalent stresses: von Mises and Tresca of the Lamé principal stresses; the peak is on a surface.");
+       _("Equivalent stresses: von Mises and Tresca of the Lamé principal stresses; the peak is on a surface."));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
-       "Thin-wall error = 100 (thin − Lamé peak) / |Lamé peak|; the verdict compares it with the tolerance.");
+       _("Thin-wall error = 100 (thin − Lamé peak) / |Lamé peak|; the verdict compares it with the tolerance."));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
-       "First yield: all pressures scaled together until the peak equivalent stress reaches the yield strength. "
-       "Plastic collapse: Hill, The Mathematical Theory of Plasticity (1950), perfectly plastic, von Mises.");
+       _("First yield: all pressures scaled together until the peak equivalent stress reaches the yield strength. "
+         "Plastic collapse: Hill, The Mathematical Theory of Plasticity (1950), perfectly plastic, von Mises."));
   add_text (rows, HL_SHEET_BULLET,
-            g_strdup_printf ("Allowable pressure and required thickness: thin wall (σθ = S E), Lamé (peak equivalent "
-                             "stress = S E), ASME BPVC Section VIII Division 1 %s, %s, Barlow P = 2 S t / D "
-                             "for pipe. Code formulas are used inside their stated ranges only.",
+            g_strdup_printf (_("Allowable pressure and required thickness: thin wall (σθ = S E), Lamé (peak "
+                               "equivalent stress = S E), ASME BPVC Section VIII Division 1 %s, %s, Barlow "
+                               "P = 2 S t / D for pipe. Code formulas are used inside their stated ranges only."),
                              s->ug27_clause != NULL ? s->ug27_clause : "UG-27",
                              s->en13445_clause != NULL ? s->en13445_clause : "EN 13445-3 7.4"));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
-       "The analysis wall has the corrosion allowance removed from the inside: the inner radius grows and the wall "
-       "thins by the allowance.");
+       _("The analysis wall has the corrosion allowance removed from the inside: the inner radius grows and the "
+         "wall thins by the allowance."));
 }
 
 static void
@@ -289,11 +323,11 @@ warnings (GArray                *rows,
 {
   GPtrArray *w = ctx->solution->warnings;
 
-  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, "Warnings");
+  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Warnings"));
   if (w == NULL || w->len == 0)
-    add (rows, HL_SHEET_PARAGRAPH, NULL, FALSE, 1, "None for this shell.");
+    add (rows, HL_SHEET_PARAGRAPH, NULL, FALSE, 1, _("None for this shell."));
   for (guint i = 0; w != NULL && i < w->len; i++)
-    add (rows, HL_SHEET_BULLET, NULL, FALSE, 1, (const char *) g_ptr_array_index (w, i));
+    add (rows, HL_SHEET_BULLET, NULL, FALSE, 1, hl_figure_core_text (g_ptr_array_index (w, i)));
 }
 
 GArray *

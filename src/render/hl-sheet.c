@@ -10,6 +10,7 @@
 
 #include "hl-sheet.h"
 #include "hl-sheet-private.h"
+#include "hl-figure-format.h"
 #include "hl-palette.h"
 #include "hl-report.h"
 
@@ -82,8 +83,10 @@ footer_height (Sheet *s)
 {
   double h1, h2;
 
-  hl_text_measure (s->text, HL_FONT_TINY, "Caution: " HL_CAUTION, s->right - s->left, NULL, &h1);
-  hl_text_measure (s->text, HL_FONT_TINY, "Page", 0, NULL, &h2);
+  g_autofree char *caution = hl_figure_caution ();
+
+  hl_text_measure (s->text, HL_FONT_TINY, caution, s->right - s->left, NULL, &h1);
+  hl_text_measure (s->text, HL_FONT_TINY, _("Page"), 0, NULL, &h2);
   return h1 + h2 + 0.8 * s->base;
 }
 
@@ -214,10 +217,11 @@ draw_footer (Sheet                 *s,
   const HlShellInputs *in = &ctx->solution->inputs;
   const HlProject *pr = ctx->project;
   double y = s->bottom + 0.6 * s->base;
-  g_autofree char *left = g_strdup_printf ("Hoopline calculation sheet · %s · shell %s",
-                                           pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : "(untitled)",
+  g_autofree char *left = g_strdup_printf (_("Hoopline calculation sheet · %s · shell %s"),
+                                           pr != NULL && pr->title != NULL && pr->title[0] ? pr->title : _("(untitled)"),
                                            in->id);
-  g_autofree char *right = g_strdup_printf ("page %u of %u", page + 1, s->starts->len);
+  g_autofree char *right = g_strdup_printf (_("page %u of %u"), page + 1, s->starts->len);
+  g_autofree char *caution = hl_figure_caution ();
   double rw;
   HlRect r;
 
@@ -231,8 +235,7 @@ draw_footer (Sheet                 *s,
   hl_text_measure (s->text, HL_FONT_TINY, right, 0, &rw, NULL);
   r = hl_text_draw_line (s->text, HL_FONT_TINY, left, s->left, y, s->right - s->left - rw - s->base, s->pal->muted);
   hl_text_draw (s->text, HL_FONT_TINY, right, s->right, y, 1, 0, 0, s->pal->muted);
-  hl_text_draw (s->text, HL_FONT_TINY, "Caution: " HL_CAUTION, s->left, r.y + r.height, 0, 0, s->right - s->left,
-                s->pal->ink);
+  hl_text_draw (s->text, HL_FONT_TINY, caution, s->left, r.y + r.height, 0, 0, s->right - s->left, s->pal->ink);
 }
 
 guint
