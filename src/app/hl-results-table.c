@@ -46,11 +46,13 @@ row_value (const HlResultRow *row,
            char             **number,
            const char       **unit)
 {
+  /* the core marks its words and reasons with N_() and never
+   * translates; shell name and id, user text, are skipped above */
   if (row->kind == HL_ROW_WORD || !hl_result_ok (row->result))
     {
-      g_autofree char *text = hl_row_format (row, units, DIGITS, FALSE);
-
-      *number = g_steal_pointer (&text);
+      *number = row->kind == HL_ROW_WORD ? g_strdup (row->word != NULL && row->word[0] ? _(row->word) : "")
+                : g_strdup_printf (_("n/a (%s)"), _(row->result.reason != NULL ? row->result.reason
+                                                                              : "not computable"));
       *unit = "";
       return;
     }
