@@ -222,11 +222,9 @@ test_potfiles_cover_sources (void)
       }
 }
 
-/* Labels xgettext cannot find: src/core/hl-result-rows.c picks this one
- * in a ?: beside its sphere twin, and only the first string of an argument
- * is extracted.  Marking both with N_() there closes the gap; then this
- * list goes. */
-static const char *const known_gaps[] = { "Thin-wall hoop stress", NULL };
+/* Labels xgettext cannot find; empty since the core marks the labels it
+ * picks with ?: through N_() as well. */
+static const char *const known_gaps[] = { NULL };
 
 /* The window shows the core's result labels and the caution through _()
  * at run time, so the German catalogue the build makes must answer for
