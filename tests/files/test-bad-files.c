@@ -97,6 +97,8 @@ static const BadFile bad_files[] = {
   { "poisson-minus-1.hoop", 7, VALUE, "poisson-ratio: must lie between -1 and 0.5" },
   { "pressure-1e300.hoop", 16, VALUE, "internal-pressure: is unrealistically large" },
   { "revision-date-timezone.hoop", 18, VALUE, "date “2026-01-15+05:00” is not a YYYY-MM-DD date" },
+  /* found by fuzzing: xsd:date allows years past 9999, the format does not */
+  { "revision-date-five-digit-year.hoop", 21, VALUE, "revision: date “20286-01-02” is not a YYYY-MM-DD date" },
   { "revision-number-text.hoop", 18, VALUE, "number “one” is not a whole number" },
   { "text-not-xml.hoop", 1, SYNTAX, "Start tag expected" },
   { "thickness-1e-300.hoop", 15, VALUE, "wall-thickness: is unrealistically small" },
