@@ -13,6 +13,7 @@
 #define HL_MAX_LENGTH_M     1e5
 #define HL_MIN_LENGTH_M     1e-9
 #define HL_MAX_STRESS_PA    1e13
+#define HL_MIN_MATERIAL_PA  1e3
 /* below this t/a the wall is a film: differences of nearly equal radii
  * lose more digits than the results can afford */
 #define HL_MIN_THIN_RATIO   1e-8
@@ -73,6 +74,10 @@ hl_check_quantity (const char     *field,
     case HL_KIND_MODULUS:
       if (si > HL_MAX_STRESS_PA)
         return g_strdup ("is unrealistically large (over 10 000 GPa)");
+      /* material strengths and moduli (never zero) below a kilopascal are
+       * a slip of the unit, not a material */
+      if (!zero_allowed && si < HL_MIN_MATERIAL_PA)
+        return g_strdup ("is unrealistically small (under 1 kPa)");
       break;
     case HL_KIND_PERCENT:
     case HL_KIND_RATIO:

@@ -75,6 +75,9 @@ MUTATION (sy_negative, in->material.yield_strength.value = -250)
 MUTATION (sy_absurd, in->material.yield_strength = hl_quantity_make (1e20, "Pa"))
 MUTATION (s_nan, in->material.allowable_stress.value = NAN)
 MUTATION (s_zero, in->material.allowable_stress.value = 0)
+/* a modulus of 5e-324 Pa is a unit slip (found by fuzzing) */
+MUTATION (e_tiny, in->material.elastic_modulus = hl_quantity_make (5e-324, "Pa"))
+MUTATION (s_tiny, in->material.allowable_stress = hl_quantity_make (0.5, "Pa"))
 MUTATION (s_unit, g_strlcpy (in->material.allowable_stress.unit, "kg", sizeof in->material.allowable_stress.unit))
 MUTATION (ej_zero, in->joint_efficiency = 0)
 MUTATION (ej_negative, in->joint_efficiency = -0.5)
@@ -132,6 +135,8 @@ static const BadCase bad_cases[] = {
   { "allowable NaN", s_nan, "allowable-stress", NULL },
   { "allowable zero", s_zero, "allowable-stress", NULL },
   { "allowable in kg", s_unit, "allowable-stress", NULL },
+  { "modulus 5e-324 Pa", e_tiny, "elastic-modulus", NULL },
+  { "allowable 0.5 Pa", s_tiny, "allowable-stress", NULL },
   { "joint efficiency 0", ej_zero, "joint-efficiency", NULL },
   { "joint efficiency negative", ej_negative, "joint-efficiency", NULL },
   { "joint efficiency above 1", ej_above, "joint-efficiency", NULL },
