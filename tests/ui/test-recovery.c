@@ -337,6 +337,34 @@ test_crash_then_recover (void)
   remove_tree (dir);
 }
 
+/* "Later" keeps the copy for the next start.  A second application
+ * stands for that start: each asks only once per run. */
+static void
+test_later_keeps_copy (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("hl-recovery-XXXXXX", NULL);
+  g_autofree char *path = copy_demo (dir, "later.hoop");
+  g_autoptr(GtkApplication) next_start = gtk_application_new ("org.hoopline.RecoveryTest",
+                                                               G_APPLICATION_NON_UNIQUE);
+  g_autoptr(GPtrArray) orphans = NULL;
+  GtkWidget *question;
+  GPid pid = spawn_editing_run (path, "Receiver for later");
+
+  g_assert_true (wait_for_notes (1));
+  crash (pid);
+  hl_recovery_offer (next_start, NULL);
+  question = hl_recovery_get_question (next_start);
+  g_assert_nonnull (question);
+  gtk_dialog_response (GTK_DIALOG (question), HL_RECOVERY_RESPONSE_LATER);
+  hl_ui_iterate ();
+  g_assert_null (hl_recovery_get_question (next_start));
+  orphans = hl_autosave_find_orphans ();
+  g_assert_cmpuint (orphans->len, ==, 1);
+  g_assert_cmpstr (((HlAutosaveEntry *) orphans->pdata[0])->title, ==, "Receiver for later");
+  hl_autosave_entry_delete (orphans->pdata[0]);
+  remove_tree (dir);
+}
+
 int
 main (int    argc,
       char **argv)
@@ -362,6 +390,7 @@ main (int    argc,
 
   g_test_add_func ("/recovery/copy-follows-edits", test_copy_follows_edits);
   g_test_add_func ("/recovery/crash-then-recover", test_crash_then_recover);
+  g_test_add_func ("/recovery/later-keeps-copy", test_later_keeps_copy);
   status = g_test_run ();
   destroy_all_windows ();
   g_clear_object (&app);
