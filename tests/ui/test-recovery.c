@@ -63,6 +63,31 @@ count_copies (const char *suffix)
 
 /* waits (the main loop running) until @n notes are there; 60 s covers a
  * child starting under the sanitizers */
+/* path of the one autosave file with @suffix */
+static char *
+first_copy (const char *suffix)
+{
+  g_autofree char *dir_path = hl_autosave_dir ();
+  g_autoptr(GDir) dir = g_dir_open (dir_path, 0, NULL);
+  const char *name;
+
+  while (dir != NULL && (name = g_dir_read_name (dir)) != NULL)
+    if (g_str_has_suffix (name, suffix))
+      return g_build_filename (dir_path, name, NULL);
+  g_assert_not_reached ();
+  return NULL;
+}
+
+static GBytes *
+read_bytes (const char *path)
+{
+  char *data = NULL;
+  gsize len = 0;
+
+  g_assert_true (g_file_get_contents (path, &data, &len, NULL));
+  return g_bytes_new_take (data, len);
+}
+
 static gboolean
 wait_for_notes (guint n)
 {
@@ -176,6 +201,40 @@ test_copy_follows_edits (void)
   g_assert_cmpuint (count_copies (".info"), ==, 0);
   g_assert_cmpuint (count_copies (".hoop"), ==, 0);
 
+  remove_tree (dir);
+}
+
+/* While a value is one the loader would refuse (here corrosion eats the
+ * whole wall), no copy is written: the last loadable copy stays, so what
+ * is offered after a crash always opens. */
+static void
+test_bad_value_keeps_last_good_copy (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("hl-recovery-XXXXXX", NULL);
+  g_autofree char *path = copy_demo (dir, "receiver.hoop");
+  HlWindow *window = open_file (path);
+  HlDocument *doc = hl_window_get_document (window);
+  g_autoptr(GBytes) good = NULL;
+  g_autoptr(GBytes) later = NULL;
+  g_autofree char *copy = NULL;
+  HlShellInputs shell;
+
+  edit_title (window, "Receiver, good edit");
+  g_assert_true (wait_for_notes (1));
+  copy = first_copy (".hoop");
+  good = read_bytes (copy);
+
+  shell = *hl_document_get_shell (doc);
+  shell.corrosion_allowance = hl_quantity_make (50, "mm");
+  hl_document_edit_shell (doc, &shell, NULL);
+  hl_ui_iterate ();
+  g_assert_nonnull (hl_document_get_problem_text (doc));
+  hl_ui_run_for (2500);   /* well past the 1 s delay of the tests */
+  later = read_bytes (copy);
+  g_assert_true (g_bytes_equal (good, later));
+
+  destroy_all_windows ();
+  g_assert_cmpuint (count_copies (".hoop"), ==, 0);
   remove_tree (dir);
 }
 
@@ -391,6 +450,7 @@ main (int    argc,
   g_test_add_func ("/recovery/copy-follows-edits", test_copy_follows_edits);
   g_test_add_func ("/recovery/crash-then-recover", test_crash_then_recover);
   g_test_add_func ("/recovery/later-keeps-copy", test_later_keeps_copy);
+  g_test_add_func ("/recovery/bad-value-keeps-last-good-copy", test_bad_value_keeps_last_good_copy);
   status = g_test_run ();
   destroy_all_windows ();
   g_clear_object (&app);
