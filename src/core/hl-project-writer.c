@@ -6,6 +6,7 @@
 
 #include "hl-project-file.h"
 #include "hl-atomic-file.h"
+#include "hl-project-reader-private.h"
 
 #include <string.h>
 
@@ -152,6 +153,18 @@ hl_project_save (const HlProject *project,
 
   g_return_val_if_fail (project != NULL && path != NULL, FALSE);
 
+  /* never write a file this program would refuse to open again */
+  for (guint i = 0; i < project->revisions->len; i++)
+    {
+      const HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
+
+      if (r->number < 1 || !hl_reader_valid_date (r->date))
+        {
+          g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+                       "Cannot save: revision %u has the date “%s”, not a YYYY-MM-DD date", r->number, r->date);
+          return FALSE;
+        }
+    }
   xml = hl_project_to_xml (project);
   if (!hl_atomic_write (path, xml, -1, &local))
     {

@@ -194,6 +194,23 @@ test_through_symlink (Fixture      *f,
   assert_folder_is (f->dir, (const char *const[]) { "link.hoop", "project.hoop", NULL });
 }
 
+/* A revision with a malformed date would make a file the loader refuses:
+ * the save says so and writes nothing. */
+static void
+test_bad_revision_date_refused (Fixture      *f,
+                                gconstpointer data)
+{
+  g_autoptr(GError) error = NULL;
+  g_autoptr(GBytes) now = NULL;
+
+  hl_project_add_revision (f->changed, 3, "2026-02-30", "A. Tester", "no such day");
+  g_assert_false (hl_project_save (f->changed, f->target, &error));
+  g_assert_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE);
+  g_assert_nonnull (strstr (error->message, "2026-02-30"));
+  now = file_bytes (f->target);
+  g_assert_true (g_bytes_equal (now, f->old_bytes));
+}
+
 static void
 test_read_only_folder (Fixture      *f,
                        gconstpointer data)
@@ -322,6 +339,7 @@ main (int    argc,
 #define ADD(path, func) g_test_add (path, Fixture, NULL, setup, func, teardown)
   ADD ("/files/save/success", test_success);
   ADD ("/files/save/through-symlink", test_through_symlink);
+  ADD ("/files/save/bad-revision-date", test_bad_revision_date_refused);
   ADD ("/files/save/read-only-folder", test_read_only_folder);
   ADD ("/files/save/target-is-folder", test_target_is_folder);
   ADD ("/files/save/missing-folder", test_missing_folder);
