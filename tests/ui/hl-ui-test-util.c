@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-ui-test"
 
 #include "hl-ui-test-util.h"
+#include "hl-window.h"
 
 void
 hl_ui_iterate (void)
@@ -38,6 +39,19 @@ hl_ui_demo_path (void)
 
   g_assert_nonnull (src);
   return g_build_filename (src, "data", "examples", "demo.hoop", NULL);
+}
+
+HlWindow *
+hl_ui_open_window (HlApplication *app,
+                   const char    *path)
+{
+  g_autoptr(GFile) file = g_file_new_for_path (path);
+  HlWindow *window = hl_window_new (GTK_APPLICATION (app));
+
+  g_assert_true (hl_window_load_file (window, file));
+  gtk_window_present (GTK_WINDOW (window));
+  hl_ui_iterate ();
+  return window;
 }
 
 HlApplication *

@@ -6,6 +6,7 @@
 #pragma once
 
 #include "hl-application.h"
+#include "hl-window.h"
 
 G_BEGIN_DECLS
 
@@ -15,6 +16,9 @@ void           hl_ui_iterate         (void);
 void           hl_ui_run_for         (guint ms);
 /* data/examples/demo.hoop in the source tree (HL_SOURCE_DIR) */
 char          *hl_ui_demo_path       (void);
+/* a new window of @app showing the project at @path, presented */
+HlWindow      *hl_ui_open_window     (HlApplication *app,
+                                      const char    *path);
 /* a registered application (its startup has run), not unique */
 HlApplication *hl_ui_application_new (void);
 

@@ -116,13 +116,7 @@ edit_title (HlWindow   *window,
 static HlWindow *
 open_file (const char *path)
 {
-  g_autoptr(GFile) file = g_file_new_for_path (path);
-  HlWindow *window = hl_window_new (GTK_APPLICATION (app));
-
-  g_assert_true (hl_window_load_file (window, file));
-  gtk_window_present (GTK_WINDOW (window));
-  hl_ui_iterate ();
-  return window;
+  return hl_ui_open_window (app, path);
 }
 
 static void

@@ -27,13 +27,8 @@ static HlWindow *
 open_demo (void)
 {
   g_autofree char *path = hl_ui_demo_path ();
-  g_autoptr(GFile) file = g_file_new_for_path (path);
-  HlWindow *window = hl_window_new (GTK_APPLICATION (app));
 
-  g_assert_true (hl_window_load_file (window, file));
-  gtk_window_present (GTK_WINDOW (window));
-  hl_ui_iterate ();
-  return window;
+  return hl_ui_open_window (app, path);
 }
 
 /* closes without the unsaved-changes question */
