@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-project-reader"
 
 #include "hl-project-reader-private.h"
+#include "hl-limits.h"
 
 #include <string.h>
 
@@ -66,7 +67,8 @@ explain_value (HlReader    *rd,
   g_autofree char *unit = hl_reader_prop (n, "unit");
   long line = xmlGetLineNo (n);
   glong chars = g_utf8_strlen (text, -1);
-  glong limit = g_strv_contains ((const char *const[]) { "description", "revision", NULL }, name) ? 100000 : 1000;
+  glong limit = g_strv_contains ((const char *const[]) { "description", "revision", NULL }, name)
+                  ? HL_LIMIT_LONG_TEXT_CHARS : HL_LIMIT_SHORT_TEXT_CHARS;
 
   for (xmlNodePtr c = n->children; c != NULL; c = c->next)
     if (c->type == XML_ELEMENT_NODE)
@@ -152,7 +154,7 @@ explain_attributes (HlReader    *rd,
       g_autofree char *date = hl_reader_prop (n, "date");
       guint64 v;
 
-      if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, 1000000, &v, NULL))
+      if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, HL_LIMIT_REVISION_NUMBER, &v, NULL))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to 1000000",
               number != NULL ? number : "");
       else if (!hl_reader_valid_date (date))

@@ -12,6 +12,7 @@
 
 #include "hl-project-file.h"
 #include "hl-project-reader-private.h"
+#include "hl-limits.h"
 #include "hl-shell-check.h"
 #include "hl-core-resources.h"
 
@@ -521,7 +522,7 @@ read_revision (HlReader    *rd,
   g_autofree char *text = hl_reader_text (n);
   guint64 value = 0;
 
-  if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, 1000000, &value, NULL))
+  if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, HL_LIMIT_REVISION_NUMBER, &value, NULL))
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
       return FALSE;
