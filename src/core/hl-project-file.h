@@ -41,8 +41,18 @@ HlProject *hl_project_load_bytes  (const char  *data,
 /* The file text, numbers in the C locale whatever the user's locale. */
 char      *hl_project_to_xml      (const HlProject *project);
 
+/* The file text, checked with the reader's own rules before anyone
+ * writes it: the bytes are parsed and validated as a file would be, and
+ * the project they give must equal @project.  A project that would not
+ * reopen (or would reopen changed) gives NULL and a message that names
+ * the field to fix ("Cannot save: title: is too long …"). */
+char      *hl_project_to_checked_xml (const HlProject *project,
+                                      gsize           *length,
+                                      GError         **error);
+
 /* Atomic: writes a temporary file beside @path and renames it over, so a
- * failed save leaves the old file as it was. */
+ * failed save leaves the old file as it was.  Only checked bytes
+ * (hl_project_to_checked_xml) are written. */
 gboolean   hl_project_save        (const HlProject *project,
                                    const char      *path,
                                    GError         **error);

@@ -143,17 +143,35 @@ hl_project_to_xml (const HlProject *project)
   return g_string_free (out, FALSE);
 }
 
-gboolean
-hl_project_save (const HlProject *project,
-                 const char      *path,
-                 GError         **error)
+/* The reader's message reads "NAME:LINE: element: reason"; the line is
+ * of bytes the user never sees, so the message keeps element and reason. */
+static char *
+strip_location (const char *message)
+{
+  const char *p = message;
+
+  for (int colons = 0; colons < 2 && (p = strchr (p, ':')) != NULL; colons++)
+    p++;
+  if (p == NULL)
+    return g_strdup (message);
+  while (*p == ' ')
+    p++;
+  return g_strdup (p);
+}
+
+char *
+hl_project_to_checked_xml (const HlProject *project,
+                           gsize           *length,
+                           GError         **error)
 {
   g_autofree char *xml = NULL;
+  g_autoptr(HlProject) back = NULL;
   g_autoptr(GError) local = NULL;
+  gsize len;
 
-  g_return_val_if_fail (project != NULL && path != NULL, FALSE);
+  g_return_val_if_fail (project != NULL, NULL);
 
-  /* never write a file this program would refuse to open again */
+  /* a clearer word than the reader's for what the user can fix */
   for (guint i = 0; i < project->revisions->len; i++)
     {
       const HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
@@ -162,11 +180,53 @@ hl_project_save (const HlProject *project,
         {
           g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
                        "Cannot save: revision %u has the date “%s”, not a YYYY-MM-DD date", r->number, r->date);
-          return FALSE;
+          return NULL;
         }
     }
   xml = hl_project_to_xml (project);
-  if (!hl_atomic_write (path, xml, -1, &local))
+  len = strlen (xml);
+  back = hl_project_load_bytes (xml, len, "save", NULL, &local);
+  if (back == NULL)
+    {
+      g_autofree char *why = strip_location (local->message);
+
+      if (g_error_matches (local, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_TOO_LARGE))
+        g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_TOO_LARGE,
+                     "Cannot save: the project would take %.1f MiB, more than the %d MiB a project file may hold "
+                     "(remove shells or revisions, or split the project)",
+                     len / (1024.0 * 1024.0), HL_PROJECT_FILE_MAX_BYTES / (1024 * 1024));
+      else
+        g_set_error (error, HL_PROJECT_FILE_ERROR, local->code, "Cannot save: %s", why);
+      return NULL;
+    }
+  if (!hl_project_equal (project, back))
+    {
+      g_set_error_literal (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+                           "Cannot save: the file would not read back as the same project "
+                           "(a text holds characters a project file cannot keep)");
+      return NULL;
+    }
+  if (length != NULL)
+    *length = len;
+  return g_steal_pointer (&xml);
+}
+
+gboolean
+hl_project_save (const HlProject *project,
+                 const char      *path,
+                 GError         **error)
+{
+  g_autofree char *xml = NULL;
+  g_autoptr(GError) local = NULL;
+  gsize length = 0;
+
+  g_return_val_if_fail (project != NULL && path != NULL, FALSE);
+
+  /* never write a file this program would refuse to open again */
+  xml = hl_project_to_checked_xml (project, &length, error);
+  if (xml == NULL)
+    return FALSE;
+  if (!hl_atomic_write (path, xml, (gssize) length, &local))
     {
       g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_IO, "Cannot save: %s", local->message);
       return FALSE;
