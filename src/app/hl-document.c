@@ -7,19 +7,13 @@
 #include "hl-config.h"
 #include "hl-document.h"
 #include "hl-fields.h"
+#include "hl-history.h"
+#include "hl-limits.h"
 #include "hl-project-file.h"
 #include "hl-shell-check.h"
 
 #include <glib/gi18n.h>
 #include <string.h>
-
-/* Undo keeps whole project copies: a project is small (a few shells), and
- * a snapshot can never get out of step with the edit that made it. */
-typedef struct
-{
-  HlProject *project;
-  guint      selected;
-} Snapshot;
 
 struct _HlDocument
 {
@@ -30,9 +24,7 @@ struct _HlDocument
   GFile      *file;
   guint       selected;
 
-  GPtrArray  *undo;           /* Snapshot * */
-  GPtrArray  *redo;
-  char       *merge_key;
+  HlHistory  *history;        /* undo and redo, by what each edit changed */
 
   GHashTable *input_errors;   /* field -> message */
   HlSolution *solution;
@@ -44,25 +36,6 @@ G_DEFINE_FINAL_TYPE (HlDocument, hl_document, G_TYPE_OBJECT)
 
 enum { CHANGED, N_SIGNALS };
 static guint signals[N_SIGNALS];
-
-static void
-snapshot_free (gpointer data)
-{
-  Snapshot *s = data;
-
-  hl_project_free (s->project);
-  g_free (s);
-}
-
-static Snapshot *
-snapshot_take (HlDocument *self)
-{
-  Snapshot *s = g_new0 (Snapshot, 1);
-
-  s->project = hl_project_copy (self->project);
-  s->selected = self->selected;
-  return s;
-}
 
 static void
 append_problem_line (GString    *text,
@@ -134,11 +107,14 @@ static void
 begin_edit (HlDocument *self,
             const char *merge_key)
 {
-  if (merge_key == NULL || g_strcmp0 (merge_key, self->merge_key) != 0 || self->undo->len == 0)
-    g_ptr_array_add (self->undo, snapshot_take (self));
-  g_ptr_array_set_size (self->redo, 0);
-  g_free (self->merge_key);
-  self->merge_key = g_strdup (merge_key);
+  hl_history_begin (self->history, merge_key, self->selected);
+}
+
+static void
+end_edit (HlDocument *self)
+{
+  hl_history_end (self->history, self->selected);
+  emit_changed (self);
 }
 
 static void
@@ -149,9 +125,7 @@ hl_document_finalize (GObject *object)
   g_clear_pointer (&self->project, hl_project_free);
   g_clear_pointer (&self->saved, hl_project_free);
   g_clear_object (&self->file);
-  g_clear_pointer (&self->undo, g_ptr_array_unref);
-  g_clear_pointer (&self->redo, g_ptr_array_unref);
-  g_clear_pointer (&self->merge_key, g_free);
+  g_clear_pointer (&self->history, hl_history_free);
   g_clear_pointer (&self->input_errors, g_hash_table_unref);
   g_clear_pointer (&self->solution, hl_solution_free);
   g_clear_pointer (&self->problems, g_ptr_array_unref);
@@ -174,8 +148,7 @@ hl_document_class_init (HlDocumentClass *klass)
 static void
 hl_document_init (HlDocument *self)
 {
-  self->undo = g_ptr_array_new_with_free_func (snapshot_free);
-  self->redo = g_ptr_array_new_with_free_func (snapshot_free);
+  self->history = hl_history_new ();
   self->input_errors = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
 }
 
@@ -245,9 +218,7 @@ hl_document_load (HlDocument  *self,
   self->saved = hl_project_copy (project);
   g_set_object (&self->file, file);
   self->selected = 0;
-  g_ptr_array_set_size (self->undo, 0);
-  g_ptr_array_set_size (self->redo, 0);
-  g_clear_pointer (&self->merge_key, g_free);
+  hl_history_clear (self->history);
   g_hash_table_remove_all (self->input_errors);
   emit_changed (self);
   return TRUE;
@@ -312,7 +283,7 @@ hl_document_save (HlDocument *self,
   g_clear_pointer (&self->saved, hl_project_free);
   self->saved = hl_project_copy (self->project);
   g_set_object (&self->file, file);
-  g_clear_pointer (&self->merge_key, g_free);
+  hl_history_break_merge (self->history);
   emit_changed (self);
   return TRUE;
 }
@@ -441,18 +412,18 @@ hl_document_edit_shell (HlDocument          *self,
                         const HlShellInputs *shell,
                         const char          *merge_key)
 {
-  HlShellInputs *slot;
+  const HlShellInputs *slot;
 
   g_return_if_fail (HL_IS_DOCUMENT (self));
   g_return_if_fail (shell != NULL);
 
-  slot = (HlShellInputs *) hl_document_get_shell (self);
+  slot = hl_document_get_shell (self);
   g_return_if_fail (slot != NULL);
   if (hl_shell_inputs_equal (slot, shell))
     return;
   begin_edit (self, merge_key);
-  *slot = *shell;
-  emit_changed (self);
+  hl_history_set_shell (self->history, self->project, self->selected, shell);
+  end_edit (self);
 }
 
 static guint
@@ -478,14 +449,14 @@ hl_document_add_shell (HlDocument          *self,
   id = hl_project_unique_shell_id (self->project, "shell");
   /* TRANSLATORS: name of a new shell; %u is its number */
   name = g_strdup_printf (_("Shell %u"), number_in_id (id));
-  g_strlcpy (shell.id, id, sizeof shell.id);
-  g_strlcpy (shell.name, name, sizeof shell.name);
+  hl_utf8_copy (shell.id, id, sizeof shell.id);
+  hl_utf8_copy (shell.name, name, sizeof shell.name);
 
   begin_edit (self, NULL);
-  hl_project_add_shell (self->project, &shell);
+  hl_history_insert_shell (self->history, self->project, hl_project_n_shells (self->project), &shell);
   self->selected = hl_project_n_shells (self->project) - 1;
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  end_edit (self);
 }
 
 void
@@ -505,14 +476,15 @@ hl_document_duplicate_shell (HlDocument *self)
   id = hl_project_unique_shell_id (self->project, current->id);
   /* TRANSLATORS: name of a duplicated shell; %s is the original's name */
   name = g_strdup_printf (_("%s (copy)"), current->name);
-  g_strlcpy (shell.id, id, sizeof shell.id);
-  g_strlcpy (shell.name, name, sizeof shell.name);
+  /* a name near the limit loses its end, never half a character */
+  hl_utf8_copy (shell.id, id, sizeof shell.id);
+  hl_utf8_copy (shell.name, name, sizeof shell.name);
 
   begin_edit (self, NULL);
-  hl_project_insert_shell (self->project, self->selected + 1, &shell);
+  hl_history_insert_shell (self->history, self->project, self->selected + 1, &shell);
   self->selected++;
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  end_edit (self);
 }
 
 void
@@ -523,11 +495,11 @@ hl_document_remove_shell (HlDocument *self)
   if (self->selected >= hl_project_n_shells (self->project))
     return;
   begin_edit (self, NULL);
-  hl_project_remove_shell (self->project, self->selected);
+  hl_history_remove_shell (self->history, self->project, self->selected);
   if (self->selected > 0 && self->selected >= hl_project_n_shells (self->project))
     self->selected--;
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  end_edit (self);
 }
 
 void
@@ -546,10 +518,10 @@ hl_document_move_shell (HlDocument *self,
   to = delta < 0 ? self->selected - 1 : self->selected + 1;
   begin_edit (self, NULL);
   moved = *hl_project_shell (self->project, self->selected);
-  hl_project_remove_shell (self->project, self->selected);
-  hl_project_insert_shell (self->project, to, &moved);
+  hl_history_remove_shell (self->history, self->project, self->selected);
+  hl_history_insert_shell (self->history, self->project, to, &moved);
   self->selected = to;
-  emit_changed (self);
+  end_edit (self);
 }
 
 void
@@ -569,13 +541,16 @@ hl_document_put_material (HlDocument       *self,
       && g_strcmp0 (shell->material_ref, material->id) == 0)
     return;
   begin_edit (self, merge_key);
-  hl_project_put_material (self->project, material);
+  hl_history_put_material (self->history, self->project, material);
   if (shell != NULL)
     {
-      g_strlcpy (shell->material_ref, material->id, sizeof shell->material_ref);
-      shell->material = *material;
+      HlShellInputs changed = *shell;
+
+      hl_utf8_copy (changed.material_ref, material->id, sizeof changed.material_ref);
+      changed.material = *material;
+      hl_history_set_shell (self->history, self->project, self->selected, &changed);
     }
-  emit_changed (self);
+  end_edit (self);
 }
 
 void
@@ -594,60 +569,54 @@ hl_document_set_info (HlDocument  *self,
       && g_strcmp0 (p->description, description) == 0 && p->display_units == units)
     return;
   begin_edit (self, "project-info");
-  hl_project_set_title (p, title);
-  hl_project_set_engineer (p, engineer);
-  hl_project_set_description (p, description);
-  p->display_units = units;
-  emit_changed (self);
+  hl_history_set_info (self->history, p, title, engineer, description, units);
+  end_edit (self);
 }
 
-void
+gboolean
 hl_document_add_revision (HlDocument *self,
                           const char *date,
                           const char *author,
                           const char *text)
 {
   const HlRevision *latest;
+  guint number;
 
-  g_return_if_fail (HL_IS_DOCUMENT (self));
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
 
   latest = hl_project_latest_revision (self->project);
+  number = latest != NULL ? latest->number + 1 : 1;
+  /* the reader refuses what lies past the shared limits: such a note
+   * would make a file that does not open again */
+  if (number > HL_LIMIT_REVISION_NUMBER
+      || g_utf8_strlen (author != NULL ? author : "", -1) > HL_LIMIT_SHORT_TEXT_CHARS
+      || g_utf8_strlen (text != NULL ? text : "", -1) > HL_LIMIT_LONG_TEXT_CHARS)
+    return FALSE;
   begin_edit (self, NULL);
-  hl_project_add_revision (self->project, latest != NULL ? latest->number + 1 : 1,
-                           date, author, text);
-  emit_changed (self);
+  hl_history_add_revision (self->history, self->project, number, date, author, text);
+  end_edit (self);
+  return TRUE;
 }
 
 gboolean
 hl_document_can_undo (HlDocument *self)
 {
   g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
-  return self->undo->len > 0;
+  return hl_history_can_undo (self->history);
 }
 
 gboolean
 hl_document_can_redo (HlDocument *self)
 {
   g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
-  return self->redo->len > 0;
+  return hl_history_can_redo (self->history);
 }
 
 static void
-restore (HlDocument *self,
-         GPtrArray  *from,
-         GPtrArray  *to)
+after_restore (HlDocument *self,
+               guint       selected)
 {
-  Snapshot *s;
-
-  if (from->len == 0)
-    return;
-  g_ptr_array_add (to, snapshot_take (self));
-  s = g_ptr_array_steal_index (from, from->len - 1);
-  hl_project_free (self->project);
-  self->project = g_steal_pointer (&s->project);
-  self->selected = s->selected;
-  g_free (s);
-  g_clear_pointer (&self->merge_key, g_free);
+  self->selected = selected;
   g_hash_table_remove_all (self->input_errors);
   emit_changed (self);
 }
@@ -655,13 +624,40 @@ restore (HlDocument *self,
 void
 hl_document_undo (HlDocument *self)
 {
+  guint selected;
+
   g_return_if_fail (HL_IS_DOCUMENT (self));
-  restore (self, self->undo, self->redo);
+  if (hl_history_undo (self->history, self->project, &selected))
+    after_restore (self, selected);
 }
 
 void
 hl_document_redo (HlDocument *self)
 {
+  guint selected;
+
   g_return_if_fail (HL_IS_DOCUMENT (self));
-  restore (self, self->redo, self->undo);
+  if (hl_history_redo (self->history, self->project, &selected))
+    after_restore (self, selected);
+}
+
+gsize
+hl_document_get_history_bytes (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), 0);
+  return hl_history_bytes (self->history);
+}
+
+guint
+hl_document_count_material_users (HlDocument *self,
+                                  const char *material_id)
+{
+  guint n = 0;
+
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), 0);
+
+  for (guint i = 0; i < hl_project_n_shells (self->project); i++)
+    if (g_strcmp0 (hl_project_shell (self->project, i)->material_ref, material_id) == 0)
+      n++;
+  return n;
 }

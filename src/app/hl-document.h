@@ -85,7 +85,9 @@ void                 hl_document_set_info        (HlDocument  *self,
                                                   const char  *engineer,
                                                   const char  *description,
                                                   HlUnitSystem units);
-void                 hl_document_add_revision    (HlDocument *self,
+/* The next number after the latest; FALSE (and nothing added) when it
+ * or a text would pass the limits the project file reader keeps. */
+gboolean             hl_document_add_revision    (HlDocument *self,
                                                   const char *date,
                                                   const char *author,
                                                   const char *text);
@@ -94,5 +96,11 @@ gboolean             hl_document_can_undo        (HlDocument *self);
 gboolean             hl_document_can_redo        (HlDocument *self);
 void                 hl_document_undo            (HlDocument *self);
 void                 hl_document_redo            (HlDocument *self);
+/* bytes of memory the undo and redo history holds */
+gsize                hl_document_get_history_bytes (HlDocument *self);
+
+/* how many shells refer to the project material @material_id */
+guint                hl_document_count_material_users (HlDocument *self,
+                                                       const char *material_id);
 
 G_END_DECLS
