@@ -476,9 +476,11 @@ hl_document_duplicate_shell (HlDocument *self)
   id = hl_project_unique_shell_id (self->project, current->id);
   /* TRANSLATORS: name of a duplicated shell; %s is the original's name */
   name = g_strdup_printf (_("%s (copy)"), current->name);
-  /* a name near the limit loses its end, never half a character */
+  /* a name near the limit loses its end, never half a character, and
+   * no space is left at the end (the file would not keep it) */
   hl_utf8_copy (shell.id, id, sizeof shell.id);
   hl_utf8_copy (shell.name, name, sizeof shell.name);
+  g_strchomp (shell.name);
 
   begin_edit (self, NULL);
   hl_history_insert_shell (self->history, self->project, self->selected + 1, &shell);

@@ -6,6 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-fields.h"
+#include "hl-limits.h"
 #include "hl-units.h"
 
 #include <glib/gi18n.h>
@@ -87,4 +88,134 @@ hl_format_field_number (double value)
   if (hl_locale_decimal_comma ())
     g_strdelimit (text, ".", ',');
   return text;
+}
+
+typedef struct
+{
+  glong    max_chars;
+  gsize    max_bytes;
+  gboolean one_line;
+} Limit;
+
+/* @text (@length bytes) made valid, its control characters spaces for a
+ * one-line field */
+static GString *
+clean_text (const char *text,
+            gsize       length,
+            gboolean    one_line)
+{
+  g_autofree char *valid = g_utf8_make_valid (text, (gssize) length);
+  GString *out = g_string_sized_new (strlen (valid));
+
+  for (const char *p = valid; *p != '\0'; p = g_utf8_next_char (p))
+    {
+      gunichar c = g_utf8_get_char (p);
+
+      if (one_line && (g_unichar_iscntrl (c) || c == 0x2028 || c == 0x2029))
+        g_string_append_c (out, ' ');
+      else
+        g_string_append_len (out, p, g_utf8_next_char (p) - p);
+    }
+  return out;
+}
+
+static void
+on_limited_insert_text_cb (GtkEditable *editable,
+                           const char  *text,
+                           int          length,
+                           int         *position,
+                           Limit       *limit)
+{
+  const char *current = gtk_editable_get_text (editable);
+  gsize bytes = length < 0 ? strlen (text) : (gsize) length;
+  g_autoptr(GString) clean = clean_text (text, bytes, limit->one_line);
+  gsize fit = clean->len;
+
+  if (limit->max_bytes > 0)
+    {
+      gsize used = strlen (current);
+      gsize room = used < limit->max_bytes ? limit->max_bytes - used : 0;
+
+      fit = hl_utf8_fit_bytes (clean->str, room);
+    }
+  if (limit->max_chars > 0)
+    {
+      glong used = g_utf8_strlen (current, -1);
+      glong room = MAX (0, limit->max_chars - used);
+
+      if (g_utf8_strlen (clean->str, (gssize) fit) > room)
+        fit = (gsize) (g_utf8_offset_to_pointer (clean->str, room) - clean->str);
+    }
+  if (fit == bytes && memcmp (clean->str, text, bytes) == 0)
+    return;
+
+  /* insert what fits instead of what came */
+  g_signal_stop_emission_by_name (editable, "insert-text");
+  if (fit > 0)
+    {
+      g_signal_handlers_block_by_func (editable, on_limited_insert_text_cb, limit);
+      gtk_editable_insert_text (editable, clean->str, (int) fit, position);
+      g_signal_handlers_unblock_by_func (editable, on_limited_insert_text_cb, limit);
+    }
+  if (fit < clean->len)
+    gtk_widget_error_bell (GTK_WIDGET (editable));
+}
+
+void
+hl_fields_limit_editable (GtkEditable *editable,
+                          glong        max_chars,
+                          gsize        max_bytes,
+                          gboolean     one_line)
+{
+  GtkEditable *target;
+  Limit *limit;
+
+  g_return_if_fail (GTK_IS_EDITABLE (editable));
+
+  /* an entry hands its text to the GtkText inside; that one inserts */
+  target = gtk_editable_get_delegate (editable);
+  if (target == NULL)
+    target = editable;
+  limit = g_new0 (Limit, 1);
+  limit->max_chars = max_chars;
+  limit->max_bytes = max_bytes;
+  limit->one_line = one_line;
+  g_object_set_data_full (G_OBJECT (target), "hl-limit", limit, g_free);
+  g_signal_connect (target, "insert-text", G_CALLBACK (on_limited_insert_text_cb), limit);
+}
+
+static void
+on_limited_buffer_insert_text_cb (GtkTextBuffer *buffer,
+                                  GtkTextIter   *location,
+                                  const char    *text,
+                                  int            length,
+                                  gpointer       data)
+{
+  glong max_chars = GPOINTER_TO_SIZE (data);
+  glong used = gtk_text_buffer_get_char_count (buffer);
+  glong room = MAX (0, max_chars - used);
+  const char *end;
+
+  if (g_utf8_strlen (text, length) <= room)
+    return;
+  end = g_utf8_offset_to_pointer (text, room);
+  g_signal_stop_emission_by_name (buffer, "insert-text");
+  if (end > text)
+    {
+      g_signal_handlers_block_by_func (buffer, on_limited_buffer_insert_text_cb, data);
+      /* revalidates @location as the default handler would */
+      gtk_text_buffer_insert (buffer, location, text, (int) (end - text));
+      g_signal_handlers_unblock_by_func (buffer, on_limited_buffer_insert_text_cb, data);
+    }
+}
+
+void
+hl_fields_limit_text_buffer (GtkTextBuffer *buffer,
+                             glong          max_chars)
+{
+  g_return_if_fail (GTK_IS_TEXT_BUFFER (buffer));
+  g_return_if_fail (max_chars > 0);
+
+  g_signal_connect (buffer, "insert-text", G_CALLBACK (on_limited_buffer_insert_text_cb),
+                    GSIZE_TO_POINTER ((gsize) max_chars));
 }

@@ -8,7 +8,7 @@
  */
 #pragma once
 
-#include <glib.h>
+#include <gtk/gtk.h>
 
 G_BEGIN_DECLS
 
@@ -20,5 +20,19 @@ gboolean    hl_locale_decimal_comma (void);
 
 /* @value as the field shows it: exact, in the user's locale. */
 char       *hl_format_field_number  (double value);
+
+/* Keeps what the user types or pastes into @editable (an entry) within
+ * @max_chars characters and @max_bytes bytes of UTF-8 (0: no such
+ * limit), so a text the file could not hold cannot be entered: what
+ * passes the limit is cut at the last whole character that fits.  With
+ * @one_line, control characters (a pasted line break, a tab) become
+ * spaces. */
+void        hl_fields_limit_editable    (GtkEditable   *editable,
+                                         glong          max_chars,
+                                         gsize          max_bytes,
+                                         gboolean       one_line);
+/* The same for a multi-line text, in characters. */
+void        hl_fields_limit_text_buffer (GtkTextBuffer *buffer,
+                                         glong          max_chars);
 
 G_END_DECLS

@@ -6,6 +6,8 @@
 
 #include "hl-config.h"
 #include "hl-properties-dialog.h"
+#include "hl-fields.h"
+#include "hl-limits.h"
 
 #include <glib/gi18n.h>
 #include <string.h>
@@ -31,12 +33,23 @@ struct _HlPropertiesDialog
 
 G_DEFINE_FINAL_TYPE (HlPropertiesDialog, hl_properties_dialog, GTK_TYPE_WINDOW)
 
+/* The file keeps no space at either end of a text, so neither does the
+ * project; a field being typed keeps its own (the space before the next
+ * word) as long as the rest agrees. */
+static char *
+stripped (const char *text)
+{
+  return g_strstrip (g_strdup (text != NULL ? text : ""));
+}
+
 static void
 set_entry (HlPropertiesDialog *self,
            GtkEntry           *entry,
            const char         *text)
 {
-  if (g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (entry)), text != NULL ? text : "") == 0)
+  g_autofree char *shown = stripped (gtk_editable_get_text (GTK_EDITABLE (entry)));
+
+  if (g_strcmp0 (shown, text != NULL ? text : "") == 0)
     return;
   gtk_editable_set_text (GTK_EDITABLE (entry), text != NULL ? text : "");
 }
@@ -59,6 +72,8 @@ reload_revisions (HlPropertiesDialog *self)
       GtkWidget *text = gtk_label_new (r->text);
 
       gtk_label_set_xalign (GTK_LABEL (title), 0);
+      /* a long author name must not widen the dialog */
+      gtk_label_set_ellipsize (GTK_LABEL (title), PANGO_ELLIPSIZE_END);
       gtk_widget_add_css_class (title, "heading");
       gtk_label_set_xalign (GTK_LABEL (text), 0);
       gtk_label_set_wrap (GTK_LABEL (text), TRUE);
@@ -90,7 +105,7 @@ reload (HlPropertiesDialog *self)
   set_entry (self, self->engineer_entry, project->engineer);
   gtk_drop_down_set_selected (self->units_dropdown, project->display_units);
   gtk_text_buffer_get_bounds (buffer, &start, &end);
-  description = gtk_text_buffer_get_text (buffer, &start, &end, FALSE);
+  description = g_strstrip (gtk_text_buffer_get_text (buffer, &start, &end, FALSE));
   if (g_strcmp0 (description, project->description != NULL ? project->description : "") != 0)
     gtk_text_buffer_set_text (buffer, project->description != NULL ? project->description : "", -1);
   reload_revisions (self);
@@ -109,16 +124,17 @@ apply (HlPropertiesDialog *self)
 {
   GtkTextBuffer *buffer = gtk_text_view_get_buffer (self->description_view);
   g_autofree char *description = NULL;
+  g_autofree char *title = NULL;
+  g_autofree char *engineer = NULL;
   GtkTextIter start, end;
 
   if (self->updating > 0)
     return;
   gtk_text_buffer_get_bounds (buffer, &start, &end);
-  description = gtk_text_buffer_get_text (buffer, &start, &end, FALSE);
-  hl_document_set_info (self->document,
-                        gtk_editable_get_text (GTK_EDITABLE (self->title_entry)),
-                        gtk_editable_get_text (GTK_EDITABLE (self->engineer_entry)),
-                        description,
+  description = g_strstrip (gtk_text_buffer_get_text (buffer, &start, &end, FALSE));
+  title = stripped (gtk_editable_get_text (GTK_EDITABLE (self->title_entry)));
+  engineer = stripped (gtk_editable_get_text (GTK_EDITABLE (self->engineer_entry)));
+  hl_document_set_info (self->document, title, engineer, description,
                         (HlUnitSystem) gtk_drop_down_get_selected (self->units_dropdown));
 }
 
@@ -167,10 +183,21 @@ valid_date (const char *text)
 static void
 on_add_revision_button_clicked_cb (HlPropertiesDialog *self)
 {
-  const char *date = gtk_editable_get_text (GTK_EDITABLE (self->revision_date_entry));
-  const char *author = gtk_editable_get_text (GTK_EDITABLE (self->revision_author_entry));
-  const char *text = gtk_editable_get_text (GTK_EDITABLE (self->revision_text_entry));
+  g_autofree char *date = stripped (gtk_editable_get_text (GTK_EDITABLE (self->revision_date_entry)));
+  g_autofree char *author = stripped (gtk_editable_get_text (GTK_EDITABLE (self->revision_author_entry)));
+  g_autofree char *text = stripped (gtk_editable_get_text (GTK_EDITABLE (self->revision_text_entry)));
+  const HlRevision *latest = hl_project_latest_revision (hl_document_get_project (self->document));
 
+  if (latest != NULL && latest->number >= HL_LIMIT_REVISION_NUMBER)
+    {
+      g_autofree char *message =
+        /* TRANSLATORS: %d is the highest revision number a project file takes */
+        g_strdup_printf (_("Revision numbers end at %d: no further revision can be added."),
+                         HL_LIMIT_REVISION_NUMBER);
+
+      gtk_label_set_text (self->revision_error_label, message);
+      return;
+    }
   if (!valid_date (date))
     {
       gtk_label_set_text (self->revision_error_label, _("The date must read YYYY-MM-DD."));
@@ -184,8 +211,9 @@ on_add_revision_button_clicked_cb (HlPropertiesDialog *self)
       return;
     }
   gtk_label_set_text (self->revision_error_label, "");
-  hl_document_add_revision (self->document, date, author, text);
-  gtk_editable_set_text (GTK_EDITABLE (self->revision_text_entry), "");
+  /* the fields keep to the limits, so the document takes the note */
+  if (hl_document_add_revision (self->document, date, author, text))
+    gtk_editable_set_text (GTK_EDITABLE (self->revision_text_entry), "");
 }
 
 static void
@@ -196,6 +224,9 @@ hl_properties_dialog_dispose (GObject *object)
   if (self->document != NULL)
     g_signal_handlers_disconnect_by_data (self->document, self);
   g_clear_object (&self->document);
+  /* the window lets its child go first, or the template would unparent
+   * it behind the window's back */
+  gtk_window_set_child (GTK_WINDOW (self), NULL);
   gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_PROPERTIES_DIALOG);
   G_OBJECT_CLASS (hl_properties_dialog_parent_class)->dispose (object);
 }
@@ -230,6 +261,13 @@ static void
 hl_properties_dialog_init (HlPropertiesDialog *self)
 {
   gtk_widget_init_template (GTK_WIDGET (self));
+  /* the limits the project file reader keeps (hl-limits.h), enforced
+   * while typing so a save never meets a text it cannot write */
+  hl_fields_limit_editable (GTK_EDITABLE (self->title_entry), HL_LIMIT_SHORT_TEXT_CHARS, 0, TRUE);
+  hl_fields_limit_editable (GTK_EDITABLE (self->engineer_entry), HL_LIMIT_SHORT_TEXT_CHARS, 0, TRUE);
+  hl_fields_limit_editable (GTK_EDITABLE (self->revision_author_entry), HL_LIMIT_SHORT_TEXT_CHARS, 0, TRUE);
+  hl_fields_limit_editable (GTK_EDITABLE (self->revision_text_entry), HL_LIMIT_LONG_TEXT_CHARS, 0, TRUE);
+  hl_fields_limit_text_buffer (gtk_text_view_get_buffer (self->description_view), HL_LIMIT_LONG_TEXT_CHARS);
   g_signal_connect (gtk_text_view_get_buffer (self->description_view), "changed",
                     G_CALLBACK (on_description_changed_cb), self);
 }
@@ -256,4 +294,46 @@ hl_properties_dialog_new (GtkWindow  *parent,
       gtk_widget_grab_focus (GTK_WIDGET (self->revision_text_entry));
     }
   return self;
+}
+
+GtkEditable *
+hl_properties_dialog_get_title_entry (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return GTK_EDITABLE (self->title_entry);
+}
+
+GtkEditable *
+hl_properties_dialog_get_engineer_entry (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return GTK_EDITABLE (self->engineer_entry);
+}
+
+GtkEditable *
+hl_properties_dialog_get_revision_author_entry (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return GTK_EDITABLE (self->revision_author_entry);
+}
+
+GtkEditable *
+hl_properties_dialog_get_revision_text_entry (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return GTK_EDITABLE (self->revision_text_entry);
+}
+
+GtkTextView *
+hl_properties_dialog_get_description_view (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return self->description_view;
+}
+
+const char *
+hl_properties_dialog_get_revision_error (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return gtk_label_get_text (self->revision_error_label);
 }

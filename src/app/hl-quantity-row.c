@@ -7,6 +7,7 @@
 #include "hl-config.h"
 #include "hl-quantity-row.h"
 #include "hl-fields.h"
+#include "hl-limits.h"
 
 #include <glib/gi18n.h>
 #include <stdio.h>
@@ -38,6 +39,15 @@ enum { EDITED, N_SIGNALS };
 static guint signals[N_SIGNALS];
 
 static const char *const kind_names[] = { "length", "stress", "percent", "ratio", "modulus" };
+
+/* A value with its unit is a few dozen characters; anything much longer
+ * is a paste gone wrong.  The field holds somewhat more than it reads, so
+ * that a long paste is refused in words rather than cut into a number
+ * that was never typed. */
+#define VALUE_TEXT_CHARS  64
+#define FIELD_TEXT_CHARS  256
+/* what a message under a field may hold */
+#define MESSAGE_CHARS     160
 
 static const char *
 current_unit (HlQuantityRow *self)
@@ -255,6 +265,7 @@ hl_quantity_row_init (HlQuantityRow *self)
   apply_kind (self, HL_KIND_LENGTH);
   /* Ctrl+Z belongs to the document's undo, which covers every field */
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->entry), FALSE);
+  hl_fields_limit_editable (GTK_EDITABLE (self->entry), FIELD_TEXT_CHARS, 0, TRUE);
   focus = gtk_event_controller_focus_new ();
   g_signal_connect (focus, "leave", G_CALLBACK (on_focus_leave_cb), self);
   gtk_widget_add_controller (GTK_WIDGET (self->entry), focus);
@@ -330,6 +341,14 @@ hl_quantity_row_parse (HlQuantityRow *self,
   g_return_val_if_fail (HL_IS_QUANTITY_ROW (self), FALSE);
 
   text = gtk_editable_get_text (GTK_EDITABLE (self->entry));
+  if (g_utf8_strlen (text, -1) > VALUE_TEXT_CHARS)
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_DATA,
+                   /* TRANSLATORS: %ld is the length of the text in the field, %d the most a value takes */
+                   _("too long for a value: %ld characters (at most %d)"),
+                   g_utf8_strlen (text, -1), VALUE_TEXT_CHARS);
+      return FALSE;
+    }
   if (!hl_units_parse (text, self->kind, current_unit (self), hl_locale_decimal_comma (),
                        &value, &unit, error))
     return FALSE;
@@ -344,10 +363,14 @@ hl_quantity_row_set_error (HlQuantityRow *self,
                            const char    *message)
 {
   GtkWidget *entry;
+  g_autofree char *shown = NULL;
 
   g_return_if_fail (HL_IS_QUANTITY_ROW (self));
 
   entry = GTK_WIDGET (self->entry);
+  /* a message that quotes a pasted page must not become one */
+  shown = message != NULL ? hl_text_quote (message, MESSAGE_CHARS) : NULL;
+  message = shown;
   if (message != NULL)
     {
       gtk_widget_add_css_class (entry, "error");
@@ -387,4 +410,13 @@ hl_quantity_row_get_unit_dropdown (HlQuantityRow *self)
 {
   g_return_val_if_fail (HL_IS_QUANTITY_ROW (self), NULL);
   return self->unit_dropdown;
+}
+
+const char *
+hl_quantity_row_get_error (HlQuantityRow *self)
+{
+  g_return_val_if_fail (HL_IS_QUANTITY_ROW (self), NULL);
+  if (!hl_quantity_row_has_error (self))
+    return NULL;
+  return gtk_label_get_text (self->error_label);
 }

@@ -31,6 +31,8 @@ gboolean    hl_quantity_row_parse        (HlQuantityRow *self,
 void        hl_quantity_row_set_error    (HlQuantityRow *self,
                                           const char    *message);
 gboolean    hl_quantity_row_has_error    (HlQuantityRow *self);
+/* the message shown under the field, or NULL */
+const char *hl_quantity_row_get_error    (HlQuantityRow *self);
 GtkEditable *hl_quantity_row_get_entry   (HlQuantityRow *self);
 GtkDropDown *hl_quantity_row_get_unit_dropdown (HlQuantityRow *self);
 

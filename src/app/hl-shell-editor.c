@@ -11,6 +11,7 @@
 #include "hl-config.h"
 #include "hl-shell-editor.h"
 #include "hl-fields.h"
+#include "hl-limits.h"
 #include "hl-shell-check.h"
 
 #include <glib/gi18n.h>
@@ -31,6 +32,10 @@ struct _HlShellEditor
   HlQuantityRow *external_pressure_row;
   GtkDropDown   *material_dropdown;
   GtkLabel      *material_note_label;
+  GtkWidget     *material_scope_box;
+  GtkLabel      *material_users_label;
+  GtkCheckButton *material_all_button;
+  GtkCheckButton *material_this_button;
   GtkEntry      *material_name_entry;
   HlQuantityRow *elastic_modulus_row;
   HlQuantityRow *poisson_ratio_row;
@@ -46,6 +51,9 @@ struct _HlShellEditor
   HlShellInputs  shown;       /* what the fields show; equal means no reload */
   gboolean       has_shown;
   GPtrArray     *material_ids; /* char *, parallel to the material dropdown */
+  /* the shell and material the scope choice was made for */
+  char           scope_shell[HL_ID_MAX];
+  char           scope_material[HL_ID_MAX];
   guint          updating;
 };
 
@@ -167,6 +175,37 @@ reload_materials (HlShellEditor *self)
   self->updating--;
 }
 
+/* A project material several shells use says so; the user picks
+ * whether a change goes to all of them or to a copy for this shell.
+ * Another shell or material starts again at "all", the file's meaning
+ * of a shared material. */
+static void
+refresh_material_scope (HlShellEditor *self)
+{
+  const HlShellInputs *shell = hl_document_get_shell (self->document);
+  const HlProject *project = hl_document_get_project (self->document);
+  guint users = 0;
+
+  if (shell != NULL && hl_project_find_material (project, shell->material_ref) != NULL)
+    users = hl_document_count_material_users (self->document, shell->material_ref);
+  if (shell == NULL || strcmp (shell->id, self->scope_shell) != 0
+      || strcmp (shell->material_ref, self->scope_material) != 0)
+    {
+      hl_utf8_copy (self->scope_shell, shell != NULL ? shell->id : "", sizeof self->scope_shell);
+      hl_utf8_copy (self->scope_material, shell != NULL ? shell->material_ref : "", sizeof self->scope_material);
+      gtk_check_button_set_active (self->material_all_button, TRUE);
+    }
+  gtk_widget_set_visible (self->material_scope_box, users > 1);
+  if (users > 1)
+    {
+      /* TRANSLATORS: above the choice "every shell using it" / "this shell only";
+       * %u is two or more */
+      g_autofree char *text = g_strdup_printf (_("Used by %u shells. Changes go to:"), users);
+
+      gtk_label_set_text (self->material_users_label, text);
+    }
+}
+
 static void
 refresh_marks (HlShellEditor *self)
 {
@@ -251,6 +290,7 @@ on_document_changed_cb (HlDocument    *document,
   /* an edit made here already shows; reloading would move the cursor */
   if (shell == NULL || !self->has_shown || !hl_shell_inputs_equal (shell, &self->shown))
     reload (self);
+  refresh_material_scope (self);
   refresh_marks (self);
 }
 
@@ -267,12 +307,17 @@ commit_shell (HlShellEditor       *self,
   hl_document_edit_shell (self->document, shell, key);
 }
 
+/* "<stem>-N" that no project or built-in material uses; a long stem
+ * is shortened so that the number always fits the id */
 static char *
-new_material_id (const HlProject *project)
+unique_material_id (const HlProject *project,
+                    const char      *stem)
 {
   for (guint n = 1;; n++)
     {
-      char *id = g_strdup_printf ("material-%u", n);
+      g_autofree char *suffix = g_strdup_printf ("-%u", n);
+      int room = (int) (HL_LIMIT_ID_BYTES - strlen (suffix));
+      char *id = g_strdup_printf ("%.*s%s", MIN (room, (int) strlen (stem)), stem, suffix);
 
       if (hl_project_find_material (project, id) == NULL && hl_material_builtin_find (id) == NULL)
         return id;
@@ -281,7 +326,8 @@ new_material_id (const HlProject *project)
 }
 
 /* A built-in material is never changed: its first edit makes a project
- * material, so the built-in list keeps its typical values. */
+ * material, so the built-in list keeps its typical values.  A shared
+ * project material is copied when the user chose this shell only. */
 static void
 commit_material (HlShellEditor    *self,
                  const HlMaterial *material,
@@ -290,23 +336,40 @@ commit_material (HlShellEditor    *self,
   const HlProject *project = hl_document_get_project (self->document);
   HlMaterial m = *material;
   g_autofree char *key = g_strdup_printf ("material:%s:%s", self->shown.id, field);
+  g_autofree char *id = NULL;
+  g_autofree char *name = NULL;
 
   if (hl_project_find_material (project, m.id) == NULL)
     {
-      g_autofree char *id = new_material_id (project);
+      id = unique_material_id (project, "material");
+      /* TRANSLATORS: a built-in material copied to be edited */
+      name = g_strdup_printf (_("%s, edited"), material->name);
+    }
+  else if (gtk_check_button_get_active (self->material_this_button)
+           && hl_document_count_material_users (self->document, m.id) > 1)
+    {
+      g_autofree char *stem = g_strdup_printf ("%s-copy", m.id);
 
-      g_strlcpy (m.id, id, sizeof m.id);
+      id = unique_material_id (project, stem);
+      /* TRANSLATORS: name of a copy; %s is the original's name */
+      name = g_strdup_printf (_("%s (copy)"), material->name);
+    }
+  if (id != NULL)
+    {
+      hl_utf8_copy (m.id, id, sizeof m.id);
+      /* a name being typed is the user's own */
       if (strcmp (field, "name") != 0)
-        {
-          /* TRANSLATORS: a built-in material copied to be edited */
-          g_autofree char *name = g_strdup_printf (_("%s, edited"), material->name);
-
-          g_strlcpy (m.name, name, sizeof m.name);
-        }
+        hl_utf8_copy (m.name, name, sizeof m.name);
     }
   self->shown.material = m;
-  g_strlcpy (self->shown.material_ref, m.id, sizeof self->shown.material_ref);
+  hl_utf8_copy (self->shown.material_ref, m.id, sizeof self->shown.material_ref);
   hl_document_put_material (self->document, &m, key);
+  if (id != NULL)
+    {
+      /* the new material joins the list, and the choice is made */
+      reload_materials (self);
+      refresh_material_scope (self);
+    }
 }
 
 static void
@@ -415,7 +478,7 @@ on_material_dropdown_selected_cb (GObject       *dropdown,
     return;
   shell = self->shown;
   shell.material = *m;
-  g_strlcpy (shell.material_ref, m->id, sizeof shell.material_ref);
+  hl_utf8_copy (shell.material_ref, m->id, sizeof shell.material_ref);
   commit_shell (self, &shell, NULL);
   reload (self);
   refresh_marks (self);
@@ -430,7 +493,12 @@ on_name_entry_changed_cb (GtkEntry      *entry,
   if (self->updating > 0 || self->document == NULL || !self->has_shown)
     return;
   shell = self->shown;
-  g_strlcpy (shell.name, gtk_editable_get_text (GTK_EDITABLE (entry)), sizeof shell.name);
+  /* the entry stops at the limit already; the cut is a second guard,
+   * on a character boundary so the name stays valid UTF-8 */
+  hl_utf8_copy (shell.name, gtk_editable_get_text (GTK_EDITABLE (entry)), sizeof shell.name);
+  /* the file keeps no space at either end; the entry keeps what is
+   * typed, so a space before the next word stays */
+  g_strstrip (shell.name);
   commit_shell (self, &shell, "name");
 }
 
@@ -443,7 +511,8 @@ on_material_name_entry_changed_cb (GtkEntry      *entry,
   if (self->updating > 0 || self->document == NULL || !self->has_shown)
     return;
   m = self->shown.material;
-  g_strlcpy (m.name, gtk_editable_get_text (GTK_EDITABLE (entry)), sizeof m.name);
+  hl_utf8_copy (m.name, gtk_editable_get_text (GTK_EDITABLE (entry)), sizeof m.name);
+  g_strstrip (m.name);
   commit_material (self, &m, "name");
   reload_materials (self);
 }
@@ -492,6 +561,10 @@ hl_shell_editor_class_init (HlShellEditorClass *klass)
   CHILD (external_pressure_row);
   CHILD (material_dropdown);
   CHILD (material_note_label);
+  CHILD (material_scope_box);
+  CHILD (material_users_label);
+  CHILD (material_all_button);
+  CHILD (material_this_button);
   CHILD (material_name_entry);
   CHILD (elastic_modulus_row);
   CHILD (poisson_ratio_row);
@@ -563,6 +636,9 @@ hl_shell_editor_init (HlShellEditor *self)
   /* Ctrl+Z belongs to the document's undo, which covers every field */
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->name_entry), FALSE);
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->material_name_entry), FALSE);
+  /* names are fixed slots of bytes in the file model */
+  hl_fields_limit_editable (GTK_EDITABLE (self->name_entry), 0, HL_LIMIT_NAME_BYTES, TRUE);
+  hl_fields_limit_editable (GTK_EDITABLE (self->material_name_entry), 0, HL_LIMIT_NAME_BYTES, TRUE);
   g_signal_connect (factory, "setup", G_CALLBACK (on_material_item_setup_cb), NULL);
   g_signal_connect (factory, "bind", G_CALLBACK (on_material_item_bind_cb), NULL);
   gtk_drop_down_set_factory (self->material_dropdown, factory);
@@ -605,4 +681,34 @@ hl_shell_editor_get_row (HlShellEditor *self,
     if (g_strcmp0 (hl_quantity_row_get_field (rows[i]), field) == 0)
       return rows[i];
   return NULL;
+}
+
+GtkEditable *
+hl_shell_editor_get_name_entry (HlShellEditor *self)
+{
+  g_return_val_if_fail (HL_IS_SHELL_EDITOR (self), NULL);
+  return GTK_EDITABLE (self->name_entry);
+}
+
+GtkEditable *
+hl_shell_editor_get_material_name_entry (HlShellEditor *self)
+{
+  g_return_val_if_fail (HL_IS_SHELL_EDITOR (self), NULL);
+  return GTK_EDITABLE (self->material_name_entry);
+}
+
+const char *
+hl_shell_editor_get_material_users_text (HlShellEditor *self)
+{
+  g_return_val_if_fail (HL_IS_SHELL_EDITOR (self), NULL);
+  if (!gtk_widget_get_visible (self->material_scope_box))
+    return NULL;
+  return gtk_label_get_text (self->material_users_label);
+}
+
+GtkWidget *
+hl_shell_editor_get_material_scope (HlShellEditor *self)
+{
+  g_return_val_if_fail (HL_IS_SHELL_EDITOR (self), NULL);
+  return GTK_WIDGET (self->material_this_button);
 }
