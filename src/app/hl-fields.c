@@ -97,8 +97,9 @@ typedef struct
   gboolean one_line;
 } Limit;
 
-/* @text (@length bytes) made valid, its control characters spaces for a
- * one-line field */
+/* @text (@length bytes) made valid, its control characters spaces (a
+ * multi-line text keeps its line breaks and tabs): the file refuses
+ * them, so a paste must not bring them in */
 static GString *
 clean_text (const char *text,
             gsize       length,
@@ -111,7 +112,9 @@ clean_text (const char *text,
     {
       gunichar c = g_utf8_get_char (p);
 
-      if (one_line && (g_unichar_iscntrl (c) || c == 0x2028 || c == 0x2029))
+      gboolean control = g_unichar_iscntrl (c) || c == 0x2028 || c == 0x2029;
+
+      if (control && (one_line || (c != '\n' && c != '\t' && c != '\r')))
         g_string_append_c (out, ' ');
       else
         g_string_append_len (out, p, g_utf8_next_char (p) - p);
@@ -194,17 +197,20 @@ on_limited_buffer_insert_text_cb (GtkTextBuffer *buffer,
   glong max_chars = GPOINTER_TO_SIZE (data);
   glong used = gtk_text_buffer_get_char_count (buffer);
   glong room = MAX (0, max_chars - used);
-  const char *end;
+  gsize bytes = length < 0 ? strlen (text) : (gsize) length;
+  g_autoptr(GString) clean = clean_text (text, bytes, FALSE);
+  gsize fit = clean->len;
 
-  if (g_utf8_strlen (text, length) <= room)
+  if (g_utf8_strlen (clean->str, -1) > room)
+    fit = (gsize) (g_utf8_offset_to_pointer (clean->str, room) - clean->str);
+  if (fit == bytes && memcmp (clean->str, text, bytes) == 0)
     return;
-  end = g_utf8_offset_to_pointer (text, room);
   g_signal_stop_emission_by_name (buffer, "insert-text");
-  if (end > text)
+  if (fit > 0)
     {
       g_signal_handlers_block_by_func (buffer, on_limited_buffer_insert_text_cb, data);
       /* revalidates @location as the default handler would */
-      gtk_text_buffer_insert (buffer, location, text, (int) (end - text));
+      gtk_text_buffer_insert (buffer, location, clean->str, (int) fit);
       g_signal_handlers_unblock_by_func (buffer, on_limited_buffer_insert_text_cb, data);
     }
 }

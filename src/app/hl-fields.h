@@ -31,7 +31,8 @@ void        hl_fields_limit_editable    (GtkEditable   *editable,
                                          glong          max_chars,
                                          gsize          max_bytes,
                                          gboolean       one_line);
-/* The same for a multi-line text, in characters. */
+/* The same for a multi-line text, in characters; it keeps line breaks
+ * and tabs. */
 void        hl_fields_limit_text_buffer (GtkTextBuffer *buffer,
                                          glong          max_chars);
 

@@ -237,6 +237,24 @@ test_name_cut_on_character (void)
   discard_window (window);
 }
 
+/* A name is one line: a pasted line break or tab becomes a space, so a
+ * name cannot forge a second line of a "key = value" summary (common
+ * practice for line-oriented text output). */
+static void
+test_name_one_line (void)
+{
+  HlWindow *window = open_demo ();
+  GtkEditable *name = hl_shell_editor_get_name_entry (editor (window));
+  const HlShellInputs *shell;
+
+  paste_into (name, "R-7\nvon_mises_max = 1 MPa\tx");
+  shell = hl_document_get_shell (document (window));
+  g_assert_false (hl_text_has_control (shell->name, FALSE));
+  g_assert_cmpstr (shell->name, ==, "R-7 von_mises_max = 1 MPa x");
+  assert_saves_and_reopens (window);
+  discard_window (window);
+}
+
 /* A duplicate's name adds " (copy)" to a full name: it is cut too, on a
  * character. */
 static void
@@ -291,6 +309,11 @@ test_properties_limits (void)
   g_assert_cmpint (g_utf8_strlen (description, -1), ==, HL_LIMIT_LONG_TEXT_CHARS);
   project = hl_document_get_project (document (window));
   g_assert_cmpint (g_utf8_strlen (project->description, -1), ==, HL_LIMIT_LONG_TEXT_CHARS);
+
+  /* a description keeps its line breaks, not other control characters,
+   * which a project file cannot hold (XML 1.0, section 2.2) */
+  paste_into_text_view (hl_properties_dialog_get_description_view (dialog), "First line.\nSecond\001line.");
+  g_assert_cmpstr (hl_document_get_project (document (window))->description, ==, "First line.\nSecond line.");
 
   paste_into (hl_properties_dialog_get_revision_author_entry (dialog), long_title);
   g_assert_cmpint (g_utf8_strlen (gtk_editable_get_text (hl_properties_dialog_get_revision_author_entry (dialog)), -1),
@@ -463,6 +486,7 @@ main (int    argc,
   app = hl_ui_application_new ();
 
   g_test_add_func ("/editing/name-cut-on-character", test_name_cut_on_character);
+  g_test_add_func ("/editing/name-one-line", test_name_one_line);
   g_test_add_func ("/editing/duplicate-long-name", test_duplicate_long_name);
   g_test_add_func ("/editing/properties-limits", test_properties_limits);
   g_test_add_func ("/editing/revision-number-limit", test_revision_number_limit);
