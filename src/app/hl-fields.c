@@ -179,6 +179,8 @@ hl_fields_limit_editable (GtkEditable *editable,
   target = gtk_editable_get_delegate (editable);
   if (target == NULL)
     target = editable;
+  /* one limit a field: a second would free the first under its handler */
+  g_return_if_fail (g_object_get_data (G_OBJECT (target), "hl-limit") == NULL);
   limit = g_new0 (Limit, 1);
   limit->max_chars = max_chars;
   limit->max_bytes = max_bytes;
