@@ -36,12 +36,15 @@ typedef enum
 GQuark        hl_units_error_quark      (void);
 
 /* Factor to SI (m, Pa, fraction) of @unit for @kind, or 0 when unknown.
- * Lookup is exact first, then case-insensitive, and accepts aliases
- * ("N/mm^2", "inch"). */
+ * Symbols match exactly, case included ("MPa" yes, "mPa" and "mpa" no:
+ * NIST SP 811 §6), and so do the listed alternative spellings ("N/mm^2",
+ * "N/mm²", "PSI", "\"" for inch); unit names are words and match in any
+ * case ("inch", "Metre"). */
 double        hl_unit_factor            (HlQuantityKind kind,
                                          const char    *unit);
 
-/* Canonical spelling of @unit ("n/mm^2" -> "N/mm2"), or NULL when unknown. */
+/* Canonical symbol of @unit ("N/mm^2" -> "N/mm2", "Inch" -> "in"), or
+ * NULL when unknown; the same matching as hl_unit_factor(). */
 const char   *hl_unit_canonical         (HlQuantityKind kind,
                                          const char    *unit);
 
