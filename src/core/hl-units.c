@@ -441,7 +441,9 @@ refuse_grouping (const char *s,
     {
       gsize len = scan_number (s, '.');
 
-      if (len > 0 && s[len] == ',' && g_ascii_isdigit (s[len + 1]))
+      /* "7,5" but not "1e3,5": after an exponent no decimal part fits */
+      if (len > 0 && s[len] == ',' && g_ascii_isdigit (s[len + 1])
+          && memchr (s, 'e', len) == NULL && memchr (s, 'E', len) == NULL)
         {
           plain = g_strdup (s);
           plain[len] = '.';
