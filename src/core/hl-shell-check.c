@@ -16,8 +16,9 @@
  * efficiency or a 1 nm bore in a 100 m wall computes, and the answer
  * means nothing.  Each bound names its reason; "from memory" marks a
  * figure recalled without the book at hand, "common practice" a fact of
- * the trade.  The upper bounds of sizes stay where they were: beyond
- * them only overflow downstream is invited. */
+ * the trade.  The upper bound of lengths stays where it was (100 km):
+ * beyond it only overflow downstream is invited; those of pressures and
+ * material values come down to what a material can be. */
 typedef struct
 {
   const char *field;
