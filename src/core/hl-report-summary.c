@@ -7,8 +7,71 @@
 #include "hl-report.h"
 #include "hl-result-rows.h"
 
+#include <string.h>
+
 /* issue: at least 6 significant digits; 9 keeps round-off visible */
 #define SUMMARY_DIGITS 9
+
+char *
+hl_report_escape_line (const char *text)
+{
+  GString *out;
+  const char *end;
+
+  if (text == NULL)
+    return g_strdup ("");
+  end = text + strlen (text);
+  out = g_string_sized_new (end - text);
+  for (const char *p = text; p < end;)
+    {
+      gunichar c = g_utf8_get_char_validated (p, end - p);
+      const char *next;
+
+      if (c == (gunichar) -1 || c == (gunichar) -2)
+        {
+          /* not UTF-8: the byte's value, never the raw byte */
+          g_string_append_printf (out, "\\x%02x", (guchar) *p);
+          p++;
+          continue;
+        }
+      next = g_utf8_next_char (p);
+      if (c == '\\')
+        g_string_append (out, "\\\\");
+      else if (c == '\n')
+        g_string_append (out, "\\n");
+      else if (c == '\r')
+        g_string_append (out, "\\r");
+      else if (c == '\t')
+        g_string_append (out, "\\t");
+      else if (c < 0x20 || c == 0x7F)
+        g_string_append_printf (out, "\\x%02x", (guint) c);
+      else if ((c >= 0x80 && c < 0xA0) || c == 0x2028 || c == 0x2029)
+        g_string_append_printf (out, "\\u%04x", (guint) c);
+      else
+        g_string_append_len (out, p, next - p);
+      p = next;
+    }
+  return g_string_free (out, FALSE);
+}
+
+char *
+hl_report_csv_field (const char *text)
+{
+  g_autofree char *safe = hl_report_escape_line (text);
+  GString *out;
+
+  if (strpbrk (safe, ",\"") == NULL)
+    return g_steal_pointer (&safe);
+  out = g_string_new ("\"");
+  for (const char *p = safe; *p != '\0'; p++)
+    {
+      if (*p == '"')
+        g_string_append_c (out, '"');
+      g_string_append_c (out, *p);
+    }
+  g_string_append_c (out, '"');
+  return g_string_free (out, FALSE);
+}
 
 char *
 hl_report_summary_block (const HlSolution *solution,
@@ -21,11 +84,16 @@ hl_report_summary_block (const HlSolution *solution,
     {
       const HlResultRow *r = &g_array_index (rows, HlResultRow, i);
       g_autofree char *text = hl_row_format (r, system, SUMMARY_DIGITS, TRUE);
+      g_autofree char *safe = hl_report_escape_line (text);
 
-      g_string_append_printf (out, "%s = %s\n", r->key, text);
+      g_string_append_printf (out, "%s = %s\n", r->key, safe);
     }
   for (guint i = 0; i < solution->warnings->len; i++)
-    g_string_append_printf (out, "warning = %s\n", (const char *) g_ptr_array_index (solution->warnings, i));
+    {
+      g_autofree char *safe = hl_report_escape_line (g_ptr_array_index (solution->warnings, i));
+
+      g_string_append_printf (out, "warning = %s\n", safe);
+    }
   return g_string_free (out, FALSE);
 }
 
@@ -44,13 +112,21 @@ char *
 hl_report_csv (const HlSolution *s,
                HlUnitSystem      system)
 {
+  static const char *const columns[] = {
+    "radius", "hoop_lame", "radial_lame", "axial_lame", "von_mises", "tresca", "hoop_thin", "axial_thin",
+  };
   const char *lu = hl_row_unit (HL_ROW_LENGTH, system);
   const char *su = hl_row_unit (HL_ROW_STRESS, system);
   GString *out = g_string_new (NULL);
 
-  g_string_append_printf (out,
-                          "radius_%s,hoop_lame_%s,radial_lame_%s,axial_lame_%s,von_mises_%s,tresca_%s,hoop_thin_%s,axial_thin_%s\n",
-                          lu, su, su, su, su, su, su, su);
+  for (guint k = 0; k < G_N_ELEMENTS (columns); k++)
+    {
+      g_autofree char *name = g_strdup_printf ("%s_%s", columns[k], k == 0 ? lu : su);
+      g_autofree char *field = hl_report_csv_field (name);
+
+      g_string_append (out, field);
+      g_string_append_c (out, k + 1 == G_N_ELEMENTS (columns) ? '\n' : ',');
+    }
   for (guint i = 0; i < s->n_points; i++)
     {
       const HlWallPoint *p = &s->points[i];

@@ -11,6 +11,18 @@
 
 #define REPORT_DIGITS 6
 
+/* @label, then @text escaped to one line (a title with a line break
+ * must not start a line of the report: hl_report_escape_line()) */
+static void
+put_field (GString    *out,
+           const char *label,
+           const char *text)
+{
+  g_autofree char *safe = hl_report_escape_line (text);
+
+  g_string_append_printf (out, "%s%s\n", label, safe);
+}
+
 static void
 rule (GString *out,
       const char *title)
@@ -60,9 +72,11 @@ input_line (GString        *out,
       unit = "MPa";
       break;
     }
+  g_autofree char *typed_unit = hl_report_escape_line (q.unit);
+
   g_string_append (out, "  ");
   put_padded (out, label, 35);
-  g_string_append_printf (out, "%14s %-6s = %14s %s\n", typed, q.unit, converted, unit);
+  g_string_append_printf (out, "%14s %-6s = %14s %s\n", typed, typed_unit, converted, unit);
 }
 
 static void
@@ -74,6 +88,8 @@ put_inputs (GString             *out,
   };
   g_autofree char *nu = hl_format_significant (in->material.poisson_ratio, 6);
   g_autofree char *je = hl_format_significant (in->joint_efficiency, 6);
+  g_autofree char *material = hl_report_escape_line (in->material.name);
+  g_autofree char *material_id = hl_report_escape_line (in->material.id);
 
   rule (out, "Inputs (as entered = converted)");
   g_string_append_printf (out, "  %-35s%s%s%s\n", "Form", hl_form_to_string (in->form),
@@ -84,7 +100,7 @@ put_inputs (GString             *out,
   input_line (out, "Corrosion allowance", in->corrosion_allowance, HL_KIND_LENGTH);
   input_line (out, "Internal pressure (gauge)", in->internal_pressure, HL_KIND_STRESS);
   input_line (out, "External pressure (gauge)", in->external_pressure, HL_KIND_STRESS);
-  g_string_append_printf (out, "  %-35s%s (%s)\n", "Material", in->material.name, in->material.id);
+  g_string_append_printf (out, "  %-35s%s (%s)\n", "Material", material, material_id);
   input_line (out, "Elastic modulus E", in->material.elastic_modulus, HL_KIND_MODULUS);
   g_string_append_printf (out, "  %-35s%14s\n", "Poisson's ratio", nu);
   input_line (out, "Yield strength", in->material.yield_strength, HL_KIND_STRESS);
@@ -120,6 +136,15 @@ put_methods (GString *out)
     "  The analysis wall has the corrosion allowance removed from the inside.\n");
 }
 
+static char *
+escaped_row (const HlResultRow *row,
+             HlUnitSystem       system)
+{
+  g_autofree char *text = hl_row_format (row, system, REPORT_DIGITS, TRUE);
+
+  return hl_report_escape_line (text);
+}
+
 static void
 put_results (GString          *out,
              const HlSolution *new_wall,
@@ -134,7 +159,7 @@ put_results (GString          *out,
     {
       const HlResultRow *rn = &g_array_index (rows_new, HlResultRow, i);
       const HlResultRow *rc = &g_array_index (rows_cor, HlResultRow, i);
-      g_autofree char *vn = NULL, *vc = NULL;
+      g_autofree char *vn = NULL, *vc = NULL, *reason = NULL;
 
       if (rc->kind == HL_ROW_WORD && i < 4)
         continue;   /* name, id, form: in the header already */
@@ -143,11 +168,12 @@ put_results (GString          *out,
       if (rc->kind != HL_ROW_WORD && rn->result.reason != NULL && g_strcmp0 (rn->result.reason, rc->result.reason) == 0)
         {
           /* the same gap in both columns: say it once, across both */
-          g_string_append_printf (out, "n/a: %s\n", rc->result.reason);
+          reason = hl_report_escape_line (rc->result.reason);
+          g_string_append_printf (out, "n/a: %s\n", reason);
           continue;
         }
-      vn = hl_row_format (rn, system, REPORT_DIGITS, TRUE);
-      vc = hl_row_format (rc, system, REPORT_DIGITS, TRUE);
+      vn = escaped_row (rn, system);
+      vc = escaped_row (rc, system);
       put_padded (out, vn, 18);
       g_string_append_printf (out, " | %s", vc);
       if (rc->source != NULL)
@@ -169,7 +195,9 @@ put_verdict (GString          *out,
   rule (out, "Thin-wall verdict (corroded wall)");
   if (!hl_result_ok (err))
     {
-      g_string_append_printf (out, "  The thin-wall error cannot be formed: %s.\n", err.reason);
+      g_autofree char *reason = hl_report_escape_line (err.reason);
+
+      g_string_append_printf (out, "  The thin-wall error cannot be formed: %s.\n", reason);
       return;
     }
   {
@@ -212,11 +240,22 @@ hl_report_text (const HlProject  *project,
 
   g_string_append (out, "HOOPLINE CALCULATION REPORT\n");
   g_string_append (out, "===========================\n");
-  g_string_append_printf (out, "Project:   %s\n", project->title[0] ? project->title : "(untitled)");
-  g_string_append_printf (out, "Engineer:  %s\n", project->engineer[0] ? project->engineer : "(not given)");
+  put_field (out, "Project:   ", project->title[0] ? project->title : "(untitled)");
+  put_field (out, "Engineer:  ", project->engineer[0] ? project->engineer : "(not given)");
   if (rev != NULL)
-    g_string_append_printf (out, "Revision:  %u, %s, %s: %s\n", rev->number, rev->date, rev->author, rev->text);
-  g_string_append_printf (out, "Shell:     %s (id %s)\n", corroded->inputs.name, corroded->inputs.id);
+    {
+      g_autofree char *date = hl_report_escape_line (rev->date);
+      g_autofree char *author = hl_report_escape_line (rev->author);
+      g_autofree char *text = hl_report_escape_line (rev->text);
+
+      g_string_append_printf (out, "Revision:  %u, %s, %s: %s\n", rev->number, date, author, text);
+    }
+  {
+    g_autofree char *name = hl_report_escape_line (corroded->inputs.name);
+    g_autofree char *id = hl_report_escape_line (corroded->inputs.id);
+
+    g_string_append_printf (out, "Shell:     %s (id %s)\n", name, id);
+  }
   g_string_append_printf (out, "Printed:   %s, units %s\n", today, system == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa");
   g_string_append_printf (out, "\nCAUTION: %s\n", HL_CAUTION);
 
@@ -229,7 +268,7 @@ hl_report_text (const HlProject  *project,
   if (corroded->warnings->len == 0)
     g_string_append (out, "  none\n");
   for (guint i = 0; i < corroded->warnings->len; i++)
-    g_string_append_printf (out, "  - %s\n", (const char *) g_ptr_array_index (corroded->warnings, i));
+    put_field (out, "  - ", g_ptr_array_index (corroded->warnings, i));
 
   rule (out, "Caution");
   g_string_append_printf (out, "  %s\n", HL_CAUTION);

@@ -15,16 +15,33 @@ G_BEGIN_DECLS
   "approval follow the applicable code, local rules and a qualified, " \
   "licensed engineer."
 
-/* "key = value unit" block for one solution, warnings last. */
+/* @text made safe for one line of a text output, so that no user text
+ * (a name, a title) can start a line of its own or move a column: a
+ * backslash becomes "\\", the C escapes "\n", "\r", "\t" stand for
+ * their characters, any other control character (C0, DEL) is "\xNN",
+ * a C1 control or U+2028/U+2029 is "\uNNNN", and a byte that is not
+ * UTF-8 is "\xNN".  Everything else is kept as it is. */
+char *hl_report_escape_line   (const char *text);
+
+/* @text as one CSV field (RFC 4180 §2): escaped as hl_report_escape_line
+ * (so a record stays one line for tools that read by lines), then
+ * enclosed in double quotes, with each quote doubled, when it holds a
+ * comma, a double quote or leading or trailing spaces. */
+char *hl_report_csv_field     (const char *text);
+
+/* "key = value unit" block for one solution, warnings last; every value
+ * and warning goes through hl_report_escape_line(). */
 char *hl_report_summary_block (const HlSolution *solution,
                                HlUnitSystem      system);
 
-/* Through-thickness table, inner to outer surface inclusive. */
+/* Through-thickness table, inner to outer surface inclusive; CSV with
+ * fields per hl_report_csv_field(). */
 char *hl_report_csv           (const HlSolution *solution,
                                HlUnitSystem      system);
 
 /* Calculation report a reviewer can follow.  @new_wall and @corroded are
- * the same shell solved without and with the corrosion allowance. */
+ * the same shell solved without and with the corrosion allowance.  Every
+ * text from the project is printed through hl_report_escape_line(). */
 char *hl_report_text          (const HlProject  *project,
                                const HlSolution *new_wall,
                                const HlSolution *corroded,

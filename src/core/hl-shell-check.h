@@ -19,10 +19,15 @@ typedef struct
 
 void       hl_problem_free        (HlProblem *problem);
 
-/* All problems of @in, in field order; an empty array when it is valid. */
+/* All problems of @in, in field order; an empty array when it is valid.
+ * Every quantity has physical bounds (hl-shell-check.c names each and its
+ * reason), the radii are checked for the new and the corroded wall, and
+ * the shell's and the material's names (field "name") refuse control
+ * characters: a name is one line of text. */
 GPtrArray *hl_shell_inputs_check  (const HlShellInputs *in);
 
-/* Checks @q alone as the value of @field (used by the window per field). */
+/* Checks @q alone as the value of @field (used by the window per field):
+ * the field's own bounds, or the kind's for a field without them. */
 char      *hl_check_quantity      (const char     *field,
                                    HlQuantity      q,
                                    HlQuantityKind  kind,

@@ -9,48 +9,60 @@
 #define G_LOG_DOMAIN "hl-units"
 
 #include "hl-units.h"
+#include "hl-limits.h"
 
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
 #include <locale.h>
 
+/* Unit symbols are matched exactly: their case is part of the symbol
+ * (NIST SP 811 §6: "mPa" is the millipascal, "MPa" the megapascal, "Mm"
+ * the megametre), so a case-insensitive match would silently change a
+ * value by nine orders of magnitude.  Besides the canonical symbol a row
+ * lists the other spellings we accept on purpose, also exactly: the same
+ * symbol typed without a superscript key ("N/mm^2"), the quote marks for
+ * inch and foot, the capitals of US drawings ("PSI").  Unit *names* are
+ * words, not symbols: "Inch" at the start of a sentence is still the
+ * inch and no unit name differs from another only by case, so words are
+ * compared ignoring ASCII case. */
 typedef struct
 {
-  const char *name;     /* canonical */
-  const char *aliases;  /* '|' separated, compared case-insensitively */
+  const char *name;       /* canonical symbol */
+  const char *spellings;  /* '|' separated, compared exactly */
+  const char *words;      /* '|' separated unit names, any ASCII case */
   double      factor;
 } HlUnitRow;
 
 static const HlUnitRow length_units[] = {
-  { "m",  "metre|meter|meters|metres", 1.0 },
-  { "cm", "centimetre|centimeter", 0.01 },
-  { "mm", "millimetre|millimeter", 0.001 },
-  { "in", "inch|inches|\"", 0.0254 },
-  { "ft", "foot|feet|'", 0.3048 },
-  { NULL, NULL, 0 }
+  { "m",  "", "metre|meter|metres|meters", 1.0 },
+  { "cm", "", "centimetre|centimeter|centimetres|centimeters", 0.01 },
+  { "mm", "", "millimetre|millimeter|millimetres|millimeters", 0.001 },
+  { "in", "\"", "inch|inches", 0.0254 },
+  { "ft", "'", "foot|feet", 0.3048 },
+  { NULL, NULL, NULL, 0 }
 };
 
 static const HlUnitRow stress_units[] = {
-  { "Pa",    "pascal", 1.0 },
-  { "kPa",   "", 1e3 },
-  { "MPa",   "", 1e6 },
-  { "GPa",   "", 1e9 },
-  { "bar",   "", 1e5 },
-  { "psi",   "lbf/in2|lbf/in^2", 6894.757293168 },
-  { "ksi",   "", 6894757.293168 },
-  { "N/mm2", "N/mm^2|N/mm\xc2\xb2|N/sq.mm", 1e6 },
-  { NULL, NULL, 0 }
+  { "Pa",    "", "pascal|pascals", 1.0 },
+  { "kPa",   "", "", 1e3 },
+  { "MPa",   "", "", 1e6 },
+  { "GPa",   "", "", 1e9 },
+  { "bar",   "", "", 1e5 },
+  { "psi",   "PSI|lbf/in2|lbf/in^2", "", 6894.757293168 },
+  { "ksi",   "KSI", "", 6894757.293168 },
+  { "N/mm2", "N/mm^2|N/mm\xc2\xb2|N/sq.mm", "", 1e6 },
+  { NULL, NULL, NULL, 0 }
 };
 
 static const HlUnitRow percent_units[] = {
-  { "%", "percent|pct", 0.01 },
-  { NULL, NULL, 0 }
+  { "%", "pct", "percent", 0.01 },
+  { NULL, NULL, NULL, 0 }
 };
 
 static const HlUnitRow ratio_units[] = {
-  { "", "", 1.0 },
-  { NULL, NULL, 0 }
+  { "", "", "", 1.0 },
+  { NULL, NULL, NULL, 0 }
 };
 
 static const char * const length_names[] = { "mm", "cm", "m", "in", "ft", NULL };
@@ -79,13 +91,15 @@ table_for (HlQuantityKind kind)
 }
 
 static gboolean
-alias_matches (const char *aliases,
-               const char *unit)
+list_matches (const char *list,
+              const char *unit,
+              gboolean    any_case)
 {
-  g_auto(GStrv) parts = g_strsplit (aliases, "|", -1);
+  g_auto(GStrv) parts = g_strsplit (list, "|", -1);
 
   for (guint i = 0; parts[i] != NULL; i++)
-    if (parts[i][0] != '\0' && g_ascii_strcasecmp (parts[i], unit) == 0)
+    if (parts[i][0] != '\0'
+        && (any_case ? g_ascii_strcasecmp (parts[i], unit) : strcmp (parts[i], unit)) == 0)
       return TRUE;
   return FALSE;
 }
@@ -99,11 +113,25 @@ find_row (HlQuantityKind kind,
   if (unit == NULL)
     return NULL;
   for (guint i = 0; rows[i].name != NULL; i++)
-    if (strcmp (rows[i].name, unit) == 0)
+    if (strcmp (rows[i].name, unit) == 0
+        || list_matches (rows[i].spellings, unit, FALSE)
+        || list_matches (rows[i].words, unit, TRUE))
       return &rows[i];
+  return NULL;
+}
+
+/* The symbol @unit would be with its case changed ("mPa" -> "MPa"), for
+ * the message that says why it is refused; NULL when there is none. */
+static const char *
+case_slip (HlQuantityKind kind,
+           const char    *unit)
+{
+  const HlUnitRow *rows = table_for (kind);
+
   for (guint i = 0; rows[i].name != NULL; i++)
-    if (g_ascii_strcasecmp (rows[i].name, unit) == 0 || alias_matches (rows[i].aliases, unit))
-      return &rows[i];
+    if (rows[i].name[0] != '\0'
+        && (g_ascii_strcasecmp (rows[i].name, unit) == 0 || list_matches (rows[i].spellings, unit, TRUE)))
+      return rows[i].name;
   return NULL;
 }
 
@@ -200,6 +228,10 @@ scan_number (const char *s,
   return i;
 }
 
+/* How much of a typed value a message quotes: enough to recognise it,
+ * not a pasted megabyte. */
+#define QUOTE_CHARS 40
+
 static gboolean
 convert_number (const char *start,
                 gsize       len,
@@ -215,8 +247,10 @@ convert_number (const char *start,
   v = g_ascii_strtod (copy, NULL);
   if (!isfinite (v))
     {
+      g_autofree char *quoted = hl_text_quote (copy, QUOTE_CHARS);
+
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_OUT_OF_RANGE,
-                   "“%s” is too large to be a value", copy);
+                   "“%s” is too large to be a value", quoted);
       return FALSE;
     }
   /* -0 is zero: keeps sign tests and the printed value honest */
@@ -243,11 +277,208 @@ hl_parse_number (const char *text,
   len = scan_number (stripped, '.');
   if (len == 0 || stripped[len] != '\0')
     {
+      g_autofree char *quoted = hl_text_quote (stripped, QUOTE_CHARS);
+
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                   "“%s” is not a plain decimal number", stripped);
+                   "“%s” is not a plain decimal number", quoted);
       return FALSE;
     }
   return convert_number (stripped, len, '.', value, error);
+}
+
+/* ---- digit grouping ---------------------------------------------------
+ *
+ * A value is never read with digit grouping, in either locale, because
+ * the same text means different numbers to different readers: "1.500" is
+ * one and a half to an English reader and fifteen hundred to a German
+ * one (DIN 1333).  Grouping is, precisely:
+ *   [sign] 1 to 3 digits, the first not 0,
+ *   then one or more groups: a mark ('.', ',' or a space) and exactly
+ *   three digits, not followed by a further digit,
+ *   then the end, a unit, or a decimal part (the other mark and digits);
+ *   an exponent right after the groups ("1.500e3") makes it a decimal.
+ * "0.500", "1.5000" and "1234.567" are therefore not grouping.  Which
+ * marks count depends on the locale:
+ *   decimal point: a comma is never a decimal mark, so "1,500" is refused
+ *     as grouping and "7,5" as a comma where a point belongs;
+ *   decimal comma: a pasted point is still read as a decimal point
+ *     ("0.5", "7.25 MPa": engineers paste both), except where it could be
+ *     a group mark ("1.500", "1.500,5", "1.500.000"); and a comma group
+ *     before a point ("1,500.5") is English grouping, refused too.
+ * Each refusal shows the forms that are accepted. */
+
+typedef struct
+{
+  gsize    int_end;    /* end of the grouped integer part */
+  gsize    end;        /* end of the whole number (fraction included) */
+  guint    groups;
+  gboolean fraction;
+} Grouping;
+
+static gboolean
+scan_grouped (const char *s,
+              char        mark,
+              char        decimal,
+              Grouping   *g)
+{
+  gsize i = 0, lead = 0;
+
+  memset (g, 0, sizeof *g);
+  if (s[i] == '+' || s[i] == '-')
+    i++;
+  if (s[i] == '0')
+    return FALSE;
+  while (g_ascii_isdigit (s[i + lead]))
+    lead++;
+  if (lead == 0 || lead > 3)
+    return FALSE;
+  i += lead;
+  while (s[i] == mark && g_ascii_isdigit (s[i + 1]) && g_ascii_isdigit (s[i + 2])
+         && g_ascii_isdigit (s[i + 3]) && !g_ascii_isdigit (s[i + 4]))
+    {
+      i += 4;
+      g->groups++;
+    }
+  if (g->groups == 0)
+    return FALSE;
+  if ((s[i] == 'e' || s[i] == 'E')
+      && (g_ascii_isdigit (s[i + 1]) || ((s[i + 1] == '+' || s[i + 1] == '-') && g_ascii_isdigit (s[i + 2]))))
+    return FALSE;
+  /* "1.500.5" is no number at all: left to the ordinary messages */
+  if (s[i] == mark && g_ascii_isdigit (s[i + 1]))
+    return FALSE;
+  g->int_end = i;
+  if (s[i] == decimal && g_ascii_isdigit (s[i + 1]))
+    {
+      g->fraction = TRUE;
+      for (i++; g_ascii_isdigit (s[i]); i++)
+        ;
+    }
+  g->end = i;
+  return TRUE;
+}
+
+/* @s[0..g->end] with the marks dropped and @decimal as decimal mark,
+ * then the rest of @s as typed: "1.500,5 MPa" -> "1500,5 MPa". */
+static char *
+ungrouped (const char     *s,
+           const Grouping *g,
+           char            decimal)
+{
+  GString *out = g_string_new (NULL);
+
+  for (gsize i = 0; i < g->int_end; i++)
+    if (g_ascii_isdigit (s[i]) || s[i] == '+' || s[i] == '-')
+      g_string_append_c (out, s[i]);
+  if (g->fraction)
+    {
+      g_string_append_c (out, decimal);
+      g_string_append_len (out, s + g->int_end + 1, g->end - g->int_end - 1);
+    }
+  g_string_append (out, s + g->end);
+  return g_string_free (out, FALSE);
+}
+
+/* The other reading of a single group, its mark taken as the decimal
+ * mark and written with @decimal: "12.000 bar" -> "12 bar". */
+static char *
+as_decimal (const char     *s,
+            const Grouping *g,
+            char            decimal)
+{
+  gsize mark_at = g->int_end - 4;
+  gsize frac_len = 3;
+
+  while (frac_len > 0 && s[mark_at + frac_len] == '0')
+    frac_len--;
+  if (frac_len == 0)
+    return g_strdup_printf ("%.*s%s", (int) mark_at, s, s + g->end);
+  return g_strdup_printf ("%.*s%c%.*s%s", (int) mark_at, s, decimal, (int) frac_len, s + mark_at + 1, s + g->end);
+}
+
+static gboolean
+refuse_grouping (const char *s,
+                 gboolean    decimal_comma,
+                 GError    **error)
+{
+  char decimal = decimal_comma ? ',' : '.';
+  char other = decimal_comma ? '.' : ',';
+  g_autofree char *quoted = hl_text_quote (s, QUOTE_CHARS);
+  g_autofree char *plain = NULL;
+  g_autofree char *plain_q = NULL;
+  Grouping g;
+
+  if (scan_grouped (s, other, decimal, &g) || scan_grouped (s, ' ', decimal, &g))
+    {
+      plain = ungrouped (s, &g, decimal);
+      plain_q = hl_text_quote (plain, QUOTE_CHARS);
+      /* one group and no decimal part: the mark may have been meant as a
+       * decimal mark, so both readings are offered */
+      if (g.groups == 1 && !g.fraction && s[g.int_end - 4] == other)
+        {
+          g_autofree char *alt = as_decimal (s, &g, decimal);
+          g_autofree char *alt_q = hl_text_quote (alt, QUOTE_CHARS);
+
+          g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
+                       "“%s”: digit grouping is not accepted; write “%s” or “%s”", quoted, plain_q, alt_q);
+        }
+      else
+        g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
+                     "“%s”: digit grouping is not accepted; write “%s”", quoted, plain_q);
+      return TRUE;
+    }
+  /* the locale's own decimal mark used as a group mark before the other
+   * one: "1,500.5" with a decimal comma, "1.500,5" with a point */
+  if (scan_grouped (s, decimal, other, &g) && g.fraction)
+    {
+      plain = ungrouped (s, &g, decimal);
+      plain_q = hl_text_quote (plain, QUOTE_CHARS);
+      g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
+                   "“%s”: digit grouping is not accepted; write “%s”", quoted, plain_q);
+      return TRUE;
+    }
+  if (!decimal_comma)
+    {
+      gsize len = scan_number (s, '.');
+
+      /* "7,5" but not "1e3,5": after an exponent no decimal part fits */
+      if (len > 0 && s[len] == ',' && g_ascii_isdigit (s[len + 1])
+          && memchr (s, 'e', len) == NULL && memchr (s, 'E', len) == NULL)
+        {
+          plain = g_strdup (s);
+          plain[len] = '.';
+          plain_q = hl_text_quote (plain, QUOTE_CHARS);
+          g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
+                       "“%s”: the decimal mark here is a point, not a comma; write “%s”", quoted, plain_q);
+          return TRUE;
+        }
+    }
+  return FALSE;
+}
+
+static void
+set_unknown_unit (GError        **error,
+                  HlQuantityKind  kind,
+                  const char     *unit_text)
+{
+  g_autofree char *known = g_strjoinv (", ", (char **) hl_unit_names (kind));
+  g_autofree char *quoted = hl_text_quote (unit_text, QUOTE_CHARS);
+  const char *slip;
+
+  if (kind == HL_KIND_RATIO)
+    {
+      g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
+                   "“%s” is not expected here: this value is a plain number", quoted);
+      return;
+    }
+  slip = case_slip (kind, unit_text);
+  if (slip != NULL)
+    g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
+                 "unknown unit “%s”: the case of a unit symbol matters, did you mean “%s”? "
+                 "(use one of %s)", quoted, slip, known);
+  else
+    g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
+                 "unknown unit “%s” (use one of %s)", quoted, known);
 }
 
 gboolean
@@ -273,8 +504,11 @@ hl_units_parse (const char     *text,
       g_set_error_literal (error, HL_UNITS_ERROR, HL_UNITS_ERROR_EMPTY, "no value given");
       return FALSE;
     }
+  if (refuse_grouping (stripped, decimal_comma, error))
+    return FALSE;
   len = scan_number (stripped, separator);
-  /* accept a point even with a comma locale: engineers paste both */
+  /* accept a point even with a comma locale: engineers paste both (where
+   * it could be a group mark, refuse_grouping() has refused already) */
   if (decimal_comma && (len == 0 || stripped[len] == '.'))
     {
       separator = '.';
@@ -282,8 +516,10 @@ hl_units_parse (const char     *text,
     }
   if (len == 0)
     {
+      g_autofree char *quoted = hl_text_quote (stripped, QUOTE_CHARS);
+
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                   "“%s” does not start with a number", stripped);
+                   "“%s” does not start with a number", quoted);
       return FALSE;
     }
   unit_text = stripped + len;
@@ -300,14 +536,7 @@ hl_units_parse (const char     *text,
     canonical = hl_unit_canonical (kind, unit_text);
   if (canonical == NULL)
     {
-      g_autofree char *known = g_strjoinv (", ", (char **) hl_unit_names (kind));
-
-      if (kind == HL_KIND_RATIO)
-        g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
-                     "“%s” is not expected here: this value is a plain number", unit_text);
-      else
-        g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
-                     "unknown unit “%s” (use one of %s)", unit_text, known);
+      set_unknown_unit (error, kind, unit_text);
       return FALSE;
     }
   if (!convert_number (stripped, len, separator, value, error))
@@ -317,25 +546,77 @@ hl_units_parse (const char     *text,
   return TRUE;
 }
 
+/* Plain decimals for 1e-6 <= |v| < 1e15: the magnitudes of lengths in
+ * metres and pressures in pascals a file holds read and diff better as
+ * "2000" than as "2e+03"; beyond them the exponent is shorter and
+ * clearer ("1e-320"). */
+#define PLAIN_MIN_EXPONENT (-6)
+#define PLAIN_MAX_EXPONENT 14
+
+/* @sci is "[-]d[.ddd]e±X" as printf's %e writes it; the same decimal
+ * number without the exponent, so it reads back to the same double. */
+static char *
+plain_from_scientific (const char *sci)
+{
+  GString *out = g_string_new (NULL);
+  GString *digits = g_string_new (NULL);
+  const char *e = strchr (sci, 'e');
+  int exponent = (int) g_ascii_strtoll (e + 1, NULL, 10);
+  const char *p = sci;
+
+  if (*p == '-')
+    g_string_append_c (out, *p++);
+  for (; p < e; p++)
+    if (g_ascii_isdigit (*p))
+      g_string_append_c (digits, *p);
+  if (exponent >= 0)
+    {
+      gsize int_len = (gsize) exponent + 1;
+
+      for (gsize i = 0; i < int_len; i++)
+        g_string_append_c (out, i < digits->len ? digits->str[i] : '0');
+      if (digits->len > int_len)
+        {
+          g_string_append_c (out, '.');
+          g_string_append (out, digits->str + int_len);
+        }
+    }
+  else
+    {
+      g_string_append (out, "0.");
+      for (int i = 0; i < -exponent - 1; i++)
+        g_string_append_c (out, '0');
+      g_string_append (out, digits->str);
+    }
+  g_string_free (digits, TRUE);
+  return g_string_free (out, FALSE);
+}
+
 char *
 hl_format_exact (double value)
 {
   char buf[G_ASCII_DTOSTR_BUF_SIZE];
+  int exponent;
 
   if (!isfinite (value))
     return g_strdup ("n/a");
   if (value == 0.0)
     return g_strdup ("0");
+  /* fewest significant digits that read back exactly (at most 17,
+   * IEEE 754-2008 §5.12.2) */
   for (int digits = 1; digits <= 17; digits++)
     {
       char fmt[8];
 
-      g_snprintf (fmt, sizeof fmt, "%%.%dg", digits);
+      g_snprintf (fmt, sizeof fmt, "%%.%de", digits - 1);
       g_ascii_formatd (buf, sizeof buf, fmt, value);
       if (g_ascii_strtod (buf, NULL) == value)
         break;
     }
-  return g_strdup (buf);
+  exponent = (int) g_ascii_strtoll (strchr (buf, 'e') + 1, NULL, 10);
+  if (exponent < PLAIN_MIN_EXPONENT || exponent > PLAIN_MAX_EXPONENT)
+    return g_strdup (buf);
+  return plain_from_scientific (buf);
 }
 
 static char *

@@ -36,12 +36,15 @@ typedef enum
 GQuark        hl_units_error_quark      (void);
 
 /* Factor to SI (m, Pa, fraction) of @unit for @kind, or 0 when unknown.
- * Lookup is exact first, then case-insensitive, and accepts aliases
- * ("N/mm^2", "inch"). */
+ * Symbols match exactly, case included ("MPa" yes, "mPa" and "mpa" no:
+ * NIST SP 811 §6), and so do the listed alternative spellings ("N/mm^2",
+ * "N/mm²", "PSI", "\"" for inch); unit names are words and match in any
+ * case ("inch", "Metre"). */
 double        hl_unit_factor            (HlQuantityKind kind,
                                          const char    *unit);
 
-/* Canonical spelling of @unit ("n/mm^2" -> "N/mm2"), or NULL when unknown. */
+/* Canonical symbol of @unit ("N/mm^2" -> "N/mm2", "Inch" -> "in"), or
+ * NULL when unknown; the same matching as hl_unit_factor(). */
 const char   *hl_unit_canonical         (HlQuantityKind kind,
                                          const char    *unit);
 
@@ -53,6 +56,15 @@ const char   *hl_unit_default           (HlQuantityKind kind,
 
 /* Parses "12 bar", "0.5in", "1.5e3 mm", "7,5 MPa" (with @decimal_comma).
  * A bare number takes @fallback_unit.  Rejects hex, inf, nan, overflow.
+ * Digit grouping is refused in both locales, with the accepted forms in
+ * the message: grouping is 1-3 leading digits (the first not 0), then
+ * one or more groups of a mark ('.', ',' or a space) and exactly three
+ * digits, then the end, a unit or a decimal part.  With a decimal point
+ * a comma is never a decimal mark ("1,500" and "7,5" are refused); with
+ * a decimal comma a pasted point still reads as a decimal point ("0.5",
+ * "7.25", "1.5000", "1.500e3") except where it could group ("1.500",
+ * "1.500,5", "1.500.000"), and "1,500.5" is refused as English grouping.
+ * Messages quote at most 40 characters of @text.
  * On success stores the number as typed in @value and the canonical unit
  * in @unit_out (static string). */
 gboolean      hl_units_parse            (const char     *text,
@@ -68,7 +80,9 @@ gboolean      hl_parse_number           (const char *text,
                                          double     *value,
                                          GError    **error);
 
-/* Shortest C-locale text that reads back to exactly @value. */
+/* C-locale text with the fewest significant digits that reads back to
+ * exactly @value: a plain decimal for 1e-6 <= |v| < 1e15 ("2000",
+ * "0.0125"), printf's exponent form beyond ("1e-320", "1e+22"). */
 char         *hl_format_exact           (double value);
 
 /* @value with @significant digits, C locale, no exponent for

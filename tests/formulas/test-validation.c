@@ -8,6 +8,17 @@
  * isotropic solid lies in (-1, 0.5) (Timoshenko & Goodier, Theory of
  * Elasticity); a weld joint efficiency is in (0, 1] (ASME VIII-1 UW-12);
  * the corrosion allowance is part of the wall, so it is less than it.
+ * Physical lower bounds (src/core/hl-shell-check.c names each reason):
+ * weld joint efficiencies tabulate from 0.45 (ASME VIII-1 Table UW-12,
+ * from memory), ligament efficiencies to about 0.2 (from memory), so
+ * 0.1 is the floor; a capillary bore of 0.1 mm (from memory) is the
+ * smallest; a wall under 0.01 mm is a foil (bellows plies 0.1 mm,
+ * diaphragms 0.025 mm, from memory), new or corroded; the outer radius
+ * stays within 1000 bore radii (thick high-pressure parts run to k of 3
+ * to 10, common practice); elastomers (about 1 MPa) bound the modulus
+ * from below and diamond (about 1 100 GPa, from memory) from above; lead
+ * (about 5 MPa yield, from memory) bounds the strength.  A name is one
+ * line: a control character in it could forge a line of the summary.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -87,6 +98,39 @@ MUTATION (ej_inf, in->joint_efficiency = INFINITY)
 MUTATION (tol_nan, in->thin_tolerance.value = NAN)
 MUTATION (tol_negative, in->thin_tolerance.value = -5)
 MUTATION (tol_unit, g_strlcpy (in->thin_tolerance.unit, "mm", sizeof in->thin_tolerance.unit))
+MUTATION (ej_subnormal, in->joint_efficiency = 1e-320)
+MUTATION (ej_low, in->joint_efficiency = 0.05)
+/* corrosion hid the pin hole: the corroded bore is 100 m, the new one
+ * 1 nm, and only the corroded wall was checked */
+MUTATION (nm_bore, in->size = hl_quantity_make (2e-9, "m");
+          in->wall_thickness = hl_quantity_make (200, "m");
+          in->corrosion_allowance = hl_quantity_make (100, "m"))
+MUTATION (bore_small, in->size = hl_quantity_make (0.05, "mm"))
+MUTATION (bore_small_outer, in->size_kind = HL_SIZE_OUTER_DIAMETER;
+          in->size = hl_quantity_make (20.05, "mm");
+          in->wall_thickness = hl_quantity_make (10, "mm");
+          in->corrosion_allowance = hl_quantity_make (0, "mm"))
+MUTATION (t_foil, in->wall_thickness = hl_quantity_make (0.005, "mm");
+          in->corrosion_allowance = hl_quantity_make (0, "mm"))
+MUTATION (t_corroded_foil, in->wall_thickness = hl_quantity_make (10, "mm");
+          in->corrosion_allowance = hl_quantity_make (9.995, "mm"))
+MUTATION (ratio_new_wall, in->size = hl_quantity_make (2, "mm");
+          in->wall_thickness = hl_quantity_make (1500, "mm");
+          in->corrosion_allowance = hl_quantity_make (2, "mm"))
+MUTATION (c_subnormal, in->corrosion_allowance = hl_quantity_make (1e-320, "m"))
+MUTATION (pi_subnormal, in->internal_pressure = hl_quantity_make (1e-320, "Pa"))
+MUTATION (pi_huge, in->internal_pressure = hl_quantity_make (20, "GPa"))
+MUTATION (po_tiny, in->external_pressure = hl_quantity_make (1e-9, "Pa"))
+MUTATION (e_soft, in->material.elastic_modulus = hl_quantity_make (0.5, "MPa"))
+MUTATION (e_stiff, in->material.elastic_modulus = hl_quantity_make (5000, "GPa"))
+MUTATION (sy_weak, in->material.yield_strength = hl_quantity_make (0.5, "MPa"))
+MUTATION (sy_strong, in->material.yield_strength = hl_quantity_make (20, "GPa"))
+MUTATION (s_low, in->material.allowable_stress = hl_quantity_make (0.05, "MPa"))
+MUTATION (tol_subnormal, in->thin_tolerance = hl_quantity_make (1e-320, "%"))
+MUTATION (name_newline, g_strlcpy (in->name, "R-7\nvon_mises_max = 1 MPa", sizeof in->name))
+MUTATION (name_cr, g_strlcpy (in->name, "R-7\r", sizeof in->name))
+MUTATION (material_name_tab, g_strlcpy (in->material.name, "Steel\t42", sizeof in->material.name))
+MUTATION (material_name_c1, g_strlcpy (in->material.name, "Steel \xc2\x85", sizeof in->material.name))
 
 static const BadCase bad_cases[] = {
   { "size NaN", size_nan, "inner-diameter", NULL },
@@ -145,6 +189,28 @@ static const BadCase bad_cases[] = {
   { "tolerance NaN", tol_nan, "thin-tolerance", NULL },
   { "tolerance negative", tol_negative, "thin-tolerance", NULL },
   { "tolerance in mm", tol_unit, "thin-tolerance", NULL },
+  { "joint efficiency 1e-320", ej_subnormal, "joint-efficiency", NULL },
+  { "joint efficiency 0.05", ej_low, "joint-efficiency", NULL },
+  { "1 nm bore in a 100 m wall", nm_bore, "wall-thickness", "inner-diameter" },
+  { "bore 0.05 mm", bore_small, "inner-diameter", NULL },
+  { "bore 0.05 mm from the outside", bore_small_outer, "wall-thickness", "outer-diameter" },
+  { "wall 0.005 mm", t_foil, "wall-thickness", NULL },
+  { "corroded wall 0.005 mm", t_corroded_foil, "corrosion-allowance", "wall-thickness" },
+  { "new wall over 1000 bore radii", ratio_new_wall, "wall-thickness", NULL },
+  { "corrosion 1e-320 m", c_subnormal, "corrosion-allowance", NULL },
+  { "internal pressure 1e-320 Pa", pi_subnormal, "internal-pressure", NULL },
+  { "internal pressure 20 GPa", pi_huge, "internal-pressure", NULL },
+  { "external pressure 1e-9 Pa", po_tiny, "external-pressure", NULL },
+  { "modulus 0.5 MPa", e_soft, "elastic-modulus", NULL },
+  { "modulus 5000 GPa", e_stiff, "elastic-modulus", NULL },
+  { "yield 0.5 MPa", sy_weak, "yield-strength", NULL },
+  { "yield 20 GPa", sy_strong, "yield-strength", NULL },
+  { "allowable 0.05 MPa", s_low, "allowable-stress", NULL },
+  { "tolerance 1e-320 %", tol_subnormal, "thin-tolerance", NULL },
+  { "shell name with a newline", name_newline, "name", NULL },
+  { "shell name with a carriage return", name_cr, "name", NULL },
+  { "material name with a tab", material_name_tab, "name", NULL },
+  { "material name with a C1 control", material_name_c1, "name", NULL },
 };
 
 static void
@@ -245,9 +311,10 @@ test_valid_edges (void)
 {
   /* Values at the edge of the valid ranges are accepted (common practice:
    * auxetic foams have nu near -1, rubber near 0.5; an unwelded part may
-   * take Ej = 1; zero pressures and allowance mean "none"). */
+   * take Ej = 1, 0.1 is the lowest accepted; zero pressures and allowance
+   * mean "none"). */
   static const double nus[] = { 0.4999, -0.999, 0.0 };
-  static const double ejs[] = { 1.0, 1e-3 };
+  static const double ejs[] = { 1.0, 0.1 };
 
   for (guint i = 0; i < G_N_ELEMENTS (nus); i++)
     for (guint j = 0; j < G_N_ELEMENTS (ejs); j++)
@@ -262,6 +329,43 @@ test_valid_edges (void)
         problems = hl_shell_inputs_check (&in);
         g_assert_cmpuint (problems->len, ==, 0);
       }
+}
+
+static void
+test_bounds_named (void)
+{
+  /* DESIGN.md §7: the message names the bound, so the user knows what
+   * to type (the bounds and their sources: the head of this file) */
+  static const struct { Mutate mutate; const char *bound; } cases[] = {
+    { ej_low, "0.1" },
+    { ej_subnormal, "0.1" },
+    { bore_small, "0.1 mm" },
+    { bore_small_outer, "0.1 mm" },
+    { t_foil, "0.01 mm" },
+    { t_corroded_foil, "0.01 mm" },
+    { ratio_new_wall, "1000" },
+    { pi_huge, "10 GPa" },
+    { pi_subnormal, "1 µPa" },
+    { e_soft, "1 MPa" },
+    { e_stiff, "2000 GPa" },
+    { sy_weak, "1 MPa" },
+    { s_low, "0.1 MPa" },
+    { tol_subnormal, "0.001 %" },
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      HlShellInputs in = hl_shell_inputs_default ();
+      g_autoptr(GPtrArray) problems = NULL;
+      g_autofree char *joined = NULL;
+
+      cases[i].mutate (&in);
+      problems = hl_shell_inputs_check (&in);
+      joined = hl_problems_join (problems);
+      g_test_message ("%s", joined);
+      g_assert_cmpuint (problems->len, ==, 1);
+      g_assert_nonnull (strstr (joined, cases[i].bound));
+    }
 }
 
 static void
@@ -339,11 +443,12 @@ scan_solution (const HlSolution *s,
 static void
 test_extreme_valid (void)
 {
-  /* radius ratios 1.000001 and 1000 (common practice: from foil-thin to
-   * nearly solid), each size kind, every form and end, pressures near
+  /* radius ratios 1.00002 and 1000 (common practice: from foil-thin to
+   * nearly solid; a wall of 20 µm on a 1 m radius, 18 µm corroded, is
+   * just above the 0.01 mm floor), each size kind, every form and end, pressures near
    * zero, ordinary, external only, both and none, with and without a
    * corrosion allowance. */
-  static const double ks[] = { 1.000001, 1.01, 2, 1000 };
+  static const double ks[] = { 1.00002, 1.01, 2, 1000 };
   static const double loads[][2] = { { 1e-6, 0 }, { 10e6, 0 }, { 0, 10e6 }, { 20e6, 5e6 }, { 0, 0 }, { 1e-6, 1e-6 } };
   static const HlSizeKind kinds[] = { HL_SIZE_INNER_DIAMETER, HL_SIZE_OUTER_DIAMETER, HL_SIZE_INNER_RADIUS, HL_SIZE_OUTER_RADIUS };
   guint n = 0;
@@ -388,7 +493,7 @@ test_near_allowable (void)
   /* Just below the Lamé maximum pressure nothing warns of the allowable
    * being exceeded; just above, it does (DESIGN.md §3 warnings) — and
    * both give finite results everywhere. */
-  static const double ks[] = { 1.000001, 1.5, 1000 };
+  static const double ks[] = { 1.00002, 1.5, 1000 };
 
   for (guint f = 0; f < 4; f++)
     for (guint j = 0; j < G_N_ELEMENTS (ks); j++)
@@ -466,6 +571,7 @@ main (int   argc,
     }
   g_test_add_func ("/validation/several-at-once", test_several);
   g_test_add_func ("/validation/valid-edges", test_valid_edges);
+  g_test_add_func ("/validation/bounds-named", test_bounds_named);
   g_test_add_func ("/validation/check-quantity", test_check_quantity);
   g_test_add_func ("/validation/extreme-valid", test_extreme_valid);
   g_test_add_func ("/validation/near-allowable", test_near_allowable);

@@ -89,7 +89,7 @@ test_parse_accepts (void)
     { "0.5 in", HL_KIND_LENGTH, FALSE, 0.5, "in" },
     { "1.5e3 mm", HL_KIND_LENGTH, FALSE, 1500, "mm" },
     { "  7 MPa  ", HL_KIND_STRESS, FALSE, 7, "MPa" },
-    { "7 mpa", HL_KIND_STRESS, FALSE, 7, "MPa" },
+    { "3 Inch", HL_KIND_LENGTH, FALSE, 3, "in" },   /* a unit name is a word: any case */
     { "210 N/mm^2", HL_KIND_STRESS, FALSE, 210, "N/mm2" },
     { "210 N/mm\xc2\xb2", HL_KIND_STRESS, FALSE, 210, "N/mm2" },
     { "3 inch", HL_KIND_LENGTH, FALSE, 3, "in" },
