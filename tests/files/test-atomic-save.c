@@ -16,18 +16,12 @@
 
 #include "hl-atomic-file.h"
 #include "hl-project-file.h"
+#include "hl-save-test-util.h"
 #include "hl-test-program.h"
 
-#include <errno.h>
-#include <fcntl.h>
 #include <glib/gstdio.h>
-#include <linux/fs.h>
-#include <signal.h>
 #include <string.h>
-#include <sys/ioctl.h>
-#include <sys/resource.h>
 #include <sys/stat.h>
-#include <sys/wait.h>
 #include <unistd.h>
 #include <utime.h>
 
@@ -50,31 +44,11 @@ setup (Fixture      *f,
   g_assert_true (g_file_set_contents (f->target, OLD_TEXT, -1, NULL));
 }
 
-static gboolean
-set_immutable (const char *path,
-               gboolean    on)
-{
-  int fd = open (path, O_RDONLY);
-  int flags = 0;
-  int rc = -1;
-
-  if (fd >= 0 && ioctl (fd, FS_IOC_GETFLAGS, &flags) == 0)
-    {
-      flags = on ? (flags | FS_IMMUTABLE_FL) : (flags & ~FS_IMMUTABLE_FL);
-      rc = ioctl (fd, FS_IOC_SETFLAGS, &flags);
-    }
-  if (fd >= 0)
-    close (fd);
-  return rc == 0;
-}
-
 static void
 teardown (Fixture      *f,
           gconstpointer data)
 {
-  if (f->immutable)
-    set_immutable (f->dir, FALSE);
-  g_chmod (f->dir, 0700);
+  hl_save_test_open_folder (f->dir, f->immutable);
   hl_test_remove_tree (f->dir);
   g_free (f->dir);
   g_free (f->target);
@@ -89,26 +63,6 @@ assert_text (const char *path,
 
   g_assert_nonnull (bytes);
   g_assert_cmpmem (g_bytes_get_data (bytes, NULL), g_bytes_get_size (bytes), expected, strlen (expected));
-}
-
-static guint
-count_entries (const char *dir_path)
-{
-  g_autoptr(GDir) dir = g_dir_open (dir_path, 0, NULL);
-  guint n = 0;
-
-  while (dir != NULL && g_dir_read_name (dir) != NULL)
-    n++;
-  return n;
-}
-
-static GStatBuf
-stat_of (const char *path)
-{
-  GStatBuf st;
-
-  g_assert_cmpint (g_stat (path, &st), ==, 0);
-  return st;
 }
 
 /* A shared project file (group-writable) or a private one (owner only)
@@ -126,10 +80,10 @@ test_keeps_mode (Fixture      *f,
       g_assert_cmpint (g_chmod (f->target, modes[i]), ==, 0);
       g_assert_true (hl_atomic_write (f->target, NEW_TEXT, -1, &error));
       g_assert_no_error (error);
-      g_assert_cmpuint (stat_of (f->target).st_mode & 07777, ==, modes[i]);
+      g_assert_cmpuint (hl_save_test_stat (f->target).st_mode & 07777, ==, modes[i]);
     }
   assert_text (f->target, NEW_TEXT);
-  g_assert_cmpuint (count_entries (f->dir), ==, 1);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 1);
 }
 
 /* Owner and group come back as they were (ids chosen at random; only
@@ -148,7 +102,7 @@ test_keeps_owner_and_group (Fixture      *f,
     }
   g_assert_true (hl_atomic_write (f->target, NEW_TEXT, -1, &error));
   g_assert_no_error (error);
-  st = stat_of (f->target);
+  st = hl_save_test_stat (f->target);
   g_assert_cmpuint (st.st_uid, ==, 4321);
   g_assert_cmpuint (st.st_gid, ==, 4322);
 }
@@ -167,8 +121,8 @@ test_new_file_follows_umask (Fixture      *f,
   umask (022);
   g_assert_true (hl_atomic_write (other, NEW_TEXT, -1, NULL));
   umask (old);
-  g_assert_cmpuint (stat_of (fresh).st_mode & 0777, ==, 0600);
-  g_assert_cmpuint (stat_of (other).st_mode & 0777, ==, 0644);
+  g_assert_cmpuint (hl_save_test_stat (fresh).st_mode & 0777, ==, 0600);
+  g_assert_cmpuint (hl_save_test_stat (other).st_mode & 0777, ==, 0644);
 }
 
 static void
@@ -210,8 +164,8 @@ test_read_only_refused (Fixture      *f,
   g_assert_false (hl_project_save (project, f->target, &error));
   g_assert_nonnull (strstr (error->message, "read-only"));
   assert_text (f->target, OLD_TEXT);
-  g_assert_cmpuint (stat_of (f->target).st_mode & 07777, ==, 0444);
-  g_assert_cmpuint (count_entries (f->dir), ==, 1);
+  g_assert_cmpuint (hl_save_test_stat (f->target).st_mode & 07777, ==, 0444);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 1);
 }
 
 /* Two names for one file: a rename would give only one of them the new
@@ -226,14 +180,14 @@ test_hard_links (Fixture      *f,
   ino_t inode;
 
   g_assert_cmpint (link (f->target, second), ==, 0);
-  inode = stat_of (f->target).st_ino;
+  inode = hl_save_test_stat (f->target).st_ino;
   expect_refused (f->target, HL_ATOMIC_ERROR_HARD_LINKS, "hard links");
   g_assert_false (hl_atomic_check_replace (f->target, &error));
   g_assert_error (error, HL_ATOMIC_ERROR, HL_ATOMIC_ERROR_HARD_LINKS);
   g_clear_error (&error);
   assert_text (f->target, OLD_TEXT);
   assert_text (second, OLD_TEXT);
-  g_assert_cmpuint (count_entries (f->dir), ==, 2);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 2);
 
   /* a permission for another name does not count */
   hl_atomic_permit_in_place (second);
@@ -242,9 +196,9 @@ test_hard_links (Fixture      *f,
   g_assert_true (hl_atomic_write (f->target, NEW_TEXT, -1, &error));
   g_assert_no_error (error);
   assert_text (second, NEW_TEXT);
-  g_assert_cmpuint (stat_of (f->target).st_ino, ==, inode);
-  g_assert_cmpuint (stat_of (f->target).st_nlink, ==, 2);
-  g_assert_cmpuint (count_entries (f->dir), ==, 2);
+  g_assert_cmpuint (hl_save_test_stat (f->target).st_ino, ==, inode);
+  g_assert_cmpuint (hl_save_test_stat (f->target).st_nlink, ==, 2);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 2);
   /* in place, a shorter text leaves no tail of the longer one */
   g_assert_true (hl_atomic_write (f->target, "<p/>", -1, &error));
   assert_text (second, "<p/>");
@@ -256,23 +210,10 @@ static void
 test_no_temp_folder (Fixture      *f,
                      gconstpointer data)
 {
-  g_autofree char *probe = g_build_filename (f->dir, "probe", NULL);
   g_autoptr(GError) error = NULL;
-  int fd;
 
-  g_assert_cmpint (g_chmod (f->dir, 0555), ==, 0);
-  fd = g_open (probe, O_WRONLY | O_CREAT | O_EXCL, 0644);
-  if (fd >= 0)
-    {
-      close (fd);
-      g_unlink (probe);
-      if (!set_immutable (f->dir, TRUE))
-        {
-          g_test_skip ("running as root, and the immutable flag is not available here");
-          return;
-        }
-      f->immutable = TRUE;
-    }
+  if (!hl_save_test_close_folder (f->dir, &f->immutable))
+    return;
   g_assert_false (hl_atomic_check_replace (f->target, &error));
   g_assert_error (error, HL_ATOMIC_ERROR, HL_ATOMIC_ERROR_NO_TEMP);
   g_clear_error (&error);
@@ -283,35 +224,10 @@ test_no_temp_folder (Fixture      *f,
   g_assert_true (hl_atomic_write (f->target, NEW_TEXT, -1, &error));
   g_assert_no_error (error);
   assert_text (f->target, NEW_TEXT);
-  g_assert_cmpuint (count_entries (f->dir), ==, 1);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 1);
   /* taken back: refused again */
   hl_atomic_permit_in_place (NULL);
   expect_refused (f->target, HL_ATOMIC_ERROR_NO_TEMP, "cannot write");
-}
-
-/* A save killed in the middle: the child may write only 1 KiB
- * (RLIMIT_FSIZE), so the kernel kills it with SIGXFSZ while it writes
- * its temporary (setrlimit(2)).  Returns the dead writer's pid. */
-static pid_t
-killed_save (const char *path)
-{
-  pid_t pid = fork ();
-  int status = 0;
-
-  g_assert_cmpint (pid, >=, 0);
-  if (pid == 0)
-    {
-      struct rlimit limit = { 1024, 1024 };
-      g_autofree char *big = g_strnfill (64 * 1024, 'x');
-
-      setrlimit (RLIMIT_FSIZE, &limit);
-      hl_atomic_write (path, big, -1, NULL);
-      _exit (0);
-    }
-  g_assert_cmpint (waitpid (pid, &status, 0), ==, pid);
-  g_assert_true (WIFSIGNALED (status));
-  g_assert_cmpint (WTERMSIG (status), ==, SIGXFSZ);
-  return pid;
 }
 
 static void
@@ -340,7 +256,7 @@ static void
 test_leftovers (Fixture      *f,
                 gconstpointer data)
 {
-  pid_t dead = killed_save (f->target);
+  pid_t dead = hl_save_test_killed_save (f->target);
   g_autofree char *dead_temp = NULL;
   g_autofree char *old_live = g_strdup_printf (".project.hoop.hoopline-save-%d-OldOne", (int) getpid ());
   g_autofree char *new_live = g_strdup_printf (".project.hoop.hoopline-save-%d-NewOne", (int) getpid ());
@@ -353,7 +269,7 @@ test_leftovers (Fixture      *f,
 
   /* the killed save left its temporary; the project is untouched */
   assert_text (f->target, OLD_TEXT);
-  g_assert_cmpuint (count_entries (f->dir), ==, 2);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 2);
   {
     g_autoptr(GDir) dir = g_dir_open (f->dir, 0, NULL);
     const char *name;
@@ -403,8 +319,8 @@ test_symlink_keeps_mode (Fixture      *f,
   g_assert_true (hl_atomic_write (link_path, NEW_TEXT, -1, NULL));
   g_assert_true (g_file_test (link_path, G_FILE_TEST_IS_SYMLINK));
   assert_text (f->target, NEW_TEXT);
-  g_assert_cmpuint (stat_of (f->target).st_mode & 07777, ==, 0600);
-  g_assert_cmpuint (count_entries (f->dir), ==, 2);
+  g_assert_cmpuint (hl_save_test_stat (f->target).st_mode & 07777, ==, 0600);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 2);
 }
 
 int
