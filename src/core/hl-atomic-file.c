@@ -1,5 +1,14 @@
 /* hl-atomic-file.c — write a file so that it is complete or not there at all
  *
+ * A save writes a temporary beside the target and renames it over the
+ * target (POSIX rename(2) replaces the name in one step).  The rename
+ * makes a new file, so the old one's owner, group and mode are copied
+ * onto the temporary first.  Where a rename would do harm — the file has
+ * other names that would keep the old content, or the folder takes no
+ * new files — the file can only be written in place, which a crash can
+ * cut short; that happens only with the caller's (the user's) consent,
+ * never by default.
+ *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
 #define G_LOG_DOMAIN "hl-atomic-file"
@@ -19,7 +28,6 @@
 #define LEFTOVER_SECONDS 10
 
 G_DEFINE_QUARK (hl-atomic-error-quark, hl_atomic_error)
-
 
 static void
 set_errno_error (GError    **error,

@@ -463,6 +463,32 @@ test_killed_save_leftover_cleaned (Fixture      *f,
 
 /* ---- SIGTERM and SIGINT ------------------------------------------- */
 
+/* reads the child's output until @line comes; FALSE after 60 s (a child
+ * under the sanitizers starts slowly) or at its end */
+static gboolean
+wait_for_line (int         fd,
+               const char *line)
+{
+  g_autoptr(GString) seen = g_string_new (NULL);
+  gint64 deadline = g_get_monotonic_time () + 60 * G_USEC_PER_SEC;
+
+  while (strstr (seen->str, line) == NULL)
+    {
+      GPollFD poll_fd = { fd, G_IO_IN | G_IO_HUP, 0 };
+      gint64 left = (deadline - g_get_monotonic_time ()) / 1000;
+      char buffer[256];
+      gssize n;
+
+      if (left <= 0 || g_poll (&poll_fd, 1, (int) left) <= 0)
+        return FALSE;
+      n = read (fd, buffer, sizeof buffer);
+      if (n <= 0)
+        return FALSE;
+      g_string_append_len (seen, buffer, n);
+    }
+  return TRUE;
+}
+
 /* Runs the program on @path with an edit, waits for the edit, signals
  * it; the run ends cleanly and leaves a copy holding the edit. */
 static void
@@ -476,10 +502,8 @@ signal_after_edit (const char *path,
   g_autoptr(GPtrArray) orphans = NULL;
   g_autoptr(HlProject) copy = NULL;
   const char *argv[] = { program, path, NULL };
-  char line[256] = "";
   GPid pid = 0;
   int out = -1, status = 0;
-  FILE *from_child;
 
   g_assert_nonnull (program);
   /* far past the test: only the signal can write the copy */
@@ -489,13 +513,15 @@ signal_after_edit (const char *path,
   if (!g_spawn_async_with_pipes (NULL, (char **) argv, env, G_SPAWN_DO_NOT_REAP_CHILD, NULL, NULL,
                                  &pid, NULL, &out, NULL, &error))
     g_error ("cannot start %s: %s", program, error->message);
-  from_child = fdopen (out, "r");
-  while (fgets (line, sizeof line, from_child) != NULL && strstr (line, "test edit applied") == NULL)
-    ;
-  g_assert_nonnull (strstr (line, "test edit applied"));
+  if (!wait_for_line (out, "test edit applied"))
+    {
+      kill (pid, SIGKILL);
+      waitpid (pid, &status, 0);
+      g_error ("the run never said that it had made the edit");
+    }
   g_assert_cmpint (kill (pid, signum), ==, 0);
   g_assert_cmpint (waitpid (pid, &status, 0), ==, pid);
-  fclose (from_child);
+  close (out);
   g_spawn_close_pid (pid);
   g_assert_true (WIFEXITED (status));
   g_assert_cmpint (WEXITSTATUS (status), ==, 0);
