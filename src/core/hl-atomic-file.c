@@ -459,6 +459,13 @@ hl_atomic_commit (const char *temp,
       set_read_only_error (error, path, why);
       return FALSE;
     }
+  /* the same rule as for a save: a rename would split the names */
+  if (exists && st.st_nlink > 1)
+    {
+      hl_atomic_abandon (temp);
+      set_hard_links_error (error, path, (guint) st.st_nlink);
+      return FALSE;
+    }
   fd = g_open (temp, O_RDONLY, 0);
   if (fd >= 0)
     {

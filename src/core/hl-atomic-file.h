@@ -63,7 +63,10 @@ gboolean hl_atomic_write_in_place (const char *path,
 void     hl_atomic_permit_in_place (const char *path);
 
 /* For writers that need a file name (cairo surfaces): a fresh temporary
- * name beside @path; then commit (rename over) or abandon (delete). */
+ * name beside @path; then commit (rename over) or abandon (delete).  The
+ * commit keeps owner, group and mode like hl_atomic_write and refuses a
+ * read-only or hard-linked target the same way (there is no writing in
+ * place here: the data is in the temporary). */
 char    *hl_atomic_temp_name    (const char *path);
 gboolean hl_atomic_commit       (const char *temp,
                                  const char *path,

@@ -306,6 +306,45 @@ test_leftovers (Fixture      *f,
   assert_text (f->target, OLD_TEXT);
 }
 
+/* A writer that names its own temporary (the figure export) gets the
+ * same rules at the commit: mode kept, read-only and hard-linked
+ * targets refused, the temporary gone either way. */
+static void
+test_commit_same_rules (Fixture      *f,
+                        gconstpointer data)
+{
+  g_autofree char *second = g_build_filename (f->dir, "second-name.hoop", NULL);
+  g_autoptr(GError) error = NULL;
+  char *temp;
+
+  g_assert_cmpint (g_chmod (f->target, 0640), ==, 0);
+  temp = hl_atomic_temp_name (f->target);
+  g_assert_true (g_file_set_contents (temp, NEW_TEXT, -1, NULL));
+  g_assert_true (hl_atomic_commit (temp, f->target, &error));
+  g_assert_no_error (error);
+  g_free (temp);
+  assert_text (f->target, NEW_TEXT);
+  g_assert_cmpuint (hl_save_test_stat (f->target).st_mode & 07777, ==, 0640);
+
+  g_assert_cmpint (link (f->target, second), ==, 0);
+  temp = hl_atomic_temp_name (f->target);
+  g_assert_true (g_file_set_contents (temp, OLD_TEXT, -1, NULL));
+  g_assert_false (hl_atomic_commit (temp, f->target, &error));
+  g_assert_error (error, HL_ATOMIC_ERROR, HL_ATOMIC_ERROR_HARD_LINKS);
+  g_clear_error (&error);
+  g_free (temp);
+  g_assert_cmpint (g_unlink (second), ==, 0);
+
+  g_assert_cmpint (g_chmod (f->target, 0444), ==, 0);
+  temp = hl_atomic_temp_name (f->target);
+  g_assert_true (g_file_set_contents (temp, OLD_TEXT, -1, NULL));
+  g_assert_false (hl_atomic_commit (temp, f->target, &error));
+  g_assert_error (error, HL_ATOMIC_ERROR, HL_ATOMIC_ERROR_READ_ONLY);
+  g_free (temp);
+  assert_text (f->target, NEW_TEXT);
+  g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 1);
+}
+
 /* A symbolic link still points at the file it named, and that file
  * keeps its mode. */
 static void
@@ -338,6 +377,7 @@ main (int    argc,
   ADD ("/files/atomic/no-temp-folder", test_no_temp_folder);
   ADD ("/files/atomic/leftovers", test_leftovers);
   ADD ("/files/atomic/symlink-keeps-mode", test_symlink_keeps_mode);
+  ADD ("/files/atomic/commit-same-rules", test_commit_same_rules);
 #undef ADD
   return g_test_run ();
 }
