@@ -14,6 +14,9 @@
 #include "hl-window.h"
 
 #include <glib/gi18n.h>
+#include <glib-unix.h>
+#include <signal.h>
+#include <stdio.h>
 
 struct _HlApplication
 {
@@ -21,6 +24,7 @@ struct _HlApplication
 
   GSettings     *settings;
   gboolean       desktop_dark;   /* the desktop's own choice, kept when ours is off */
+  guint          signal_sources[2];
 };
 
 G_DEFINE_FINAL_TYPE (HlApplication, hl_application, GTK_TYPE_APPLICATION)
@@ -51,6 +55,23 @@ quit_activated (GSimpleAction *action,
   for (GList *l = windows; l != NULL; l = l->next)
     gtk_window_close (GTK_WINDOW (l->data));
   g_list_free (windows);
+}
+
+/* SIGTERM (logout, shutdown, kill) and SIGINT (Ctrl+C in a terminal)
+ * leave no time for questions: each window keeps its unsaved work as a
+ * crash-recovery copy, offered at the next start, and goes. */
+static gboolean
+on_quit_signal_cb (gpointer user_data)
+{
+  GApplication *application = G_APPLICATION (user_data);
+  GList *windows = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (application)));
+
+  for (GList *l = windows; l != NULL; l = l->next)
+    if (HL_IS_WINDOW (l->data))
+      hl_window_end_session (HL_WINDOW (l->data));
+  g_list_free (windows);
+  g_application_quit (application);
+  return G_SOURCE_CONTINUE;
 }
 
 static void
@@ -121,6 +142,8 @@ hl_application_startup (GApplication *application)
   hl_canvas_trace ("toolkit started");
 
   g_action_map_add_action_entries (G_ACTION_MAP (self), app_entries, G_N_ELEMENTS (app_entries), self);
+  self->signal_sources[0] = g_unix_signal_add (SIGTERM, on_quit_signal_cb, self);
+  self->signal_sources[1] = g_unix_signal_add (SIGINT, on_quit_signal_cb, self);
   for (guint i = 0; i < G_N_ELEMENTS (accels); i++)
     gtk_application_set_accels_for_action (GTK_APPLICATION (self), accels[i].action, accels[i].accels);
 
@@ -157,6 +180,9 @@ apply_test_edit (GtkWindow *window)
   document = hl_window_get_document (HL_WINDOW (window));
   p = hl_document_get_project (document);
   hl_document_set_info (document, title, p->engineer, p->description, p->display_units);
+  /* a test waits for this line before it signals the run */
+  printf ("hoopline: test edit applied\n");
+  fflush (stdout);
 }
 
 /* A file already open is shown again; otherwise it opens in an untouched
@@ -198,6 +224,8 @@ hl_application_dispose (GObject *object)
 {
   HlApplication *self = HL_APPLICATION (object);
 
+  for (guint i = 0; i < G_N_ELEMENTS (self->signal_sources); i++)
+    g_clear_handle_id (&self->signal_sources[i], g_source_remove);
   g_clear_object (&self->settings);
   G_OBJECT_CLASS (hl_application_parent_class)->dispose (object);
 }

@@ -52,11 +52,14 @@ hl_project_chooser_new (GtkWindow  *parent,
 
 GFile *
 hl_project_chooser_get_file (GtkNativeDialog *chooser,
-                             gboolean         save)
+                             gboolean         save,
+                             gboolean        *extension_added)
 {
   GFile *file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (chooser));
   g_autofree char *path = file != NULL ? g_file_get_path (file) : NULL;
 
+  if (extension_added != NULL)
+    *extension_added = FALSE;
   /* the file type is known by its extension */
   if (save && path != NULL && !g_str_has_suffix (path, ".hoop"))
     {
@@ -64,8 +67,28 @@ hl_project_chooser_get_file (GtkNativeDialog *chooser,
 
       g_object_unref (file);
       file = g_file_new_for_path (with);
+      if (extension_added != NULL)
+        *extension_added = TRUE;
     }
   return file;
+}
+
+GtkWidget *
+hl_save_question_new (GtkWindow  *parent,
+                      const char *question,
+                      const char *detail,
+                      const char *accept_label)
+{
+  GtkWidget *dialog = gtk_message_dialog_new (parent, GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
+                                              GTK_MESSAGE_WARNING, GTK_BUTTONS_NONE, "%s", question);
+
+  gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s", detail);
+  gtk_dialog_add_button (GTK_DIALOG (dialog), _("_Cancel"), GTK_RESPONSE_CANCEL);
+  gtk_widget_add_css_class (gtk_dialog_add_button (GTK_DIALOG (dialog), accept_label, GTK_RESPONSE_ACCEPT),
+                            "destructive-action");
+  /* Enter must not overwrite anything: the safe answer is the default */
+  gtk_dialog_set_default_response (GTK_DIALOG (dialog), GTK_RESPONSE_CANCEL);
+  return dialog;
 }
 
 GtkWidget *

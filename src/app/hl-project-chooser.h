@@ -14,9 +14,20 @@ GtkFileChooserNative *hl_project_chooser_new      (GtkWindow  *parent,
                                                    gboolean    save,
                                                    GFile      *current,
                                                    const char *title);
-/* The chosen file; a name saved without extension gets ".hoop". */
+/* The chosen file; a name saved without extension gets ".hoop", and
+ * then @extension_added (nullable) is TRUE: the chooser's own question
+ * about replacing a file was about the name without it. */
 GFile                *hl_project_chooser_get_file (GtkNativeDialog *chooser,
-                                                   gboolean         save);
+                                                   gboolean         save,
+                                                   gboolean        *extension_added);
+
+/* A question before a save writes over something: @question in bold,
+ * @detail below, Cancel (GTK_RESPONSE_CANCEL, the default) and
+ * @accept_label (GTK_RESPONSE_ACCEPT). */
+GtkWidget            *hl_save_question_new        (GtkWindow  *parent,
+                                                   const char *question,
+                                                   const char *detail,
+                                                   const char *accept_label);
 
 /* "Save changes to “@title”?" with Cancel, Discard (GTK_RESPONSE_REJECT)
  * and Save (GTK_RESPONSE_ACCEPT). */

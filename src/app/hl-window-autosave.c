@@ -111,3 +111,17 @@ hl_window_autosave_finish (HlWindow *self)
   hl_autosave_discard (self->autosave);
   g_clear_pointer (&self->autosave, hl_autosave_free);
 }
+
+void
+hl_window_autosave_keep (HlWindow *self)
+{
+  if (self->autosave == NULL || self->document == NULL || !hl_document_get_modified (self->document))
+    {
+      hl_window_autosave_finish (self);
+      return;
+    }
+  hl_window_autosave_now (self);
+  /* let go of the slot without discarding it: its writer is about to be
+   * gone, which makes it a copy to offer */
+  g_clear_pointer (&self->autosave, hl_autosave_free);
+}

@@ -2,7 +2,10 @@
  * question
  *
  * Anything that would drop unsaved work goes through ask_unsaved_then(),
- * which runs the command at once or after the user's answer.
+ * which runs the command at once or after the user's answer.  A save
+ * goes through save_from(), which asks before it writes over anything
+ * the user may not mean to lose.  The open file is watched, so that a
+ * version saved by someone else is neither missed nor silently lost.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -11,10 +14,21 @@
 #include "hl-config.h"
 #include "hl-window-private.h"
 #include "hl-project-chooser.h"
+#include "hl-atomic-file.h"
 
 #include <glib/gi18n.h>
 
 static void save_as (HlWindow *self);
+
+/* The questions a save may need, in the order they are asked. */
+enum
+{
+  SAVE_STEP_NAME,      /* the chooser asked about the name without ".hoop" */
+  SAVE_STEP_NEWER,     /* someone else saved the file since we read it */
+  SAVE_STEP_IN_PLACE,  /* it cannot be replaced, only written over */
+  SAVE_STEP_WRITE,
+  SAVE_STEP_WRITE_IN_PLACE,
+};
 
 /* ---- unsaved work ------------------------------------------------- */
 
@@ -29,13 +43,29 @@ run_pending (HlWindow *self)
     k (self, file);
 }
 
+static void
+drop_pending (HlWindow *self)
+{
+  self->pending = NULL;
+  g_clear_object (&self->pending_file);
+  g_clear_object (&self->save_file);
+}
+
 static gboolean
 save_now (HlWindow *self,
-          GFile    *file)
+          GFile    *file,
+          gboolean  in_place)
 {
   g_autoptr(GError) error = NULL;
+  gboolean saved;
 
-  if (!hl_document_save (self->document, file, &error))
+  /* the user's yes holds for this one save */
+  if (in_place)
+    hl_atomic_permit_in_place (g_file_peek_path (file));
+  saved = hl_document_save (self->document, file, &error);
+  if (in_place)
+    hl_atomic_permit_in_place (NULL);
+  if (!saved)
     {
       GtkWidget *dialog = gtk_message_dialog_new (GTK_WINDOW (self), GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
                                                   GTK_MESSAGE_ERROR, GTK_BUTTONS_CLOSE,
@@ -45,12 +75,145 @@ save_now (HlWindow *self,
       g_signal_connect (dialog, "response", G_CALLBACK (gtk_window_destroy), NULL);
       gtk_window_present (GTK_WINDOW (dialog));
       /* a failed save never continues into close or open */
-      self->pending = NULL;
-      g_clear_object (&self->pending_file);
+      drop_pending (self);
       return FALSE;
     }
   hl_recent_menu_remember (hl_document_get_file (self->document));
+  /* what is on disk now is ours: its change notice must not come */
+  hl_window_watch_file (self, NULL);
   return TRUE;
+}
+
+static char *
+query_etag (GFile *file)
+{
+  g_autoptr(GFileInfo) info = g_file_query_info (file, G_FILE_ATTRIBUTE_ETAG_VALUE,
+                                                 G_FILE_QUERY_INFO_NONE, NULL, NULL);
+
+  return info != NULL ? g_strdup (g_file_info_get_etag (info)) : NULL;
+}
+
+/* the file we read was saved again by someone else (a file that is gone
+ * has nothing to lose) */
+static gboolean
+changed_on_disk (HlWindow *self,
+                 GFile    *file)
+{
+  g_autofree char *now = NULL;
+
+  if (self->disk_etag == NULL || !hl_window_shows_file (self, file))
+    return FALSE;
+  now = query_etag (file);
+  return now != NULL && g_strcmp0 (now, self->disk_etag) != 0;
+}
+
+static void save_from (HlWindow *self,
+                       GFile    *file,
+                       int       step);
+
+static void
+on_save_question_response_cb (GtkDialog *dialog,
+                              int        response,
+                              HlWindow  *self)
+{
+  g_autoptr(GFile) file = g_steal_pointer (&self->save_file);
+
+  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
+  gtk_window_destroy (GTK_WINDOW (dialog));
+  self->question = NULL;
+  if (response == GTK_RESPONSE_ACCEPT)
+    save_from (self, file, self->save_step);
+  else
+    drop_pending (self);   /* nothing written; a close or open waits too */
+}
+
+/* asks @question; on yes the save of @file goes on at @next */
+static void
+ask_before_saving (HlWindow   *self,
+                   GFile      *file,
+                   int         next,
+                   const char *question,
+                   const char *detail,
+                   const char *accept_label)
+{
+  GtkWidget *dialog = hl_save_question_new (GTK_WINDOW (self), question, detail, accept_label);
+
+  g_set_object (&self->save_file, file);
+  self->save_step = next;
+  g_signal_connect (dialog, "response", G_CALLBACK (on_save_question_response_cb), self);
+  self->question = dialog;
+  gtk_window_present (GTK_WINDOW (dialog));
+}
+
+static gboolean
+ask_in_place (HlWindow *self,
+              GFile    *file)
+{
+  g_autoptr(GError) error = NULL;
+  g_autofree char *name = g_file_get_basename (file);
+  g_autofree char *question = NULL;
+  const char *detail;
+
+  if (g_file_peek_path (file) == NULL || hl_atomic_check_replace (g_file_peek_path (file), &error))
+    return FALSE;
+  if (g_error_matches (error, HL_ATOMIC_ERROR, HL_ATOMIC_ERROR_HARD_LINKS))
+    detail = _("This file has other names (hard links). Saving safely would give only this name the new "
+               "project, so it can only be written over directly: all its names then show it, but a crash "
+               "or a full disk during the save can leave the file damaged.");
+  else if (g_error_matches (error, HL_ATOMIC_ERROR, HL_ATOMIC_ERROR_NO_TEMP))
+    detail = _("The folder takes no new files, so the safe way of saving (a new file that replaces the old "
+               "one) is not possible here. Writing over the file directly works, but a crash or a full disk "
+               "during the save can leave it damaged.");
+  else
+    return FALSE;   /* any other reason: the save itself says it */
+  /* TRANSLATORS: %s is a file name */
+  question = g_strdup_printf (_("Write over “%s” directly?"), name);
+  ask_before_saving (self, file, SAVE_STEP_WRITE_IN_PLACE, question, detail, _("_Write Directly"));
+  return TRUE;
+}
+
+/* Saves @file (NULL: the document's), asking first where a save would
+ * write over something unasked: from @step on. */
+static void
+save_from (HlWindow *self,
+           GFile    *file,
+           int       step)
+{
+  g_autoptr(GFile) target = g_object_ref (file != NULL ? file : hl_document_get_file (self->document));
+  g_autofree char *name = g_file_get_basename (target);
+
+  /* one question at a time: it answers for the save that raised it */
+  if (self->question != NULL)
+    {
+      gtk_window_present (GTK_WINDOW (self->question));
+      return;
+    }
+  if (step <= SAVE_STEP_NAME && g_file_query_exists (target, NULL))
+    {
+      /* TRANSLATORS: %s is a file name */
+      g_autofree char *question = g_strdup_printf (_("“%s” already exists. Replace it?"), name);
+
+      ask_before_saving (self, target, SAVE_STEP_NEWER, question,
+                         _("Saving writes this project over the one in that file."), _("_Replace"));
+      return;
+    }
+  if (step <= SAVE_STEP_NEWER && changed_on_disk (self, target))
+    {
+      /* TRANSLATORS: %s is a file name */
+      g_autofree char *question = g_strdup_printf (_("“%s” was changed by someone else"), name);
+
+      ask_before_saving (self, target, SAVE_STEP_IN_PLACE, question,
+                         _("Since it was opened here, another program saved a newer version of this file. "
+                           "Saving now replaces that version with yours, and its changes are lost."),
+                         _("_Replace"));
+      return;
+    }
+  if (step <= SAVE_STEP_IN_PLACE && ask_in_place (self, target))
+    return;
+  if (save_now (self, target, step == SAVE_STEP_WRITE_IN_PLACE))
+    run_pending (self);
+  else
+    drop_pending (self);
 }
 
 static void
@@ -69,15 +232,14 @@ on_question_response_cb (GtkDialog *dialog,
     case GTK_RESPONSE_ACCEPT:
       if (hl_document_get_file (self->document) == NULL)
         save_as (self);              /* continues after the save */
-      else if (save_now (self, NULL))
-        run_pending (self);
+      else
+        save_from (self, NULL, SAVE_STEP_NEWER);
       break;
     case GTK_RESPONSE_REJECT:
       run_pending (self);
       break;
     default:
-      self->pending = NULL;
-      g_clear_object (&self->pending_file);
+      drop_pending (self);
       break;
     }
 }
@@ -118,10 +280,17 @@ hl_window_load_file (HlWindow *self,
 {
   g_autoptr(GError) error = NULL;
   g_autoptr(GPtrArray) warnings = NULL;
+  g_autofree char *etag = NULL;
 
   g_return_val_if_fail (HL_IS_WINDOW (self), FALSE);
   g_return_val_if_fail (G_IS_FILE (file), FALSE);
 
+  /* what saves of this file left when they were killed */
+  if (g_file_peek_path (file) != NULL)
+    hl_atomic_clean_leftovers (g_file_peek_path (file));
+  /* taken before reading: a change in between makes the save ask once
+   * too often, never once too few */
+  etag = query_etag (file);
   if (!hl_document_load (self->document, file, &warnings, &error))
     {
       /* TRANSLATORS: %s is the loader's message, with file and line */
@@ -131,6 +300,7 @@ hl_window_load_file (HlWindow *self,
       return FALSE;
     }
   hl_window_hide_message (self);
+  hl_window_watch_file (self, etag);
   if (warnings != NULL && warnings->len > 0)
     {
       g_ptr_array_add (warnings, NULL);
@@ -176,7 +346,7 @@ on_open_chooser_response_cb (GtkNativeDialog *chooser,
 {
   if (response == GTK_RESPONSE_ACCEPT)
     {
-      g_autoptr(GFile) file = hl_project_chooser_get_file (chooser, FALSE);
+      g_autoptr(GFile) file = hl_project_chooser_get_file (chooser, FALSE, NULL);
 
       hl_window_load_file (self, file);
     }
@@ -202,16 +372,15 @@ on_save_chooser_response_cb (GtkNativeDialog *chooser,
 {
   if (response == GTK_RESPONSE_ACCEPT)
     {
-      g_autoptr(GFile) file = hl_project_chooser_get_file (chooser, TRUE);
+      gboolean extension_added = FALSE;
+      g_autoptr(GFile) file = hl_project_chooser_get_file (chooser, TRUE, &extension_added);
 
-      if (save_now (self, file))
-        run_pending (self);
+      /* the chooser asked about the name as typed; with ".hoop" added
+       * it is another file, which may exist */
+      save_from (self, file, extension_added ? SAVE_STEP_NAME : SAVE_STEP_NEWER);
     }
   else
-    {
-      self->pending = NULL;
-      g_clear_object (&self->pending_file);
-    }
+    drop_pending (self);
   g_clear_object (&self->chooser);
 }
 
@@ -226,6 +395,123 @@ save_as (HlWindow *self)
   g_clear_object (&self->chooser);
   self->chooser = GTK_NATIVE_DIALOG (chooser);
   gtk_native_dialog_show (self->chooser);
+}
+
+/* ---- the file on disk --------------------------------------------- */
+
+static void
+show_disk_notice (HlWindow *self,
+                  gboolean  gone)
+{
+  GFile *file = hl_document_get_file (self->document);
+  g_autofree char *name = g_file_get_basename (file);
+  g_autofree char *text = NULL;
+
+  if (gone)
+    /* TRANSLATORS: %s is a file name */
+    text = g_strdup_printf (_("“%s” was deleted or moved by another program. Saving writes it again."), name);
+  else
+    /* TRANSLATORS: %s is a file name */
+    text = g_strdup_printf (_("“%s” was changed by another program. Reload shows that version and drops any "
+                              "unsaved changes made here; Keep Mine keeps this version, and saving replaces the "
+                              "file with it."), name);
+  gtk_label_set_text (self->disk_label, text);
+  g_simple_action_set_enabled (G_SIMPLE_ACTION (g_action_map_lookup_action (G_ACTION_MAP (self), "disk-reload")),
+                               !gone);
+  gtk_info_bar_set_revealed (self->disk_bar, TRUE);
+}
+
+static void
+hide_disk_notice (HlWindow *self)
+{
+  gtk_info_bar_set_revealed (self->disk_bar, FALSE);
+  gtk_label_set_text (self->disk_label, "");
+}
+
+/* Every kind of event ends here: the etag alone tells whether the file
+ * is another one now, and it is the one our own saves leave. */
+static void
+on_file_monitor_changed_cb (GFileMonitor      *monitor,
+                            GFile             *file,
+                            GFile             *other,
+                            GFileMonitorEvent  event,
+                            HlWindow          *self)
+{
+  GFile *mine = hl_document_get_file (self->document);
+  g_autofree char *now = NULL;
+
+  if (event == G_FILE_MONITOR_EVENT_ATTRIBUTE_CHANGED || mine == NULL)
+    return;
+  now = query_etag (mine);
+  if (now == NULL)
+    show_disk_notice (self, TRUE);
+  else if (g_strcmp0 (now, self->disk_etag) != 0)
+    show_disk_notice (self, FALSE);
+}
+
+void
+hl_window_unwatch_file (HlWindow *self)
+{
+  if (self->monitor != NULL)
+    {
+      g_signal_handlers_disconnect_by_data (self->monitor, self);
+      g_file_monitor_cancel (self->monitor);
+      g_clear_object (&self->monitor);
+    }
+  g_clear_pointer (&self->disk_etag, g_free);
+  /* dispose may come twice, the second time without the template */
+  if (self->disk_bar != NULL)
+    hide_disk_notice (self);
+}
+
+void
+hl_window_watch_file (HlWindow   *self,
+                      const char *etag)
+{
+  GFile *file = hl_document_get_file (self->document);
+  g_autofree char *kept = g_strdup (etag);
+
+  hl_window_unwatch_file (self);
+  if (file == NULL)
+    return;
+  self->disk_etag = kept != NULL ? g_steal_pointer (&kept) : query_etag (file);
+  /* moves too: another program's save usually renames a new file over
+   * this one */
+  self->monitor = g_file_monitor_file (file, G_FILE_MONITOR_WATCH_MOVES, NULL, NULL);
+  if (self->monitor != NULL)
+    g_signal_connect (self->monitor, "changed", G_CALLBACK (on_file_monitor_changed_cb), self);
+}
+
+static void
+disk_reload_activated (GSimpleAction *action,
+                       GVariant      *param,
+                       gpointer       user_data)
+{
+  HlWindow *self = HL_WINDOW (user_data);
+  g_autoptr(GFile) file = NULL;
+
+  if (hl_document_get_file (self->document) == NULL)
+    return;
+  file = g_object_ref (hl_document_get_file (self->document));
+  hl_window_load_file (self, file);
+}
+
+/* the user has seen the other version and keeps theirs: a save then
+ * replaces it without asking again */
+static void
+disk_keep_activated (GSimpleAction *action,
+                     GVariant      *param,
+                     gpointer       user_data)
+{
+  HlWindow *self = HL_WINDOW (user_data);
+  GFile *file = hl_document_get_file (self->document);
+
+  if (file != NULL)
+    {
+      g_free (self->disk_etag);
+      self->disk_etag = query_etag (file);
+    }
+  hide_disk_notice (self);
 }
 
 /* ---- actions ------------------------------------------------------ */
@@ -268,7 +554,7 @@ save_activated (GSimpleAction *action,
   if (hl_document_get_file (self->document) == NULL)
     save_as (self);
   else
-    save_now (self, NULL);
+    save_from (self, NULL, SAVE_STEP_NEWER);
 }
 
 /* "save-to" with a path: saving without the chooser (tests, scripts) */
@@ -280,7 +566,7 @@ save_to_activated (GSimpleAction *action,
   HlWindow *self = HL_WINDOW (user_data);
   g_autoptr(GFile) file = g_file_new_for_commandline_arg (g_variant_get_string (param, NULL));
 
-  save_now (self, file);
+  save_from (self, file, SAVE_STEP_NEWER);
 }
 
 static void
@@ -299,6 +585,8 @@ static const GActionEntry file_entries[] = {
   { "save", save_activated },
   { "save-to", save_to_activated, "s" },
   { "save-as", save_as_activated },
+  { "disk-reload", disk_reload_activated },
+  { "disk-keep", disk_keep_activated },
 };
 
 void

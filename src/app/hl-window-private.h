@@ -25,6 +25,8 @@ struct _HlWindow
   GMenu          *recent_section;
   GtkInfoBar     *info_bar;
   GtkLabel       *info_label;
+  GtkInfoBar     *disk_bar;      /* the open file changed on disk */
+  GtkLabel       *disk_label;
   GtkPaned       *paned;
   GtkPaned       *results_paned;
   HlShellList    *shell_list;
@@ -42,6 +44,11 @@ struct _HlWindow
   gboolean        close_confirmed;
   HlAutosave     *autosave;      /* crash-recovery copy of unsaved edits */
   guint           autosave_timer;
+
+  GFileMonitor   *monitor;       /* on the document's file */
+  char           *disk_etag;     /* its etag when read or saved here */
+  GFile          *save_file;     /* a save waiting for the user's answer */
+  int             save_step;     /* where that save goes on */
 };
 
 void        hl_window_show_message     (HlWindow       *self,
@@ -59,6 +66,11 @@ void        hl_window_open_when_safe   (HlWindow       *self,
                                         GFile          *file);
 /* TRUE when closing must wait for the user's answer */
 gboolean    hl_window_ask_before_close (HlWindow       *self);
+/* watches the document's file for changes by others; @etag (nullable)
+ * is the one its content was read with, else the file's etag now */
+void        hl_window_watch_file       (HlWindow       *self,
+                                        const char     *etag);
+void        hl_window_unwatch_file     (HlWindow       *self);
 
 /* hl-window-autosave.c: the crash-recovery copy.  _update after every
  * change of the document, _now to write at once, _finish when the window
@@ -67,5 +79,8 @@ void        hl_window_autosave_init    (HlWindow       *self);
 void        hl_window_autosave_update  (HlWindow       *self);
 void        hl_window_autosave_now     (HlWindow       *self);
 void        hl_window_autosave_finish  (HlWindow       *self);
+/* the process ends without asking: unsaved work stays as a copy that
+ * the next start offers */
+void        hl_window_autosave_keep    (HlWindow       *self);
 
 G_END_DECLS

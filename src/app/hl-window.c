@@ -130,6 +130,8 @@ hl_window_set_document (HlWindow   *self,
   hl_canvas_set_document (self->canvas, document);
   hl_results_table_set_document (self->results_table, document);
   hl_window_hide_message (self);
+  /* a recovered project may be bound for a file */
+  hl_window_watch_file (self, NULL);
   on_document_changed_cb (document, self);
 }
 
@@ -389,6 +391,8 @@ hl_window_dispose (GObject *object)
   HlWindow *self = HL_WINDOW (object);
 
   hl_window_autosave_finish (self);
+  hl_window_unwatch_file (self);
+  g_clear_object (&self->save_file);
   if (self->document != NULL)
     g_signal_handlers_disconnect_by_data (self->document, self);
   g_clear_object (&self->document);
@@ -422,6 +426,8 @@ hl_window_class_init (HlWindowClass *klass)
   CHILD (recent_section);
   CHILD (info_bar);
   CHILD (info_label);
+  CHILD (disk_bar);
+  CHILD (disk_label);
   CHILD (paned);
   CHILD (results_paned);
   CHILD (shell_list);
@@ -468,6 +474,16 @@ hl_window_new (GtkApplication *application)
     hl_window_set_document (self, document);
   }
   return self;
+}
+
+void
+hl_window_end_session (HlWindow *self)
+{
+  g_return_if_fail (HL_IS_WINDOW (self));
+
+  hl_window_autosave_keep (self);
+  self->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (self));
 }
 
 HlDocument *
@@ -531,4 +547,13 @@ hl_window_get_message (HlWindow *self)
   if (!gtk_info_bar_get_revealed (self->info_bar))
     return NULL;
   return gtk_label_get_text (self->info_label);
+}
+
+const char *
+hl_window_get_disk_notice (HlWindow *self)
+{
+  g_return_val_if_fail (HL_IS_WINDOW (self), NULL);
+  if (!gtk_info_bar_get_revealed (self->disk_bar))
+    return NULL;
+  return gtk_label_get_text (self->disk_label);
 }

@@ -28,6 +28,11 @@ gboolean        hl_window_is_pristine       (HlWindow *self);
 gboolean        hl_window_shows_file        (HlWindow *self,
                                              GFile    *file);
 
+/* The session ends now (SIGTERM, SIGINT): unsaved work is kept as a
+ * crash-recovery copy for the next start and the window goes without
+ * asking. */
+void            hl_window_end_session       (HlWindow *self);
+
 /* For tests: the parts and the state a person would look at. */
 HlShellEditor  *hl_window_get_shell_editor  (HlWindow *self);
 HlResultsTable *hl_window_get_results_table (HlWindow *self);
@@ -36,5 +41,7 @@ HlCanvas       *hl_window_get_canvas        (HlWindow *self);
 GtkWidget      *hl_window_get_question      (HlWindow *self);
 /* the message shown in the info bar, or NULL */
 const char     *hl_window_get_message       (HlWindow *self);
+/* the notice that the file changed on disk while it shows, else NULL */
+const char     *hl_window_get_disk_notice   (HlWindow *self);
 
 G_END_DECLS
