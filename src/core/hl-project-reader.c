@@ -302,7 +302,17 @@ copy_text (HlReader     *rd,
     return TRUE;
   text = hl_reader_text (n);
   g_strstrip (text);
-  if (strlen (text) >= size)
+  if (strcmp (name, "name") == 0)
+    {
+      g_autofree char *problem = hl_text_problem (text, HL_TEXT_NAME);
+
+      if (problem != NULL)
+        {
+          hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name, "%s", problem);
+          return FALSE;
+        }
+    }
+  else if (strlen (text) >= size)
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name,
             "is too long (%" G_GSIZE_FORMAT " bytes of UTF-8; this version keeps at most %" G_GSIZE_FORMAT ")",
@@ -511,6 +521,38 @@ read_shell (HlReader    *rd,
   return TRUE;
 }
 
+/* The same limits the writer checks (hl_text_problem); the schema has
+ * already held the length, this adds control characters. */
+static gboolean
+check_text (HlReader   *rd,
+            xmlNodePtr  n,
+            const char *field,
+            const char *text,
+            HlTextKind  kind)
+{
+  g_autofree char *problem = hl_text_problem (text, kind);
+
+  if (problem == NULL)
+    return TRUE;
+  hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), field, "%s", problem);
+  return FALSE;
+}
+
+static gboolean
+read_text (HlReader   *rd,
+           xmlNodePtr  parent,
+           const char *name,
+           HlTextKind  kind,
+           char      **text)
+{
+  xmlNodePtr n = hl_reader_child (parent, name);
+
+  if (n == NULL)
+    return TRUE;
+  *text = g_strstrip (hl_reader_text (n));
+  return check_text (rd, n, name, *text, kind);
+}
+
 static gboolean
 read_revision (HlReader    *rd,
                HlProject *project,
@@ -524,7 +566,8 @@ read_revision (HlReader    *rd,
 
   if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, HL_LIMIT_REVISION_NUMBER, &value, NULL))
     {
-      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to %d", number,
+                      HL_LIMIT_REVISION_NUMBER);
       return FALSE;
     }
   /* the schema's date type also takes time zones and five-digit years */
@@ -533,7 +576,11 @@ read_revision (HlReader    *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "date “%s” is not a YYYY-MM-DD date", date);
       return FALSE;
     }
-  hl_project_add_revision (project, (guint) value, g_strstrip (date), author, g_strstrip (text));
+  if (author != NULL && !check_text (rd, n, "revision author", g_strstrip (author), HL_TEXT_ONE_LINE))
+    return FALSE;
+  if (!check_text (rd, n, "revision", g_strstrip (text), HL_TEXT_MULTI_LINE))
+    return FALSE;
+  hl_project_add_revision (project, (guint) value, g_strstrip (date), author, text);
   return TRUE;
 }
 
@@ -545,12 +592,13 @@ build_project (HlReader    *rd,
   g_autofree char *title = NULL, *engineer = NULL, *description = NULL, *units = NULL;
   xmlNodePtr n;
 
-  if ((n = hl_reader_child (root, "title")) != NULL)
-    hl_project_set_title (project, g_strstrip (title = hl_reader_text (n)));
-  if ((n = hl_reader_child (root, "engineer")) != NULL)
-    hl_project_set_engineer (project, g_strstrip (engineer = hl_reader_text (n)));
-  if ((n = hl_reader_child (root, "description")) != NULL)
-    hl_project_set_description (project, g_strstrip (description = hl_reader_text (n)));
+  if (!read_text (rd, root, "title", HL_TEXT_ONE_LINE, &title)
+      || !read_text (rd, root, "engineer", HL_TEXT_ONE_LINE, &engineer)
+      || !read_text (rd, root, "description", HL_TEXT_MULTI_LINE, &description))
+    return NULL;
+  hl_project_set_title (project, title);
+  hl_project_set_engineer (project, engineer);
+  hl_project_set_description (project, description);
   if ((n = hl_reader_child (root, "display-units")) != NULL)
     project->display_units = strcmp (g_strstrip (units = hl_reader_text (n)), "us") == 0
                                ? HL_UNIT_SYSTEM_US : HL_UNIT_SYSTEM_SI;

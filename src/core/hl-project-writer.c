@@ -7,6 +7,7 @@
 #include "hl-project-file.h"
 #include "hl-atomic-file.h"
 #include "hl-project-reader-private.h"
+#include "hl-limits.h"
 
 #include <string.h>
 
@@ -159,31 +160,112 @@ strip_location (const char *message)
   return g_strdup (p);
 }
 
+static gboolean
+check_text (const char  *owner,
+            const char  *field,
+            const char  *text,
+            HlTextKind   kind,
+            GError     **error)
+{
+  g_autofree char *problem = hl_text_problem (text, kind);
+
+  if (problem == NULL)
+    return TRUE;
+  g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE, "Cannot save: %s%s: %s", owner, field, problem);
+  return FALSE;
+}
+
+static gboolean
+check_id (const char  *what,
+          const char  *id,
+          GError     **error)
+{
+  g_autofree char *quoted = NULL;
+
+  if (hl_reader_valid_id (id))
+    return TRUE;
+  quoted = hl_text_quote (g_utf8_validate (id, -1, NULL) ? id : "", 40);
+  g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+               "Cannot save: %s “%s” is not 1 to %d letters, digits, “_”, “.” or “-”", what, quoted, HL_LIMIT_ID_BYTES);
+  return FALSE;
+}
+
+/* The reader's limits, checked field by field before anything is
+ * written, so the message names the field to fix rather than a line of
+ * a file the user never sees. */
+static gboolean
+check_fields (const HlProject *project,
+              GError         **error)
+{
+  if (!check_text ("", "title", project->title, HL_TEXT_ONE_LINE, error)
+      || !check_text ("", "engineer", project->engineer, HL_TEXT_ONE_LINE, error)
+      || !check_text ("", "description", project->description, HL_TEXT_MULTI_LINE, error))
+    return FALSE;
+  for (guint i = 0; i < project->materials->len; i++)
+    {
+      const HlMaterial *m = &g_array_index (project->materials, HlMaterial, i);
+      g_autofree char *owner = g_strdup_printf ("material “%s”: ", m->id);
+
+      if (!check_id ("material id", m->id, error) || !check_text (owner, "name", m->name, HL_TEXT_NAME, error))
+        return FALSE;
+    }
+  for (guint i = 0; i < project->shells->len; i++)
+    {
+      const HlShellInputs *s = &g_array_index (project->shells, HlShellInputs, i);
+      g_autofree char *owner = g_strdup_printf ("shell “%s”: ", s->id);
+      g_autofree char *ref = g_strdup_printf ("shell “%s”: material-ref", s->id);
+
+      if (!check_id ("shell id", s->id, error) || !check_text (owner, "name", s->name, HL_TEXT_NAME, error)
+          || !check_id (ref, s->material_ref, error))
+        return FALSE;
+    }
+  for (guint i = 0; i < project->revisions->len; i++)
+    {
+      const HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
+      g_autofree char *owner = g_strdup_printf ("revision %u: ", r->number);
+
+      if (r->number < 1 || r->number > HL_LIMIT_REVISION_NUMBER)
+        {
+          g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+                       "Cannot save: revision %u: number: must be a whole number from 1 to %d",
+                       r->number, HL_LIMIT_REVISION_NUMBER);
+          return FALSE;
+        }
+      /* a clearer word than the reader's for what the user can fix */
+      if (!hl_reader_valid_date (r->date))
+        {
+          g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+                       "Cannot save: revision %u has the date “%s”, not a YYYY-MM-DD date", r->number, r->date);
+          return FALSE;
+        }
+      if (!check_text (owner, "author", r->author, HL_TEXT_ONE_LINE, error)
+          || !check_text (owner, "text", r->text, HL_TEXT_MULTI_LINE, error))
+        return FALSE;
+    }
+  return TRUE;
+}
+
 char *
 hl_project_to_checked_xml (const HlProject *project,
                            gsize           *length,
                            GError         **error)
 {
+  g_autoptr(HlProject) stripped = NULL;
   g_autofree char *xml = NULL;
+  g_autofree char *difference = NULL;
   g_autoptr(HlProject) back = NULL;
   g_autoptr(GError) local = NULL;
   gsize len;
 
   g_return_val_if_fail (project != NULL, NULL);
 
-  /* a clearer word than the reader's for what the user can fix */
-  for (guint i = 0; i < project->revisions->len; i++)
-    {
-      const HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
-
-      if (r->number < 1 || !hl_reader_valid_date (r->date))
-        {
-          g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
-                       "Cannot save: revision %u has the date “%s”, not a YYYY-MM-DD date", r->number, r->date);
-          return NULL;
-        }
-    }
-  xml = hl_project_to_xml (project);
+  /* the reader strips outer white space: a title " A " is saved as "A"
+   * rather than refused for reading back different */
+  stripped = hl_project_copy (project);
+  hl_project_strip_texts (stripped);
+  if (!check_fields (stripped, error))
+    return NULL;
+  xml = hl_project_to_xml (stripped);
   len = strlen (xml);
   back = hl_project_load_bytes (xml, len, "save", NULL, &local);
   if (back == NULL)
@@ -199,11 +281,11 @@ hl_project_to_checked_xml (const HlProject *project,
         g_set_error (error, HL_PROJECT_FILE_ERROR, local->code, "Cannot save: %s", why);
       return NULL;
     }
-  if (!hl_project_equal (project, back))
+  difference = hl_project_first_difference (stripped, back);
+  if (difference != NULL)
     {
-      g_set_error_literal (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
-                           "Cannot save: the file would not read back as the same project "
-                           "(a text holds characters a project file cannot keep)");
+      g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+                   "Cannot save: %s would not read back as it is now", difference);
       return NULL;
     }
   if (length != NULL)
