@@ -16,6 +16,8 @@ typedef struct
   GPtrArray  *warnings;
   GError     *error;        /* first error only */
   GHashTable *shell_ids;    /* seen so far: a linear search made big files quadratic */
+  GHashTable *material_ids; /* id -> index + 1 in the project's materials, likewise */
+  int         parse_depth;  /* elements open while parsing */
 } HlReader;
 
 /* Records the first error only: "NAME:LINE: element: message". */

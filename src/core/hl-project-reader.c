@@ -19,6 +19,7 @@
 #include <gio/gio.h>
 #include <libxml/parser.h>
 #include <libxml/relaxng.h>
+#include <libxml/SAX2.h>
 #include <libxml/xmlerror.h>
 #include <string.h>
 
@@ -179,13 +180,117 @@ load_schema (HlReader *rd)
 }
 
 
+/* libxml2's RELAX NG validator keeps, for a repeated pattern, every
+ * state reached so far and compares each new one with all of them
+ * (xmlRelaxNGAddStates in libxml2 2.9): n shells cost n² comparisons,
+ * 18 s for 50,000.  So the root's lists are validated in slices: each
+ * pass shows the validator the root's other children, one slice of
+ * materials, shells and revisions, and a shell (the format asks for
+ * one).  Every element meets the same rules, at linear cost. */
+#define VALIDATE_SLICE 200
+
+static gboolean
+in_list (xmlNodePtr n)
+{
+  return n->type == XML_ELEMENT_NODE
+         && (xmlStrEqual (n->name, BAD_CAST "shell") || xmlStrEqual (n->name, BAD_CAST "material")
+             || xmlStrEqual (n->name, BAD_CAST "revision"));
+}
+
+/* makes @nodes the children of @parent (in that order), nothing else */
+static void
+relink (xmlNodePtr  parent,
+        GPtrArray  *nodes)
+{
+  xmlNodePtr prev = NULL;
+
+  parent->children = NULL;
+  for (guint i = 0; i < nodes->len; i++)
+    {
+      xmlNodePtr n = g_ptr_array_index (nodes, i);
+
+      n->prev = prev;
+      n->next = NULL;
+      if (prev != NULL)
+        prev->next = n;
+      else
+        parent->children = n;
+      prev = n;
+    }
+  parent->last = prev;
+}
+
+static int
+validate_document (xmlRelaxNGPtr  schema,
+                   HlReader      *rd,
+                   xmlDocPtr      doc)
+{
+  xmlRelaxNGValidCtxtPtr vctx = xmlRelaxNGNewValidCtxt (schema);
+  int rc;
+
+  xmlRelaxNGSetValidStructuredErrors (vctx, on_structured_error, rd);
+  rc = xmlRelaxNGValidateDoc (vctx, doc);
+  xmlRelaxNGFreeValidCtxt (vctx);
+  return rc;
+}
+
+static int
+validate_in_slices (xmlRelaxNGPtr  schema,
+                    HlReader      *rd,
+                    xmlDocPtr      doc)
+{
+  xmlNodePtr root = xmlDocGetRootElement (doc);
+  g_autoptr(GPtrArray) all = g_ptr_array_new ();
+  g_autoptr(GPtrArray) others = g_ptr_array_new ();
+  g_autoptr(GPtrArray) list = g_ptr_array_new ();
+  g_autoptr(GPtrArray) view = g_ptr_array_new ();
+  xmlNodePtr a_shell = NULL;
+  int rc = 0;
+
+  for (xmlNodePtr n = root->children; n != NULL; n = n->next)
+    {
+      g_ptr_array_add (all, n);
+      if (in_list (n))
+        {
+          g_ptr_array_add (list, n);
+          if (a_shell == NULL && xmlStrEqual (n->name, BAD_CAST "shell"))
+            a_shell = n;
+        }
+      /* the validator skips blank text, comments and instructions too */
+      else if (!(xmlIsBlankNode (n) || n->type == XML_COMMENT_NODE || n->type == XML_PI_NODE))
+        g_ptr_array_add (others, n);
+    }
+  if (list->len <= VALIDATE_SLICE)
+    return validate_document (schema, rd, doc);
+  for (guint start = 0; start < list->len && rc == 0; start += VALIDATE_SLICE)
+    {
+      gboolean has_shell = FALSE;
+
+      g_ptr_array_set_size (view, 0);
+      for (guint i = 0; i < others->len; i++)
+        g_ptr_array_add (view, g_ptr_array_index (others, i));
+      for (guint i = start; i < MIN (start + VALIDATE_SLICE, list->len); i++)
+        {
+          xmlNodePtr n = g_ptr_array_index (list, i);
+
+          has_shell = has_shell || n == a_shell;
+          g_ptr_array_add (view, n);
+        }
+      if (!has_shell && a_shell != NULL)
+        g_ptr_array_add (view, a_shell);
+      relink (root, view);
+      rc = validate_document (schema, rd, doc);
+    }
+  relink (root, all);
+  return rc;
+}
+
 static gboolean
 validate (HlReader   *rd,
           xmlDocPtr doc)
 {
   static xmlRelaxNGPtr schema; /* parsed once, read-only afterwards */
   static gsize schema_once;
-  xmlRelaxNGValidCtxtPtr vctx;
   int rc;
 
   if (g_once_init_enter (&schema_once))
@@ -198,10 +303,7 @@ validate (HlReader   *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
       return FALSE;
     }
-  vctx = xmlRelaxNGNewValidCtxt (schema);
-  xmlRelaxNGSetValidStructuredErrors (vctx, on_structured_error, rd);
-  rc = xmlRelaxNGValidateDoc (vctx, doc);
-  xmlRelaxNGFreeValidCtxt (vctx);
+  rc = validate_in_slices (schema, rd, doc);
   if (rc != 0)
     {
       GError *schema_error = g_steal_pointer (&rd->error);
@@ -371,7 +473,7 @@ read_material (HlReader    *rd,
 
   if (!check_id (rd, n, "material", id))
     return FALSE;
-  if (hl_project_find_material (project, id) != NULL)
+  if (g_hash_table_contains (rd->material_ids, id))
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "material", "the id “%s” is used twice", id);
       return FALSE;
@@ -399,6 +501,7 @@ read_material (HlReader    *rd,
       return FALSE;
     }
   g_array_append_val (project->materials, m);
+  g_hash_table_insert (rd->material_ids, g_strdup (id), GUINT_TO_POINTER (project->materials->len));
   return TRUE;
 }
 
@@ -441,6 +544,16 @@ read_choice (xmlNodePtr  parent,
   from_string (g_strstrip (text), out);
 }
 
+static const HlMaterial *
+reader_material (HlReader        *rd,
+                 const HlProject *project,
+                 const char      *id)
+{
+  guint index = GPOINTER_TO_UINT (g_hash_table_lookup (rd->material_ids, id));
+
+  return index > 0 ? &g_array_index (project->materials, HlMaterial, index - 1) : NULL;
+}
+
 static gboolean
 read_shell (HlReader    *rd,
             HlProject *project,
@@ -475,7 +588,7 @@ read_shell (HlReader    *rd,
   if (ends != NULL)
     hl_ends_from_string (ends, &s.ends);
 
-  material = hl_project_find_material (project, s.material_ref);
+  material = reader_material (rd, project, s.material_ref);
   if (material == NULL)
     material = hl_material_builtin_find (s.material_ref);
   if (material == NULL)
@@ -511,7 +624,7 @@ read_shell (HlReader    *rd,
     {
       HlProblem *p = g_ptr_array_index (problems, 0);
       /* material fields live in the material element */
-      gboolean in_material = hl_reader_child (n, p->field) == NULL && hl_project_find_material (project, s.material_ref) != NULL;
+      gboolean in_material = hl_reader_child (n, p->field) == NULL && reader_material (rd, project, s.material_ref) != NULL;
 
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s%s", p->message,
             in_material ? " (in the shell's material)" : "");
@@ -652,6 +765,46 @@ check_root (HlReader    *rd,
   return TRUE;
 }
 
+/* The depth cap while parsing: without it a file of "<x><x>…" would
+ * build millions of nested nodes before hl_reader_check_depth() saw them. */
+static void
+on_start_element (void           *ctx,
+                  const xmlChar  *localname,
+                  const xmlChar  *prefix,
+                  const xmlChar  *uri,
+                  int             nb_namespaces,
+                  const xmlChar **namespaces,
+                  int             nb_attributes,
+                  int             nb_defaulted,
+                  const xmlChar **attributes)
+{
+  xmlParserCtxtPtr ctxt = ctx;
+  HlReader *rd = ctxt->_private;
+
+  if (++rd->parse_depth > HL_PROJECT_FILE_MAX_DEPTH)
+    {
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_UNSAFE, xmlSAX2GetLineNumber (ctx), (const char *) localname,
+                      "elements nested deeper than %d levels", HL_PROJECT_FILE_MAX_DEPTH);
+      xmlStopParser (ctxt);
+      return;
+    }
+  xmlSAX2StartElementNs (ctx, localname, prefix, uri, nb_namespaces, namespaces, nb_attributes, nb_defaulted,
+                         attributes);
+}
+
+static void
+on_end_element (void          *ctx,
+                const xmlChar *localname,
+                const xmlChar *prefix,
+                const xmlChar *uri)
+{
+  xmlParserCtxtPtr ctxt = ctx;
+  HlReader *rd = ctxt->_private;
+
+  rd->parse_depth--;
+  xmlSAX2EndElementNs (ctx, localname, prefix, uri);
+}
+
 /* @data need not end in a NUL (fuzzers and callers pass exact buffers) */
 static gboolean
 only_space (const char *data,
@@ -671,7 +824,8 @@ hl_project_load_bytes (const char  *data,
                        GError     **error)
 {
   HlReader rd = { display_name != NULL ? display_name : "project", NULL, NULL,
-                g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL) };
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL),
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL), 0 };
   xmlParserCtxtPtr ctxt;
   xmlDocPtr doc = NULL;
   HlProject *project = NULL;
@@ -691,12 +845,19 @@ hl_project_load_bytes (const char  *data,
   else if (hl_reader_refuse_declarations (&rd, data, length))
     {
       ctxt = xmlNewParserCtxt ();
+      ctxt->_private = &rd;
+      ctxt->sax->startElementNs = on_start_element;
+      ctxt->sax->endElementNs = on_end_element;
       xmlSetStructuredErrorFunc (&rd, on_structured_error);
       /* NONET: never fetch; no NOENT/DTDLOAD: never expand or load;
-       * the bytes are UTF-8 whatever the declaration says */
+       * the bytes are UTF-8 whatever the declaration says.  HUGE lifts
+       * libxml2's 10 MB limits on one text, comment or lookahead, which
+       * refused files below our own 16 MiB cap ("Huge input lookup",
+       * "Comment too big"); it also lifts libxml2's depth limit, so
+       * on_start_element() applies ours while parsing. */
       doc = xmlCtxtReadMemory (ctxt, data, (int) length, rd.name, "UTF-8",
                                XML_PARSE_NONET | XML_PARSE_NOCDATA | XML_PARSE_IGNORE_ENC | XML_PARSE_BIG_LINES
-                               | XML_PARSE_COMPACT);
+                               | XML_PARSE_COMPACT | XML_PARSE_HUGE);
       xmlSetStructuredErrorFunc (NULL, NULL);
       if (doc == NULL && rd.error == NULL)
         hl_reader_fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "not a well-formed XML document");
@@ -711,6 +872,7 @@ hl_project_load_bytes (const char  *data,
   if (doc != NULL)
     xmlFreeDoc (doc);
   g_hash_table_unref (rd.shell_ids);
+  g_hash_table_unref (rd.material_ids);
 
   if (rd.error != NULL)
     {
