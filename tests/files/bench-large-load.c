@@ -21,32 +21,30 @@
 
 #define ROUNDS 3
 
-static HlProject *
-large_project (guint shells)
+/* Written here in the compact form a hand or another tool would write
+ * (only what the format requires), so 50,000 shells stay below the
+ * 16 MiB cap: the writer's every-element form takes ~640 bytes a shell. */
+static char *
+large_xml (guint shells)
 {
-  HlProject *p = hl_project_new ();
-  HlMaterial m = *hl_material_builtin (0);
+  GString *xml = g_string_new ("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<hoopline-project format=\"1\">\n"
+                               "<title>Benchmark: a large plant</title>\n"
+                               "<material id=\"plate\"><name>Plate</name><elastic-modulus unit=\"GPa\">200</elastic-modulus>"
+                               "<poisson-ratio>0.3</poisson-ratio><yield-strength unit=\"MPa\">260</yield-strength>"
+                               "<allowable-stress unit=\"MPa\">138</allowable-stress></material>\n");
 
-  g_strlcpy (m.id, "plate", sizeof m.id);
-  hl_project_put_material (p, &m);
-  hl_project_set_title (p, "Benchmark: a large plant");
   for (guint i = 0; i < shells; i++)
-    {
-      HlShellInputs s = hl_shell_inputs_default ();
-
-      g_snprintf (s.id, sizeof s.id, "shell-%u", i + 1);
-      g_snprintf (s.name, sizeof s.name, "Shell %u of the benchmark", i + 1);
-      s.form = i % 5 == 4 ? HL_FORM_SPHERE : HL_FORM_CYLINDER;
-      s.size = hl_quantity_make (200 + i % 1000, "mm");
-      s.wall_thickness = hl_quantity_make (4 + (i % 40), "mm");
-      s.internal_pressure = hl_quantity_make (5 + i % 50, "bar");
-      g_strlcpy (s.material_ref, m.id, sizeof s.material_ref);
-      s.material = m;
-      hl_project_add_shell (p, &s);
-    }
+    g_string_append_printf (xml,
+                            "<shell id=\"shell-%u\" form=\"%s\"><name>Shell %u of the benchmark</name>"
+                            "<material-ref>plate</material-ref><inner-diameter unit=\"mm\">%u</inner-diameter>"
+                            "<wall-thickness unit=\"mm\">%u</wall-thickness>"
+                            "<internal-pressure unit=\"bar\">%u</internal-pressure></shell>\n",
+                            i + 1, i % 5 == 4 ? "sphere" : "cylinder", i + 1, 200 + i % 1000, 4 + i % 40, 5 + i % 50);
   for (guint i = 0; i < shells / 10; i++)
-    hl_project_add_revision (p, i + 1, "2026-12-01", "A. Tester", "Walls checked.");
-  return p;
+    g_string_append_printf (xml, "<revision number=\"%u\" date=\"2026-12-01\" author=\"A. Tester\">Walls checked.</revision>\n",
+                            i + 1);
+  g_string_append (xml, "</hoopline-project>\n");
+  return g_string_free (xml, FALSE);
 }
 
 int
@@ -54,8 +52,7 @@ main (int    argc,
       char **argv)
 {
   guint shells = argc > 1 ? (guint) strtoul (argv[1], NULL, 10) : 10000;
-  g_autoptr(HlProject) source = large_project (shells);
-  g_autofree char *xml = hl_project_to_xml (source);
+  g_autofree char *xml = large_xml (shells);
   gsize length = strlen (xml);
   double best = G_MAXDOUBLE, best_load = 0, best_solve = 0;
 
