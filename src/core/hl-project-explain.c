@@ -43,6 +43,7 @@ static const char *const size_elements[] = {
 static const struct { const char *element, *words; } word_elements[] = {
   { "display-units", "si us" }, { "thin-radius-basis", "inner mean outer" },
   { "verdict-measure", "hoop equivalent" }, { "sizing-criterion", "von-mises tresca" },
+  { "origin", "built-in" },
 };
 
 gboolean

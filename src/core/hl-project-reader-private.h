@@ -17,6 +17,7 @@ typedef struct
   GError     *error;        /* first error only */
   GHashTable *shell_ids;    /* seen so far: a linear search made big files quadratic */
   GHashTable *material_ids; /* id -> index + 1 in the project's materials, likewise */
+  GHashTable *copies;       /* id -> HlMaterial: built-in materials as the file holds them */
   int         parse_depth;  /* elements open while parsing */
 } HlReader;
 

@@ -84,7 +84,7 @@ const char *const hl_reader_known_project[] = {
   "title", "engineer", "description", "display-units", "material", "shell", "revision", NULL
 };
 const char *const hl_reader_known_material[] = {
-  "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
+  "origin", "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
 };
 const char *const hl_reader_known_shell[] = {
   "name", "material-ref", "inner-diameter", "outer-diameter", "inner-radius", "outer-radius",
@@ -473,7 +473,7 @@ read_material (HlReader    *rd,
 
   if (!check_id (rd, n, "material", id))
     return FALSE;
-  if (g_hash_table_contains (rd->material_ids, id))
+  if (g_hash_table_contains (rd->material_ids, id) || g_hash_table_contains (rd->copies, id))
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "material", "the id “%s” is used twice", id);
       return FALSE;
@@ -499,6 +499,14 @@ read_material (HlReader    *rd,
 
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s", p->message);
       return FALSE;
+    }
+  /* a built-in material the file keeps a copy of: its values are the
+   * ones the shells were saved with, whatever this version's table says,
+   * but it is not one of the project's own materials */
+  if (hl_reader_child (n, "origin") != NULL)
+    {
+      g_hash_table_insert (rd->copies, g_strdup (id), g_memdup2 (&m, sizeof m));
+      return TRUE;
     }
   g_array_append_val (project->materials, m);
   g_hash_table_insert (rd->material_ids, g_strdup (id), GUINT_TO_POINTER (project->materials->len));
@@ -551,7 +559,9 @@ reader_material (HlReader        *rd,
 {
   guint index = GPOINTER_TO_UINT (g_hash_table_lookup (rd->material_ids, id));
 
-  return index > 0 ? &g_array_index (project->materials, HlMaterial, index - 1) : NULL;
+  if (index > 0)
+    return &g_array_index (project->materials, HlMaterial, index - 1);
+  return g_hash_table_lookup (rd->copies, id);
 }
 
 static gboolean
@@ -825,7 +835,8 @@ hl_project_load_bytes (const char  *data,
 {
   HlReader rd = { display_name != NULL ? display_name : "project", NULL, NULL,
                   g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL),
-                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL), 0 };
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL),
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free), 0 };
   xmlParserCtxtPtr ctxt;
   xmlDocPtr doc = NULL;
   HlProject *project = NULL;
@@ -873,6 +884,7 @@ hl_project_load_bytes (const char  *data,
     xmlFreeDoc (doc);
   g_hash_table_unref (rd.shell_ids);
   g_hash_table_unref (rd.material_ids);
+  g_hash_table_unref (rd.copies);
 
   if (rd.error != NULL)
     {

@@ -78,11 +78,15 @@ put_quantity (GString    *out,
 
 static void
 put_material (GString          *out,
-              const HlMaterial *m)
+              const char       *material_id,
+              const HlMaterial *m,
+              gboolean          built_in)
 {
-  g_autofree char *id = escape (m->id, TRUE);
+  g_autofree char *id = escape (material_id, TRUE);
 
   g_string_append_printf (out, "  <material id=\"%s\">\n", id);
+  if (built_in)
+    put_text (out, 4, "origin", "built-in");
   put_text (out, 4, "name", m->name);
   put_quantity (out, 4, "elastic-modulus", m->elastic_modulus);
   put_number (out, 4, "poisson-ratio", m->poisson_ratio);
@@ -114,20 +118,52 @@ put_shell (GString             *out,
   g_string_append (out, "  </shell>\n");
 }
 
+/* A shell that uses a built-in material (one the project does not hold)
+ * would otherwise reopen with whatever the built-in table of the reading
+ * version says.  The file keeps a copy with the values the shell has,
+ * marked as built-in; format 1.1 names the new element, which readers of
+ * 1.0 skip, reading the copy as a project material.  Returns whether any
+ * copy was written. */
+static gboolean
+put_built_in_copies (GString         *out,
+                     const HlProject *project)
+{
+  g_autoptr(GHashTable) written = g_hash_table_new (g_str_hash, g_str_equal);
+
+  for (guint i = 0; i < project->materials->len; i++)
+    g_hash_table_add (written, g_array_index (project->materials, HlMaterial, i).id);
+  for (guint i = 0; i < project->shells->len; i++)
+    {
+      const HlShellInputs *s = &g_array_index (project->shells, HlShellInputs, i);
+
+      if (g_hash_table_add (written, (gpointer) s->material_ref))
+        put_material (out, s->material_ref, &s->material, TRUE);
+    }
+  return g_hash_table_size (written) > project->materials->len;
+}
+
 char *
 hl_project_to_xml (const HlProject *project)
 {
   GString *out = g_string_new ("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+  gsize format_at;
+  gboolean copies;
 
   g_return_val_if_fail (project != NULL, NULL);
 
   g_string_append (out, "<hoopline-project format=\"1\">\n");
+  format_at = out->len - strlen ("\">\n");
   put_text (out, 2, "title", project->title);
   put_text (out, 2, "engineer", project->engineer);
   put_text (out, 2, "description", project->description);
   put_text (out, 2, "display-units", project->display_units == HL_UNIT_SYSTEM_US ? "us" : "si");
   for (guint i = 0; i < project->materials->len; i++)
-    put_material (out, &g_array_index (project->materials, HlMaterial, i));
+    {
+      const HlMaterial *m = &g_array_index (project->materials, HlMaterial, i);
+
+      put_material (out, m->id, m, FALSE);
+    }
+  copies = put_built_in_copies (out, project);
   for (guint i = 0; i < project->shells->len; i++)
     put_shell (out, &g_array_index (project->shells, HlShellInputs, i));
   for (guint i = 0; i < project->revisions->len; i++)
@@ -141,6 +177,9 @@ hl_project_to_xml (const HlProject *project)
                               r->number, date, author, text);
     }
   g_string_append (out, "</hoopline-project>\n");
+  /* the lowest version that holds what was written */
+  if (copies)
+    g_string_insert (out, format_at, ".1");
   return g_string_free (out, FALSE);
 }
 

@@ -142,7 +142,7 @@ shell_difference (const HlShellInputs *a,
   if (strcmp (a->material_ref, b->material_ref) != 0)
     return g_strdup ("material-ref");
   if ((material = material_difference (&a->material, &b->material)) != NULL)
-    return g_strdup_printf ("material %s (the shell's copy differs from material “%s” of the project)",
+    return g_strdup_printf ("material %s (the shell's copy differs from the material “%s” the file holds)",
                             material, a->material_ref);
   if (a->joint_efficiency != b->joint_efficiency)
     return g_strdup ("joint-efficiency");
