@@ -29,6 +29,11 @@ void        hl_reader_fail                (HlReader   *rd,
                                            const char *format,
                                            ...) G_GNUC_PRINTF (5, 6);
 
+/* What a shell with the id @id holds before its element is read: the
+ * defaults of DESIGN.md §3, the id as name, no internal pressure.  The
+ * writer leaves out what equals them. */
+HlShellInputs hl_reader_shell_default     (const char *id);
+
 char       *hl_reader_text                (xmlNodePtr  n);
 xmlNodePtr  hl_reader_child               (xmlNodePtr  parent,
                                            const char *name);

@@ -564,12 +564,25 @@ reader_material (HlReader        *rd,
   return g_hash_table_lookup (rd->copies, id);
 }
 
+HlShellInputs
+hl_reader_shell_default (const char *id)
+{
+  HlShellInputs s = hl_shell_inputs_default ();
+
+  g_strlcpy (s.id, id, sizeof s.id);
+  g_strlcpy (s.name, id, sizeof s.name);
+  /* a pressure the file does not give is zero, not the window's
+   * new-shell example value */
+  s.internal_pressure = hl_quantity_make (0, "bar");
+  return s;
+}
+
 static gboolean
 read_shell (HlReader    *rd,
             HlProject *project,
             xmlNodePtr n)
 {
-  HlShellInputs s = hl_shell_inputs_default ();
+  HlShellInputs s;
   g_autofree char *id = hl_reader_prop (n, "id");
   g_autofree char *form = hl_reader_prop (n, "form");
   g_autofree char *ends = hl_reader_prop (n, "ends");
@@ -584,11 +597,7 @@ read_shell (HlReader    *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "the id “%s” is used twice", id);
       return FALSE;
     }
-  g_strlcpy (s.id, id, sizeof s.id);
-  g_strlcpy (s.name, id, sizeof s.name);
-  /* a pressure the file does not give is zero, not the window's
-   * new-shell example value */
-  s.internal_pressure = hl_quantity_make (0, "bar");
+  s = hl_reader_shell_default (id);
   if (!copy_text (rd, n, "name", s.name, sizeof s.name)
       || !copy_text (rd, n, "material-ref", s.material_ref, sizeof s.material_ref)
       || !check_id (rd, hl_reader_child (n, "material-ref"), "material-ref", s.material_ref))
