@@ -6,7 +6,9 @@
 
 #include "hl-project-file.h"
 
+#include <libxml/parser.h>
 #include <libxml/tree.h>
+#include <libxml/xmlerror.h>
 
 G_BEGIN_DECLS
 
@@ -34,6 +36,10 @@ void        hl_reader_fail                (HlReader   *rd,
  * writer leaves out what equals them. */
 HlShellInputs hl_reader_shell_default     (const char *id);
 
+/* libxml2's structured error handler; @user_data is the HlReader */
+void        hl_reader_on_structured_error (void        *user_data,
+                                           xmlErrorPtr  err);
+
 char       *hl_reader_text                (xmlNodePtr  n);
 xmlNodePtr  hl_reader_child               (xmlNodePtr  parent,
                                            const char *name);
@@ -50,9 +56,15 @@ extern const char *const hl_reader_known_shell[];
 gboolean    hl_reader_refuse_declarations (HlReader   *rd,
                                            const char *data,
                                            gsize       length);
+/* installs the depth cap on @ctxt, whose _private must be the HlReader */
+void        hl_reader_cap_depth_while_parsing (xmlParserCtxtPtr ctxt);
 gboolean    hl_reader_check_depth         (HlReader   *rd,
                                            xmlNodePtr  node,
                                            int         depth);
+
+/* hl-project-schema.c */
+gboolean    hl_reader_validate            (HlReader   *rd,
+                                           xmlDocPtr   doc);
 
 /* hl-project-explain.c */
 void        hl_reader_explain_invalid     (HlReader   *rd,
