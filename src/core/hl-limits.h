@@ -57,6 +57,9 @@ typedef enum
 char     *hl_text_problem          (const char *text,
                                     HlTextKind  kind);
 
+/* characters of a value a message quotes */
+#define HL_QUOTE_CHARS 40
+
 /* At most @max_chars characters of @text for a message, with "…" when
  * cut, so a pasted megabyte is not echoed back whole. */
 char     *hl_text_quote            (const char *text,

@@ -24,6 +24,32 @@ G_DEFINE_QUARK (hl-project-file-error-quark, hl_project_file_error)
 
 
 
+/* Values from the file are quoted “like this”; a megabyte pasted into
+ * one must not come back whole in the message.  Takes @msg. */
+static char *
+shorten_quotes (char *msg)
+{
+  GString *out;
+  const char *p = msg, *open, *close;
+
+  if (strstr (msg, "“") == NULL)
+    return msg;
+  out = g_string_new (NULL);
+  while ((open = strstr (p, "“")) != NULL && (close = strstr (open, "”")) != NULL)
+    {
+      const char *inside = open + strlen ("“");
+      g_autofree char *value = g_strndup (inside, close - inside);
+      g_autofree char *quoted = hl_text_quote (value, HL_QUOTE_CHARS);
+
+      g_string_append_len (out, p, inside - p);
+      g_string_append (out, quoted);
+      p = close;
+    }
+  g_string_append (out, p);
+  g_free (msg);
+  return g_string_free (out, FALSE);
+}
+
 void
 hl_reader_fail (HlReader     *rd,
       int         code,
@@ -38,7 +64,7 @@ hl_reader_fail (HlReader     *rd,
   if (rd->error != NULL)
     return;
   va_start (args, format);
-  msg = g_strdup_vprintf (format, args);
+  msg = shorten_quotes (g_strdup_vprintf (format, args));
   va_end (args);
   if (element != NULL)
     g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s: %s", rd->name, MAX (line, 1), element, msg);

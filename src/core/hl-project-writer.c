@@ -239,7 +239,7 @@ check_id (const char  *what,
 
   if (hl_reader_valid_id (id))
     return TRUE;
-  quoted = hl_text_quote (g_utf8_validate (id, -1, NULL) ? id : "", 40);
+  quoted = hl_text_quote (id, HL_QUOTE_CHARS);
   g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
                "Cannot save: %s “%s” is not 1 to %d letters, digits, “_”, “.” or “-”", what, quoted, HL_LIMIT_ID_BYTES);
   return FALSE;
@@ -270,8 +270,10 @@ check_fields (const HlProject *project,
       g_autofree char *owner = g_strdup_printf ("shell “%s”: ", s->id);
       g_autofree char *ref = g_strdup_printf ("shell “%s”: material-ref", s->id);
 
+      /* the shell's copy of its material is what a built-in copy holds */
       if (!check_id ("shell id", s->id, error) || !check_text (owner, "name", s->name, HL_TEXT_NAME, error)
-          || !check_id (ref, s->material_ref, error))
+          || !check_id (ref, s->material_ref, error)
+          || !check_text (owner, "material name", s->material.name, HL_TEXT_NAME, error))
         return FALSE;
     }
   for (guint i = 0; i < project->revisions->len; i++)

@@ -402,6 +402,33 @@ test_reader_refuses_control_characters (void)
     }
 }
 
+/* A value quoted in a message is cut to a few dozen characters. */
+static void
+test_reader_quotes_short (void)
+{
+  static const struct { const char *before, *after; } around[] = {
+    { "<hoopline-project format=\"1\"><display-units>",
+      "</display-units><shell id=\"s\"><material-ref>typical-copper</material-ref><inner-diameter unit=\"mm\">1"
+      "</inner-diameter><wall-thickness unit=\"mm\">1</wall-thickness></shell></hoopline-project>" },
+    { "<hoopline-project format=\"1\"><shell id=\"s\" form=\"",
+      "\"><material-ref>x</material-ref><inner-diameter unit=\"mm\">1</inner-diameter>"
+      "<wall-thickness unit=\"mm\">1</wall-thickness></shell></hoopline-project>" },
+  };
+  g_autofree char *paste = repeat ("si us ", 200000);
+
+  for (guint i = 0; i < G_N_ELEMENTS (around); i++)
+    {
+      g_autofree char *xml = g_strconcat (around[i].before, paste, around[i].after, NULL);
+      g_autoptr(GError) error = NULL;
+      g_autoptr(HlProject) p = hl_project_load_bytes (xml, strlen (xml), "paste.hoop", NULL, &error);
+
+      g_assert_null (p);
+      g_test_message ("%s", error->message);
+      g_assert_cmpuint (strlen (error->message), <, 300);
+      g_assert_nonnull (strstr (error->message, "…"));
+    }
+}
+
 /* The shipped schema states the same numbers as hl-limits.h. */
 static gint64
 schema_number (xmlXPathContextPtr ctx,
@@ -484,6 +511,7 @@ main (int    argc,
   ADD ("/files/save-limits/large-project-fits", test_large_project_fits);
 #undef ADD
   g_test_add_func ("/files/save-limits/reader-refuses-control-characters", test_reader_refuses_control_characters);
+  g_test_add_func ("/files/save-limits/reader-quotes-short", test_reader_quotes_short);
   g_test_add_func ("/files/save-limits/schema-agrees", test_schema_agrees);
   return g_test_run ();
 }
