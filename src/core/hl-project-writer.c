@@ -145,6 +145,7 @@ put_built_in_copies (GString         *out,
                      const HlProject *project)
 {
   g_autoptr(GHashTable) written = g_hash_table_new (g_str_hash, g_str_equal);
+  gboolean any = FALSE;
 
   for (guint i = 0; i < project->materials->len; i++)
     g_hash_table_add (written, g_array_index (project->materials, HlMaterial, i).id);
@@ -153,9 +154,12 @@ put_built_in_copies (GString         *out,
       const HlShellInputs *s = &g_array_index (project->shells, HlShellInputs, i);
 
       if (g_hash_table_add (written, (gpointer) s->material_ref))
-        put_material (out, s->material_ref, &s->material, TRUE);
+        {
+          put_material (out, s->material_ref, &s->material, TRUE);
+          any = TRUE;
+        }
     }
-  return g_hash_table_size (written) > project->materials->len;
+  return any;
 }
 
 char *
