@@ -8,6 +8,7 @@
 #include "hl-atomic-file.h"
 #include "hl-project-reader-private.h"
 #include "hl-limits.h"
+#include "hl-shell-check.h"
 
 #include <string.h>
 
@@ -274,11 +275,24 @@ check_fields (const HlProject *project,
       g_autofree char *owner = g_strdup_printf ("shell “%s”: ", s->id);
       g_autofree char *ref = g_strdup_printf ("shell “%s”: material-ref", s->id);
 
+      g_autoptr(GPtrArray) problems = NULL;
+
       /* the shell's copy of its material is what a built-in copy holds */
       if (!check_id ("shell id", s->id, error) || !check_text (owner, "name", s->name, HL_TEXT_NAME, error)
           || !check_id (ref, s->material_ref, error)
           || !check_text (owner, "material name", s->material.name, HL_TEXT_NAME, error))
         return FALSE;
+      /* the reader checks every shell's values; its message would name
+       * the field but not the shell */
+      problems = hl_shell_inputs_check (s);
+      if (problems->len > 0)
+        {
+          const HlProblem *p = g_ptr_array_index (problems, 0);
+
+          g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE, "Cannot save: %s%s: %s", owner,
+                       p->field, p->message);
+          return FALSE;
+        }
     }
   for (guint i = 0; i < project->revisions->len; i++)
     {

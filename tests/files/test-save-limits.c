@@ -304,6 +304,18 @@ test_outer_white_space (Fixture      *f,
   g_assert_cmpstr (f->project->title, ==, " A ");
 }
 
+/* A value the reader would refuse names the shell as well as the field
+ * (a corrosion allowance must be less than the wall, common practice). */
+static void
+test_shell_value_named (Fixture      *f,
+                        gconstpointer data)
+{
+  HlShellInputs *s = hl_project_shell (f->project, 0);
+
+  s->corrosion_allowance = hl_quantity_make (20, "mm");
+  expect_refused (f, "shell “shell-1”: corrosion-allowance", "less than the wall thickness");
+}
+
 /* A shell whose copy of its material differs from the project's
  * material would reopen with the project's values: the message says
  * which shell and which value. */
@@ -507,6 +519,7 @@ main (int    argc,
   ADD ("/files/save-limits/control-characters", test_control_characters);
   ADD ("/files/save-limits/outer-white-space", test_outer_white_space);
   ADD ("/files/save-limits/difference-is-named", test_difference_is_named);
+  ADD ("/files/save-limits/shell-value-named", test_shell_value_named);
   ADD ("/files/save-limits/too-large", test_too_large);
   ADD ("/files/save-limits/large-project-fits", test_large_project_fits);
 #undef ADD
