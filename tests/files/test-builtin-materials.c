@@ -175,12 +175,21 @@ test_copy_id_used_twice (void)
   g_autofree char *xml = hl_project_to_xml (p);
   g_auto(GStrv) parts = g_strsplit (xml, "  <shell ", 2);
   const char *start = strstr (xml, "  <material id=");
-  g_autofree char *copy = g_strndup (start, strstr (start, "</material>\n") + strlen ("</material>\n") - start);
-  g_auto(GStrv) without = g_strsplit (copy, "    <origin>built-in</origin>\n", 2);
-  g_autofree char *own = g_strjoinv ("", without);
-  g_autofree char *twice = g_strconcat (parts[0], own, "  <shell ", parts[1], NULL);
+  g_autofree char *copy = NULL;
+  g_auto(GStrv) without = NULL;
+  g_autofree char *own = NULL;
+  g_autofree char *twice = NULL;
   g_autoptr(GError) error = NULL;
-  g_autoptr(HlProject) back = hl_project_load_bytes (twice, strlen (twice), "memory", NULL, &error);
+  g_autoptr(HlProject) back = NULL;
+
+  /* the copy, once as written and once without its origin */
+  g_assert_nonnull (start);
+  copy = g_strndup (start, strstr (start, "</material>\n") + strlen ("</material>\n") - start);
+  without = g_strsplit (copy, "    <origin>built-in</origin>\n", 2);
+  g_assert_cmpuint (g_strv_length (without), ==, 2);
+  own = g_strjoinv ("", without);
+  twice = g_strconcat (parts[0], own, "  <shell ", parts[1], NULL);
+  back = hl_project_load_bytes (twice, strlen (twice), "memory", NULL, &error);
 
   g_assert_null (back);
   g_assert_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE);
