@@ -78,3 +78,31 @@ hl_text_quote (const char *text,
   end = g_utf8_offset_to_pointer (text, max_chars);
   return g_strdup_printf ("%.*s…", (int) (end - text), text);
 }
+
+char *
+hl_text_problem (const char *text,
+                 HlTextKind  kind)
+{
+  gboolean multi_line = kind == HL_TEXT_MULTI_LINE;
+  glong limit = multi_line ? HL_LIMIT_LONG_TEXT_CHARS : HL_LIMIT_SHORT_TEXT_CHARS;
+  gsize bytes;
+  glong chars;
+
+  if (text == NULL)
+    return NULL;
+  /* a slot cut inside a character holds a partial sequence */
+  if (!g_utf8_validate (text, -1, NULL))
+    return g_strdup ("is not valid UTF-8 (a character is cut or broken)");
+  bytes = strlen (text);
+  if (kind == HL_TEXT_NAME && bytes > HL_LIMIT_NAME_BYTES)
+    return g_strdup_printf ("is too long (%" G_GSIZE_FORMAT " bytes of UTF-8; this version keeps at most %d)",
+                            bytes, HL_LIMIT_NAME_BYTES);
+  chars = g_utf8_strlen (text, -1);
+  if (kind != HL_TEXT_NAME && chars > limit)
+    return g_strdup_printf ("is %ld characters long; at most %ld are allowed", chars, limit);
+  if (hl_text_has_control (text, multi_line))
+    return g_strdup (multi_line
+                     ? "holds a control character a project file cannot keep (only line breaks and tabs are kept)"
+                     : "holds a control character (a line break, tab or similar): a one-line text cannot keep it");
+  return NULL;
+}

@@ -42,6 +42,24 @@ gsize     hl_utf8_fit_bytes        (const char *text,
 gboolean  hl_text_has_control      (const char *text,
                                     gboolean    multi_line);
 
+/* What a project text may hold: the reader refuses the rest, so the
+ * writer and the fields check with the same function. */
+typedef enum
+{
+  HL_TEXT_ONE_LINE,    /* title, engineer, a revision's author */
+  HL_TEXT_MULTI_LINE,  /* description, a revision's text */
+  HL_TEXT_NAME,        /* shell and material names (fixed slots: bytes) */
+} HlTextKind;
+
+/* NULL when @text (already stripped of outer white space, as the reader
+ * strips it) fits @kind; else the reason, without the field's name:
+ * "is 1001 characters long; at most 1000 are allowed". */
+char     *hl_text_problem          (const char *text,
+                                    HlTextKind  kind);
+
+/* characters of a value a message quotes */
+#define HL_QUOTE_CHARS 40
+
 /* At most @max_chars characters of @text for a message, with "…" when
  * cut, so a pasted megabyte is not echoed back whole. */
 char     *hl_text_quote            (const char *text,

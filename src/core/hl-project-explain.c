@@ -43,6 +43,7 @@ static const char *const size_elements[] = {
 static const struct { const char *element, *words; } word_elements[] = {
   { "display-units", "si us" }, { "thin-radius-basis", "inner mean outer" },
   { "verdict-measure", "hoop equivalent" }, { "sizing-criterion", "von-mises tresca" },
+  { "origin", "built-in" },
 };
 
 gboolean
@@ -99,6 +100,13 @@ explain_value (HlReader    *rd,
       }
   if (strcmp (name, "material-ref") == 0 && !hl_reader_valid_id (g_strstrip (text)))
     hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not an id", text);
+  else if (strcmp (name, "name") == 0)
+    {
+      g_autofree char *problem = hl_text_problem (g_strstrip (text), HL_TEXT_NAME);
+
+      if (problem != NULL)
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "%s", problem);
+    }
   else if (chars > limit)
     hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "is %ld characters long; at most %ld are allowed", chars, limit);
 }
@@ -154,9 +162,15 @@ explain_attributes (HlReader    *rd,
       g_autofree char *date = hl_reader_prop (n, "date");
       guint64 v;
 
-      if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, HL_LIMIT_REVISION_NUMBER, &v, NULL))
-        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to 1000000",
-              number != NULL ? number : "");
+      g_autofree char *author = hl_reader_prop (n, "author");
+      glong author_chars = author != NULL && g_utf8_validate (author, -1, NULL) ? g_utf8_strlen (author, -1) : 0;
+
+      if (author_chars > HL_LIMIT_SHORT_TEXT_CHARS)
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, "revision author",
+                        "is %ld characters long; at most %d are allowed", author_chars, HL_LIMIT_SHORT_TEXT_CHARS);
+      else if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, HL_LIMIT_REVISION_NUMBER, &v, NULL))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to %d",
+              number != NULL ? number : "", HL_LIMIT_REVISION_NUMBER);
       else if (!hl_reader_valid_date (date))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "date “%s” is not a YYYY-MM-DD date", date != NULL ? date : "");
     }

@@ -1,7 +1,8 @@
 /* hl-project-guard.c — checks on a project file before and after parsing
  *
  * Bytes first: the file must be UTF-8 and declare nothing that libxml2
- * would expand or fetch.  Then the tree: its depth is capped.
+ * would expand or fetch.  Then the tree: its depth is capped while it is
+ * parsed (ctxt->_private is the HlReader) and checked once more after.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -9,6 +10,7 @@
 
 #include "hl-project-reader-private.h"
 
+#include <libxml/SAX2.h>
 #include <string.h>
 
 /* ---- before parsing ------------------------------------------------ */
@@ -123,6 +125,57 @@ hl_reader_refuse_declarations (HlReader     *rd,
         }
   return TRUE;
 }
+
+/* ---- while parsing ------------------------------------------------ */
+
+/* The depth cap while parsing: without it a file of "<x><x>…" would
+ * build millions of nested nodes before hl_reader_check_depth() saw them. */
+static void
+on_start_element (void           *ctx,
+                  const xmlChar  *localname,
+                  const xmlChar  *prefix,
+                  const xmlChar  *uri,
+                  int             nb_namespaces,
+                  const xmlChar **namespaces,
+                  int             nb_attributes,
+                  int             nb_defaulted,
+                  const xmlChar **attributes)
+{
+  xmlParserCtxtPtr ctxt = ctx;
+  HlReader *rd = ctxt->_private;
+
+  if (++rd->parse_depth > HL_PROJECT_FILE_MAX_DEPTH)
+    {
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_UNSAFE, xmlSAX2GetLineNumber (ctx), (const char *) localname,
+                      "elements nested deeper than %d levels", HL_PROJECT_FILE_MAX_DEPTH);
+      xmlStopParser (ctxt);
+      return;
+    }
+  xmlSAX2StartElementNs (ctx, localname, prefix, uri, nb_namespaces, namespaces, nb_attributes, nb_defaulted,
+                         attributes);
+}
+
+static void
+on_end_element (void          *ctx,
+                const xmlChar *localname,
+                const xmlChar *prefix,
+                const xmlChar *uri)
+{
+  xmlParserCtxtPtr ctxt = ctx;
+  HlReader *rd = ctxt->_private;
+
+  rd->parse_depth--;
+  xmlSAX2EndElementNs (ctx, localname, prefix, uri);
+}
+
+void
+hl_reader_cap_depth_while_parsing (xmlParserCtxtPtr ctxt)
+{
+  ctxt->sax->startElementNs = on_start_element;
+  ctxt->sax->endElementNs = on_end_element;
+}
+
+/* ---- after parsing ------------------------------------------------- */
 
 gboolean
 hl_reader_check_depth (HlReader    *rd,

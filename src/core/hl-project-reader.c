@@ -14,17 +14,41 @@
 #include "hl-project-reader-private.h"
 #include "hl-limits.h"
 #include "hl-shell-check.h"
-#include "hl-core-resources.h"
 
 #include <gio/gio.h>
 #include <libxml/parser.h>
-#include <libxml/relaxng.h>
 #include <libxml/xmlerror.h>
 #include <string.h>
 
 G_DEFINE_QUARK (hl-project-file-error-quark, hl_project_file_error)
 
 
+
+/* Values from the file are quoted “like this”; a megabyte pasted into
+ * one must not come back whole in the message.  Takes @msg. */
+static char *
+shorten_quotes (char *msg)
+{
+  GString *out;
+  const char *p = msg, *open, *close;
+
+  if (strstr (msg, "“") == NULL)
+    return msg;
+  out = g_string_new (NULL);
+  while ((open = strstr (p, "“")) != NULL && (close = strstr (open, "”")) != NULL)
+    {
+      const char *inside = open + strlen ("“");
+      g_autofree char *value = g_strndup (inside, close - inside);
+      g_autofree char *quoted = hl_text_quote (value, HL_QUOTE_CHARS);
+
+      g_string_append_len (out, p, inside - p);
+      g_string_append (out, quoted);
+      p = close;
+    }
+  g_string_append (out, p);
+  g_free (msg);
+  return g_string_free (out, FALSE);
+}
 
 void
 hl_reader_fail (HlReader     *rd,
@@ -40,7 +64,7 @@ hl_reader_fail (HlReader     *rd,
   if (rd->error != NULL)
     return;
   va_start (args, format);
-  msg = g_strdup_vprintf (format, args);
+  msg = shorten_quotes (g_strdup_vprintf (format, args));
   va_end (args);
   if (element != NULL)
     g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s: %s", rd->name, MAX (line, 1), element, msg);
@@ -50,9 +74,9 @@ hl_reader_fail (HlReader     *rd,
 
 /* ---- libxml2 error capture ---------------------------------------- */
 
-static void
-on_structured_error (void        *user_data,
-                     xmlErrorPtr  err)
+void
+hl_reader_on_structured_error (void        *user_data,
+                               xmlErrorPtr  err)
 {
   HlReader *rd = user_data;
   g_autofree char *msg = NULL;
@@ -83,7 +107,7 @@ const char *const hl_reader_known_project[] = {
   "title", "engineer", "description", "display-units", "material", "shell", "revision", NULL
 };
 const char *const hl_reader_known_material[] = {
-  "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
+  "origin", "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
 };
 const char *const hl_reader_known_shell[] = {
   "name", "material-ref", "inner-diameter", "outer-diameter", "inner-radius", "outer-radius",
@@ -123,99 +147,6 @@ drop_unknown (HlReader            *rd,
         }
       n = next;
     }
-}
-
-/* For each value, libxml2 2.9 compiles a pattern facet's regular
- * expression anew (xmlSchemaCheckFacet calls xmlRegexpCompile) and looks
- * the XSD type up by its long namespace name: with ten numbers a shell,
- * that was two thirds of the time to load a 1,000-shell file.  The
- * reader checks every number (hl_parse_number) and every id (check_id)
- * itself with the same rules, so the in-memory copy of the schema takes
- * those values as plain text.  The shipped schema keeps the patterns for
- * other tools; should its text ever differ, the copy stays whole, only
- * slower. */
-static GString *
-fast_schema_text (const char *data,
-                  gsize       size)
-{
-  static const char *const checked_here[] = {
-    "<data type=\"string\"><param name=\"pattern\">[A-Za-z0-9_][A-Za-z0-9_.\\-]{0,62}</param></data>",
-    "<data type=\"string\"><param name=\"pattern\">\\s*[+\\-]?([0-9]+(\\.[0-9]*)?|\\.[0-9]+)([eE][+\\-]?[0-9]+)?\\s*</param></data>",
-  };
-  GString *text = g_string_new_len (data, (gssize) size);
-
-  for (guint i = 0; i < G_N_ELEMENTS (checked_here); i++)
-    g_string_replace (text, checked_here[i], "<text/>", 1);
-  return text;
-}
-
-static xmlRelaxNGPtr
-load_schema (HlReader *rd)
-{
-  /* looked up in our own resource: a static library drops unreferenced
-   * constructors, so global registration cannot be relied on */
-  g_autoptr(GBytes) bytes = g_resource_lookup_data (hl_core_get_resource (),
-                                                    "/org/hoopline/core/hoopline-project.rng",
-                                                    G_RESOURCE_LOOKUP_FLAGS_NONE, NULL);
-  g_autoptr(GString) text = NULL;
-  xmlRelaxNGParserCtxtPtr pctx;
-  xmlRelaxNGPtr schema;
-  gsize size;
-  const char *data;
-
-  if (bytes == NULL)
-    {
-      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema is missing from this build");
-      return NULL;
-    }
-  data = g_bytes_get_data (bytes, &size);
-  text = fast_schema_text (data, size);
-  pctx = xmlRelaxNGNewMemParserCtxt (text->str, (int) text->len);
-  schema = xmlRelaxNGParse (pctx);
-  xmlRelaxNGFreeParserCtxt (pctx);
-  if (schema == NULL)
-    hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
-  return schema;
-}
-
-
-static gboolean
-validate (HlReader   *rd,
-          xmlDocPtr doc)
-{
-  static xmlRelaxNGPtr schema; /* parsed once, read-only afterwards */
-  static gsize schema_once;
-  xmlRelaxNGValidCtxtPtr vctx;
-  int rc;
-
-  if (g_once_init_enter (&schema_once))
-    {
-      schema = load_schema (rd);
-      g_once_init_leave (&schema_once, 1);
-    }
-  if (schema == NULL)
-    {
-      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_IO, 1, NULL, "the project schema of this build does not load");
-      return FALSE;
-    }
-  vctx = xmlRelaxNGNewValidCtxt (schema);
-  xmlRelaxNGSetValidStructuredErrors (vctx, on_structured_error, rd);
-  rc = xmlRelaxNGValidateDoc (vctx, doc);
-  xmlRelaxNGFreeValidCtxt (vctx);
-  if (rc != 0)
-    {
-      GError *schema_error = g_steal_pointer (&rd->error);
-
-      hl_reader_explain_invalid (rd, xmlDocGetRootElement (doc));
-      if (rd->error != NULL)
-        g_clear_error (&schema_error);
-      else
-        rd->error = schema_error;
-      if (rd->error == NULL)
-        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (xmlDocGetRootElement (doc)), NULL,
-              "the file does not follow the Hoopline project format");
-    }
-  return rc == 0;
 }
 
 /* ---- values -------------------------------------------------------- */
@@ -302,7 +233,17 @@ copy_text (HlReader     *rd,
     return TRUE;
   text = hl_reader_text (n);
   g_strstrip (text);
-  if (strlen (text) >= size)
+  if (strcmp (name, "name") == 0)
+    {
+      g_autofree char *problem = hl_text_problem (text, HL_TEXT_NAME);
+
+      if (problem != NULL)
+        {
+          hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name, "%s", problem);
+          return FALSE;
+        }
+    }
+  else if (strlen (text) >= size)
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), name,
             "is too long (%" G_GSIZE_FORMAT " bytes of UTF-8; this version keeps at most %" G_GSIZE_FORMAT ")",
@@ -361,7 +302,7 @@ read_material (HlReader    *rd,
 
   if (!check_id (rd, n, "material", id))
     return FALSE;
-  if (hl_project_find_material (project, id) != NULL)
+  if (g_hash_table_contains (rd->material_ids, id) || g_hash_table_contains (rd->copies, id))
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "material", "the id “%s” is used twice", id);
       return FALSE;
@@ -388,7 +329,16 @@ read_material (HlReader    *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s", p->message);
       return FALSE;
     }
+  /* a built-in material the file keeps a copy of: its values are the
+   * ones the shells were saved with, whatever this version's table says,
+   * but it is not one of the project's own materials */
+  if (hl_reader_child (n, "origin") != NULL)
+    {
+      g_hash_table_insert (rd->copies, g_strdup (id), g_memdup2 (&m, sizeof m));
+      return TRUE;
+    }
   g_array_append_val (project->materials, m);
+  g_hash_table_insert (rd->material_ids, g_strdup (id), GUINT_TO_POINTER (project->materials->len));
   return TRUE;
 }
 
@@ -431,12 +381,37 @@ read_choice (xmlNodePtr  parent,
   from_string (g_strstrip (text), out);
 }
 
+static const HlMaterial *
+reader_material (HlReader        *rd,
+                 const HlProject *project,
+                 const char      *id)
+{
+  guint index = GPOINTER_TO_UINT (g_hash_table_lookup (rd->material_ids, id));
+
+  if (index > 0)
+    return &g_array_index (project->materials, HlMaterial, index - 1);
+  return g_hash_table_lookup (rd->copies, id);
+}
+
+HlShellInputs
+hl_reader_shell_default (const char *id)
+{
+  HlShellInputs s = hl_shell_inputs_default ();
+
+  g_strlcpy (s.id, id, sizeof s.id);
+  g_strlcpy (s.name, id, sizeof s.name);
+  /* a pressure the file does not give is zero, not the window's
+   * new-shell example value */
+  s.internal_pressure = hl_quantity_make (0, "bar");
+  return s;
+}
+
 static gboolean
 read_shell (HlReader    *rd,
             HlProject *project,
             xmlNodePtr n)
 {
-  HlShellInputs s = hl_shell_inputs_default ();
+  HlShellInputs s;
   g_autofree char *id = hl_reader_prop (n, "id");
   g_autofree char *form = hl_reader_prop (n, "form");
   g_autofree char *ends = hl_reader_prop (n, "ends");
@@ -451,11 +426,7 @@ read_shell (HlReader    *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "the id “%s” is used twice", id);
       return FALSE;
     }
-  g_strlcpy (s.id, id, sizeof s.id);
-  g_strlcpy (s.name, id, sizeof s.name);
-  /* a pressure the file does not give is zero, not the window's
-   * new-shell example value */
-  s.internal_pressure = hl_quantity_make (0, "bar");
+  s = hl_reader_shell_default (id);
   if (!copy_text (rd, n, "name", s.name, sizeof s.name)
       || !copy_text (rd, n, "material-ref", s.material_ref, sizeof s.material_ref)
       || !check_id (rd, hl_reader_child (n, "material-ref"), "material-ref", s.material_ref))
@@ -465,7 +436,7 @@ read_shell (HlReader    *rd,
   if (ends != NULL)
     hl_ends_from_string (ends, &s.ends);
 
-  material = hl_project_find_material (project, s.material_ref);
+  material = reader_material (rd, project, s.material_ref);
   if (material == NULL)
     material = hl_material_builtin_find (s.material_ref);
   if (material == NULL)
@@ -501,7 +472,7 @@ read_shell (HlReader    *rd,
     {
       HlProblem *p = g_ptr_array_index (problems, 0);
       /* material fields live in the material element */
-      gboolean in_material = hl_reader_child (n, p->field) == NULL && hl_project_find_material (project, s.material_ref) != NULL;
+      gboolean in_material = hl_reader_child (n, p->field) == NULL && reader_material (rd, project, s.material_ref) != NULL;
 
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s%s", p->message,
             in_material ? " (in the shell's material)" : "");
@@ -509,6 +480,38 @@ read_shell (HlReader    *rd,
     }
   g_array_append_val (project->shells, s);
   return TRUE;
+}
+
+/* The same limits the writer checks (hl_text_problem); the schema has
+ * already held the length, this adds control characters. */
+static gboolean
+check_text (HlReader   *rd,
+            xmlNodePtr  n,
+            const char *field,
+            const char *text,
+            HlTextKind  kind)
+{
+  g_autofree char *problem = hl_text_problem (text, kind);
+
+  if (problem == NULL)
+    return TRUE;
+  hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), field, "%s", problem);
+  return FALSE;
+}
+
+static gboolean
+read_text (HlReader   *rd,
+           xmlNodePtr  parent,
+           const char *name,
+           HlTextKind  kind,
+           char      **text)
+{
+  xmlNodePtr n = hl_reader_child (parent, name);
+
+  if (n == NULL)
+    return TRUE;
+  *text = g_strstrip (hl_reader_text (n));
+  return check_text (rd, n, name, *text, kind);
 }
 
 static gboolean
@@ -524,7 +527,8 @@ read_revision (HlReader    *rd,
 
   if (!g_ascii_string_to_unsigned (g_strstrip (number), 10, 1, HL_LIMIT_REVISION_NUMBER, &value, NULL))
     {
-      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to 1000000", number);
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "number “%s” is not a whole number from 1 to %d", number,
+                      HL_LIMIT_REVISION_NUMBER);
       return FALSE;
     }
   /* the schema's date type also takes time zones and five-digit years */
@@ -533,7 +537,11 @@ read_revision (HlReader    *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "date “%s” is not a YYYY-MM-DD date", date);
       return FALSE;
     }
-  hl_project_add_revision (project, (guint) value, g_strstrip (date), author, g_strstrip (text));
+  if (author != NULL && !check_text (rd, n, "revision author", g_strstrip (author), HL_TEXT_ONE_LINE))
+    return FALSE;
+  if (!check_text (rd, n, "revision", g_strstrip (text), HL_TEXT_MULTI_LINE))
+    return FALSE;
+  hl_project_add_revision (project, (guint) value, g_strstrip (date), author, text);
   return TRUE;
 }
 
@@ -545,12 +553,13 @@ build_project (HlReader    *rd,
   g_autofree char *title = NULL, *engineer = NULL, *description = NULL, *units = NULL;
   xmlNodePtr n;
 
-  if ((n = hl_reader_child (root, "title")) != NULL)
-    hl_project_set_title (project, g_strstrip (title = hl_reader_text (n)));
-  if ((n = hl_reader_child (root, "engineer")) != NULL)
-    hl_project_set_engineer (project, g_strstrip (engineer = hl_reader_text (n)));
-  if ((n = hl_reader_child (root, "description")) != NULL)
-    hl_project_set_description (project, g_strstrip (description = hl_reader_text (n)));
+  if (!read_text (rd, root, "title", HL_TEXT_ONE_LINE, &title)
+      || !read_text (rd, root, "engineer", HL_TEXT_ONE_LINE, &engineer)
+      || !read_text (rd, root, "description", HL_TEXT_MULTI_LINE, &description))
+    return NULL;
+  hl_project_set_title (project, title);
+  hl_project_set_engineer (project, engineer);
+  hl_project_set_description (project, description);
   if ((n = hl_reader_child (root, "display-units")) != NULL)
     project->display_units = strcmp (g_strstrip (units = hl_reader_text (n)), "us") == 0
                                ? HL_UNIT_SYSTEM_US : HL_UNIT_SYSTEM_SI;
@@ -623,7 +632,9 @@ hl_project_load_bytes (const char  *data,
                        GError     **error)
 {
   HlReader rd = { display_name != NULL ? display_name : "project", NULL, NULL,
-                g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL) };
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL),
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL),
+                  g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free), 0 };
   xmlParserCtxtPtr ctxt;
   xmlDocPtr doc = NULL;
   HlProject *project = NULL;
@@ -643,12 +654,18 @@ hl_project_load_bytes (const char  *data,
   else if (hl_reader_refuse_declarations (&rd, data, length))
     {
       ctxt = xmlNewParserCtxt ();
-      xmlSetStructuredErrorFunc (&rd, on_structured_error);
+      ctxt->_private = &rd;
+      hl_reader_cap_depth_while_parsing (ctxt);
+      xmlSetStructuredErrorFunc (&rd, hl_reader_on_structured_error);
       /* NONET: never fetch; no NOENT/DTDLOAD: never expand or load;
-       * the bytes are UTF-8 whatever the declaration says */
+       * the bytes are UTF-8 whatever the declaration says.  HUGE lifts
+       * libxml2's 10 MB limits on one text, comment or lookahead, which
+       * refused files below our own 16 MiB cap ("Huge input lookup",
+       * "Comment too big"); it also lifts libxml2's depth limit, so
+       * ours applies while parsing. */
       doc = xmlCtxtReadMemory (ctxt, data, (int) length, rd.name, "UTF-8",
                                XML_PARSE_NONET | XML_PARSE_NOCDATA | XML_PARSE_IGNORE_ENC | XML_PARSE_BIG_LINES
-                               | XML_PARSE_COMPACT);
+                               | XML_PARSE_COMPACT | XML_PARSE_HUGE);
       xmlSetStructuredErrorFunc (NULL, NULL);
       if (doc == NULL && rd.error == NULL)
         hl_reader_fail (&rd, HL_PROJECT_FILE_ERROR_SYNTAX, 1, NULL, "not a well-formed XML document");
@@ -658,11 +675,13 @@ hl_project_load_bytes (const char  *data,
   if (doc != NULL && rd.error == NULL
       && hl_reader_check_depth (&rd, xmlDocGetRootElement (doc), 1)
       && check_root (&rd, xmlDocGetRootElement (doc))
-      && validate (&rd, doc))
+      && hl_reader_validate (&rd, doc))
     project = build_project (&rd, xmlDocGetRootElement (doc));
   if (doc != NULL)
     xmlFreeDoc (doc);
   g_hash_table_unref (rd.shell_ids);
+  g_hash_table_unref (rd.material_ids);
+  g_hash_table_unref (rd.copies);
 
   if (rd.error != NULL)
     {

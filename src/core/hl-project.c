@@ -67,36 +67,160 @@ hl_project_free (HlProject *project)
   g_free (project);
 }
 
+void
+hl_project_strip_texts (HlProject *project)
+{
+  g_strstrip (project->title);
+  g_strstrip (project->engineer);
+  g_strstrip (project->description);
+  for (guint i = 0; i < project->materials->len; i++)
+    g_strstrip (g_array_index (project->materials, HlMaterial, i).name);
+  for (guint i = 0; i < project->shells->len; i++)
+    {
+      HlShellInputs *s = &g_array_index (project->shells, HlShellInputs, i);
+
+      g_strstrip (s->name);
+      g_strstrip (s->material.name);
+    }
+  for (guint i = 0; i < project->revisions->len; i++)
+    {
+      HlRevision *r = &g_array_index (project->revisions, HlRevision, i);
+
+      g_strstrip (r->author);
+      g_strstrip (r->text);
+    }
+}
+
+static const char *
+material_difference (const HlMaterial *a,
+                     const HlMaterial *b)
+{
+  if (strcmp (a->id, b->id) != 0)
+    return "id";
+  if (strcmp (a->name, b->name) != 0)
+    return "name";
+  if (!hl_quantity_equal (a->elastic_modulus, b->elastic_modulus))
+    return "elastic-modulus";
+  if (a->poisson_ratio != b->poisson_ratio)
+    return "poisson-ratio";
+  if (!hl_quantity_equal (a->yield_strength, b->yield_strength))
+    return "yield-strength";
+  if (!hl_quantity_equal (a->allowable_stress, b->allowable_stress))
+    return "allowable-stress";
+  return NULL;
+}
+
+/* the file's element (or attribute) names, so the message points at
+ * the field to fix */
+static char *
+shell_difference (const HlShellInputs *a,
+                  const HlShellInputs *b)
+{
+  static const struct { const char *field; gsize offset; } quantities[] = {
+    { "wall-thickness", G_STRUCT_OFFSET (HlShellInputs, wall_thickness) },
+    { "corrosion-allowance", G_STRUCT_OFFSET (HlShellInputs, corrosion_allowance) },
+    { "internal-pressure", G_STRUCT_OFFSET (HlShellInputs, internal_pressure) },
+    { "external-pressure", G_STRUCT_OFFSET (HlShellInputs, external_pressure) },
+    { "thin-tolerance", G_STRUCT_OFFSET (HlShellInputs, thin_tolerance) },
+  };
+  const char *material;
+
+  if (strcmp (a->id, b->id) != 0)
+    return g_strdup ("id");
+  if (strcmp (a->name, b->name) != 0)
+    return g_strdup ("name");
+  if (a->form != b->form)
+    return g_strdup ("form");
+  if (a->ends != b->ends)
+    return g_strdup ("ends");
+  if (a->size_kind != b->size_kind || !hl_quantity_equal (a->size, b->size))
+    return g_strdup (hl_size_kind_to_element (a->size_kind));
+  for (guint i = 0; i < G_N_ELEMENTS (quantities); i++)
+    if (!hl_quantity_equal (G_STRUCT_MEMBER (HlQuantity, a, quantities[i].offset),
+                            G_STRUCT_MEMBER (HlQuantity, b, quantities[i].offset)))
+      return g_strdup (quantities[i].field);
+  if (strcmp (a->material_ref, b->material_ref) != 0)
+    return g_strdup ("material-ref");
+  if ((material = material_difference (&a->material, &b->material)) != NULL)
+    return g_strdup_printf ("material %s (the shell's copy differs from the material “%s” the file holds)",
+                            material, a->material_ref);
+  if (a->joint_efficiency != b->joint_efficiency)
+    return g_strdup ("joint-efficiency");
+  if (a->thin_basis != b->thin_basis)
+    return g_strdup ("thin-radius-basis");
+  if (a->verdict_measure != b->verdict_measure)
+    return g_strdup ("verdict-measure");
+  if (a->sizing_criterion != b->sizing_criterion)
+    return g_strdup ("sizing-criterion");
+  return NULL;
+}
+
+static char *
+revision_difference (const HlRevision *a,
+                     const HlRevision *b)
+{
+  const char *field = a->number != b->number ? "number"
+                      : strcmp (a->date, b->date) != 0 ? "date"
+                      : g_strcmp0 (a->author, b->author) != 0 ? "author"
+                      : g_strcmp0 (a->text, b->text) != 0 ? "text" : NULL;
+
+  return field != NULL ? g_strdup_printf ("revision %u: %s", a->number, field) : NULL;
+}
+
+char *
+hl_project_first_difference (const HlProject *a,
+                             const HlProject *b)
+{
+  g_return_val_if_fail (a != NULL && b != NULL, NULL);
+
+  if (g_strcmp0 (a->title, b->title) != 0)
+    return g_strdup ("title");
+  if (g_strcmp0 (a->engineer, b->engineer) != 0)
+    return g_strdup ("engineer");
+  if (g_strcmp0 (a->description, b->description) != 0)
+    return g_strdup ("description");
+  if (a->display_units != b->display_units)
+    return g_strdup ("display-units");
+  for (guint i = 0; i < MIN (a->materials->len, b->materials->len); i++)
+    {
+      const HlMaterial *ma = &g_array_index (a->materials, HlMaterial, i);
+      const char *field = material_difference (ma, &g_array_index (b->materials, HlMaterial, i));
+
+      if (field != NULL)
+        return g_strdup_printf ("material “%s”: %s", ma->id, field);
+    }
+  if (a->materials->len != b->materials->len)
+    return g_strdup_printf ("the number of materials (%u, not %u)", b->materials->len, a->materials->len);
+  for (guint i = 0; i < MIN (a->shells->len, b->shells->len); i++)
+    {
+      const HlShellInputs *sa = &g_array_index (a->shells, HlShellInputs, i);
+      g_autofree char *field = shell_difference (sa, &g_array_index (b->shells, HlShellInputs, i));
+
+      if (field != NULL)
+        return g_strdup_printf ("shell “%s”: %s", sa->id, field);
+    }
+  if (a->shells->len != b->shells->len)
+    return g_strdup_printf ("the number of shells (%u, not %u)", b->shells->len, a->shells->len);
+  for (guint i = 0; i < MIN (a->revisions->len, b->revisions->len); i++)
+    {
+      char *field = revision_difference (&g_array_index (a->revisions, HlRevision, i),
+                                         &g_array_index (b->revisions, HlRevision, i));
+
+      if (field != NULL)
+        return field;
+    }
+  if (a->revisions->len != b->revisions->len)
+    return g_strdup_printf ("the number of revisions (%u, not %u)", b->revisions->len, a->revisions->len);
+  return NULL;
+}
+
 gboolean
 hl_project_equal (const HlProject *a,
                   const HlProject *b)
 {
-  if (g_strcmp0 (a->title, b->title) != 0
-      || g_strcmp0 (a->engineer, b->engineer) != 0
-      || g_strcmp0 (a->description, b->description) != 0
-      || a->display_units != b->display_units
-      || a->materials->len != b->materials->len
-      || a->shells->len != b->shells->len
-      || a->revisions->len != b->revisions->len)
-    return FALSE;
-  for (guint i = 0; i < a->materials->len; i++)
-    if (!hl_material_equal (&g_array_index (a->materials, HlMaterial, i),
-                            &g_array_index (b->materials, HlMaterial, i)))
-      return FALSE;
-  for (guint i = 0; i < a->shells->len; i++)
-    if (!hl_shell_inputs_equal (&g_array_index (a->shells, HlShellInputs, i),
-                                &g_array_index (b->shells, HlShellInputs, i)))
-      return FALSE;
-  for (guint i = 0; i < a->revisions->len; i++)
-    {
-      const HlRevision *ra = &g_array_index (a->revisions, HlRevision, i);
-      const HlRevision *rb = &g_array_index (b->revisions, HlRevision, i);
+  g_autofree char *difference = hl_project_first_difference (a, b);
 
-      if (ra->number != rb->number || strcmp (ra->date, rb->date) != 0
-          || g_strcmp0 (ra->author, rb->author) != 0 || g_strcmp0 (ra->text, rb->text) != 0)
-        return FALSE;
-    }
-  return TRUE;
+  return difference == NULL;
 }
 
 static void

@@ -33,6 +33,17 @@ void                 hl_project_free          (HlProject       *project);
 gboolean             hl_project_equal         (const HlProject *a,
                                                const HlProject *b);
 
+/* The reader strips the outer white space of every text it reads; this
+ * does the same to @project, so what a save writes reads back equal.
+ * The setters keep texts as typed: a field being edited must keep the
+ * space typed before the next word. */
+void                 hl_project_strip_texts   (HlProject       *project);
+/* NULL when @a and @b are equal, else the first place they differ, as
+ * the file names it: "title", "shell “s1”: wall-thickness",
+ * "shell “s1”: material yield-strength", "revision 3: text". */
+char                *hl_project_first_difference (const HlProject *a,
+                                                  const HlProject *b);
+
 void                 hl_project_set_title       (HlProject *project, const char *title);
 void                 hl_project_set_engineer    (HlProject *project, const char *engineer);
 void                 hl_project_set_description (HlProject *project, const char *description);
