@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-material"
 
 #include "hl-material.h"
+#include "hl-field-table.h"
 
 #include <string.h>
 
@@ -35,12 +36,17 @@ gboolean
 hl_material_equal (const HlMaterial *a,
                    const HlMaterial *b)
 {
-  return strcmp (a->id, b->id) == 0
-         && strcmp (a->name, b->name) == 0
-         && hl_quantity_equal (a->elastic_modulus, b->elastic_modulus)
-         && a->poisson_ratio == b->poisson_ratio
-         && hl_quantity_equal (a->yield_strength, b->yield_strength)
-         && hl_quantity_equal (a->allowable_stress, b->allowable_stress);
+  if (strcmp (a->id, b->id) != 0)
+    return FALSE;
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_MATERIAL
+          && !hl_field_equal (f, hl_field_material_cslot (f, a), hl_field_material_cslot (f, b)))
+        return FALSE;
+    }
+  return TRUE;
 }
 
 guint

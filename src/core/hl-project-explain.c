@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-project-reader"
 
 #include "hl-project-reader-private.h"
+#include "hl-field-table.h"
 #include "hl-limits.h"
 
 #include <string.h>
@@ -32,19 +33,52 @@ hl_reader_valid_date (const char *date)
  * and say them plainly.  They only choose the message: whether a file
  * loads is decided by the schema and the value checks alone. */
 
-static const char *const number_elements[] = {
-  "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", "inner-diameter",
-  "outer-diameter", "inner-radius", "outer-radius", "wall-thickness", "corrosion-allowance",
-  "internal-pressure", "external-pressure", "joint-efficiency", "thin-tolerance", NULL
-};
-static const char *const size_elements[] = {
-  "inner-diameter", "outer-diameter", "inner-radius", "outer-radius", NULL
-};
+/* words of elements outside the field table */
 static const struct { const char *element, *words; } word_elements[] = {
-  { "display-units", "si us" }, { "thin-radius-basis", "inner mean outer" },
-  { "verdict-measure", "hoop equivalent" }, { "sizing-criterion", "von-mises tresca" },
-  { "origin", "built-in" },
+  { "display-units", "si us" }, { "origin", "built-in" },
 };
+
+/* a number element of shells or materials */
+static const HlField *
+number_field (const char *name)
+{
+  const HlField *f = hl_field_lookup (name);
+
+  return f != NULL && hl_field_is_number (f) ? f : NULL;
+}
+
+static gboolean
+is_size_element (const char *name)
+{
+  const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, name);
+
+  return f != NULL && f->is_size;
+}
+
+/* the words @name may hold, or NULL when it is no word element */
+static GStrv
+choice_words (const char *name)
+{
+  const HlField *f = hl_field_lookup (name);
+  g_autoptr(GStrvBuilder) builder = g_strv_builder_new ();
+  g_auto(GStrv) words = NULL;
+
+  if (f != NULL && f->kind == HL_FIELD_CHOICE)
+    for (const HlFieldChoice *c = f->choices; c->word != NULL; c++)
+      g_strv_builder_add (builder, c->word);
+  else
+    for (guint i = 0; i < G_N_ELEMENTS (word_elements); i++)
+      if (strcmp (name, word_elements[i].element) == 0)
+        {
+          g_auto(GStrv) split = g_strsplit (word_elements[i].words, " ", -1);
+
+          g_strv_builder_addv (builder, (const char **) split);
+        }
+  words = g_strv_builder_end (builder);
+  if (words[0] == NULL)
+    return NULL;
+  return g_steal_pointer (&words);
+}
 
 gboolean
 hl_reader_valid_id (const char *id)
@@ -66,6 +100,7 @@ explain_value (HlReader    *rd,
   const char *name = (const char *) n->name;
   g_autofree char *text = hl_reader_text (n);
   g_autofree char *unit = hl_reader_prop (n, "unit");
+  g_auto(GStrv) words = NULL;
   long line = xmlGetLineNo (n);
   glong chars = g_utf8_strlen (text, -1);
   glong limit = g_strv_contains ((const char *const[]) { "description", "revision", NULL }, name)
@@ -77,27 +112,25 @@ explain_value (HlReader    *rd,
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), name, "holds the element <%s> where a value belongs", c->name);
         return;
       }
-  if (g_strv_contains (number_elements, name))
+  if (number_field (name) != NULL)
     {
       g_autoptr(GError) local = NULL;
       double v;
 
       if (!hl_parse_number (text, &v, &local))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "%s", local->message);
-      else if (unit == NULL && !g_strv_contains ((const char *const[]) { "poisson-ratio", "joint-efficiency", "thin-tolerance", NULL }, name))
+      else if (unit == NULL && !hl_field_unit_optional (number_field (name)))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, line, name, "the unit attribute is missing");
       return;
     }
-  for (guint i = 0; i < G_N_ELEMENTS (word_elements); i++)
-    if (strcmp (name, word_elements[i].element) == 0)
-      {
-        g_auto(GStrv) words = g_strsplit (word_elements[i].words, " ", -1);
-        g_autofree char *list = g_strjoinv (", ", words);
+  if ((words = choice_words (name)) != NULL)
+    {
+      g_autofree char *list = g_strjoinv (", ", words);
 
-        if (!g_strv_contains ((const char *const *) words, g_strstrip (text)))
-          hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not one of %s", text, list);
-        return;
-      }
+      if (!g_strv_contains ((const char *const *) words, g_strstrip (text)))
+        hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not one of %s", text, list);
+      return;
+    }
   if (strcmp (name, "material-ref") == 0 && !hl_reader_valid_id (g_strstrip (text)))
     hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "“%s” is not an id", text);
   else if (strcmp (name, "name") == 0)
@@ -122,7 +155,7 @@ explain_attributes (HlReader    *rd,
                                : strcmp (name, "revision") == 0 ? revision_attrs
                                : strcmp (name, "material") == 0 ? (const char *const[]) { "id", NULL }
                                : strcmp (name, "hoopline-project") == 0 ? (const char *const[]) { "format", NULL }
-                               : g_strv_contains (number_elements, name) ? (const char *const[]) { "unit", NULL }
+                               : number_field (name) != NULL ? (const char *const[]) { "unit", NULL }
                                : (const char *const[]) { NULL };
   g_autofree char *id = hl_reader_prop (n, "id");
   g_autofree char *form = hl_reader_prop (n, "form");
@@ -196,14 +229,14 @@ explain_children (HlReader            *rd,
         continue;
       if (!g_strv_contains (known, cname))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "is not an element of <%s> in format 1", name);
-      else if (g_strv_contains (size_elements, cname) && size != NULL)
+      else if (is_size_element (cname) && size != NULL)
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname,
               "a second size after <%s>: give exactly one of inner-diameter, outer-diameter, inner-radius, outer-radius", size);
       else if (g_hash_table_contains (seen, cname)
                && !g_strv_contains ((const char *const[]) { "material", "shell", "revision", NULL }, cname))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "appears twice in <%s>", name);
       g_hash_table_add (seen, (gpointer) cname);
-      if (g_strv_contains (size_elements, cname))
+      if (is_size_element (cname))
         size = cname;
     }
   for (guint i = 0; required[i] != NULL && rd->error == NULL; i++)
@@ -218,10 +251,20 @@ void
 hl_reader_explain_invalid (HlReader    *rd,
                  xmlNodePtr root)
 {
-  static const char *const material_required[] = {
-    "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
-  };
-  static const char *const shell_required[] = { "material-ref", "wall-thickness", NULL };
+  g_autoptr(GStrvBuilder) material_builder = g_strv_builder_new ();
+  g_autoptr(GStrvBuilder) shell_builder = g_strv_builder_new ();
+  g_auto(GStrv) material_required = NULL;
+  g_auto(GStrv) shell_required = NULL;
+
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->required)
+        g_strv_builder_add (f->owner == HL_FIELD_OF_MATERIAL ? material_builder : shell_builder, f->element);
+    }
+  material_required = g_strv_builder_end (material_builder);
+  shell_required = g_strv_builder_end (shell_builder);
 
   explain_attributes (rd, root);
   explain_children (rd, root, hl_reader_known_project, (const char *const[]) { "shell", NULL });
@@ -236,8 +279,8 @@ hl_reader_explain_invalid (HlReader    *rd,
       if (material || shell)
         {
           if (rd->error == NULL)
-            explain_children (rd, n, material ? hl_reader_known_material : hl_reader_known_shell,
-                              material ? material_required : shell_required);
+            explain_children (rd, n, material ? hl_reader_known_material () : hl_reader_known_shell (),
+                              (const char *const *) (material ? material_required : shell_required));
           for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
             if (c->type == XML_ELEMENT_NODE)
               {

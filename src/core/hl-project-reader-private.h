@@ -49,8 +49,9 @@ gboolean    hl_reader_valid_id            (const char *id);
 gboolean    hl_reader_valid_date          (const char *date);
 
 extern const char *const hl_reader_known_project[];
-extern const char *const hl_reader_known_material[];
-extern const char *const hl_reader_known_shell[];
+/* the field table's elements; a material also holds <origin> */
+const char *const *hl_reader_known_material (void);
+const char *const *hl_reader_known_shell    (void);
 
 /* hl-project-guard.c */
 gboolean    hl_reader_refuse_declarations (HlReader   *rd,

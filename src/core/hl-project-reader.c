@@ -12,6 +12,7 @@
 
 #include "hl-project-file.h"
 #include "hl-project-reader-private.h"
+#include "hl-field-table.h"
 #include "hl-limits.h"
 #include "hl-shell-check.h"
 
@@ -106,15 +107,33 @@ hl_reader_on_structured_error (void        *user_data,
 const char *const hl_reader_known_project[] = {
   "title", "engineer", "description", "display-units", "material", "shell", "revision", NULL
 };
-const char *const hl_reader_known_material[] = {
-  "origin", "name", "elastic-modulus", "poisson-ratio", "yield-strength", "allowable-stress", NULL
-};
-const char *const hl_reader_known_shell[] = {
-  "name", "material-ref", "inner-diameter", "outer-diameter", "inner-radius", "outer-radius",
-  "wall-thickness", "corrosion-allowance", "internal-pressure", "external-pressure",
-  "joint-efficiency", "thin-radius-basis", "thin-tolerance", "verdict-measure",
-  "sizing-criterion", NULL
-};
+static const char **
+material_elements (void)
+{
+  const char *const *fields = hl_field_elements (HL_FIELD_OF_MATERIAL);
+  guint n = g_strv_length ((char **) fields);
+  const char **known = g_new0 (const char *, n + 2);
+
+  known[0] = "origin";
+  memcpy (known + 1, fields, n * sizeof *known);
+  return known;
+}
+
+const char *const *
+hl_reader_known_material (void)
+{
+  static const char **known;
+
+  if (g_once_init_enter (&known))
+    g_once_init_leave (&known, material_elements ());
+  return known;
+}
+
+const char *const *
+hl_reader_known_shell (void)
+{
+  return hl_field_elements (HL_FIELD_OF_SHELL);
+}
 
 /* A newer minor format may add elements; this version skips them with a
  * warning instead of refusing the file. */
@@ -141,9 +160,9 @@ drop_unknown (HlReader            *rd,
               xmlFreeNode (n);
             }
           else if (known == hl_reader_known_project && xmlStrEqual (n->name, BAD_CAST "material"))
-            drop_unknown (rd, n, hl_reader_known_material);
+            drop_unknown (rd, n, hl_reader_known_material ());
           else if (known == hl_reader_known_project && xmlStrEqual (n->name, BAD_CAST "shell"))
-            drop_unknown (rd, n, hl_reader_known_shell);
+            drop_unknown (rd, n, hl_reader_known_shell ());
         }
       n = next;
     }
@@ -254,6 +273,38 @@ copy_text (HlReader     *rd,
   return TRUE;
 }
 
+/* One row of the field table, the size excepted (size_node).  An
+ * element the file leaves out keeps the default. */
+static gboolean
+read_field (HlReader      *rd,
+            xmlNodePtr     parent,
+            const HlField *f,
+            gpointer       slot)
+{
+  xmlNodePtr n;
+  g_autofree char *text = NULL;
+  const HlFieldChoice *choice;
+
+  switch (f->kind)
+    {
+    case HL_FIELD_TEXT:
+      return copy_text (rd, parent, f->element, slot, f->text_size);
+    case HL_FIELD_RATIO:
+      n = hl_reader_child (parent, f->element);
+      return n == NULL || read_number (rd, n, slot);
+    case HL_FIELD_CHOICE:
+      /* the schema has already limited these to their listed words */
+      if ((n = hl_reader_child (parent, f->element)) == NULL)
+        return TRUE;
+      text = hl_reader_text (n);
+      if ((choice = hl_field_choice_by_word (f, g_strstrip (text))) != NULL)
+        hl_field_choice_set (f, slot, choice->value);
+      return TRUE;
+    default:  /* the quantities */
+      return read_quantity (rd, parent, f->element, hl_field_quantity_kind (f), slot);
+    }
+}
+
 char *
 hl_reader_prop (xmlNodePtr  n,
       const char *name)
@@ -298,7 +349,6 @@ read_material (HlReader    *rd,
   g_autofree char *id = hl_reader_prop (n, "id");
   g_autoptr(GPtrArray) problems = NULL;
   HlShellInputs probe;
-  xmlNodePtr nu;
 
   if (!check_id (rd, n, "material", id))
     return FALSE;
@@ -309,14 +359,13 @@ read_material (HlReader    *rd,
     }
   g_strlcpy (m.id, id, sizeof m.id);
   m.name[0] = '\0';
-  if (!copy_text (rd, n, "name", m.name, sizeof m.name)
-      || !read_quantity (rd, n, "elastic-modulus", HL_KIND_MODULUS, &m.elastic_modulus)
-      || !read_quantity (rd, n, "yield-strength", HL_KIND_STRESS, &m.yield_strength)
-      || !read_quantity (rd, n, "allowable-stress", HL_KIND_STRESS, &m.allowable_stress))
-    return FALSE;
-  nu = hl_reader_child (n, "poisson-ratio");
-  if (nu != NULL && !read_number (rd, nu, &m.poisson_ratio))
-    return FALSE;
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_MATERIAL && !read_field (rd, n, f, hl_field_material_slot (f, &m)))
+        return FALSE;
+    }
   /* checked here, where the values stand, and even when no shell uses
    * the material: the default shell is valid, so what is left is ours */
   probe = hl_shell_inputs_default ();
@@ -363,24 +412,6 @@ size_node (xmlNodePtr  shell,
   return NULL;
 }
 
-typedef gboolean (*ChoiceFunc) (const char *text, gpointer out);
-
-/* the schema has already limited these to their listed words */
-static void
-read_choice (xmlNodePtr  parent,
-             const char *name,
-             ChoiceFunc  from_string,
-             gpointer    out)
-{
-  xmlNodePtr n = hl_reader_child (parent, name);
-  g_autofree char *text = NULL;
-
-  if (n == NULL)
-    return;
-  text = hl_reader_text (n);
-  from_string (g_strstrip (text), out);
-}
-
 static const HlMaterial *
 reader_material (HlReader        *rd,
                  const HlProject *project,
@@ -417,7 +448,7 @@ read_shell (HlReader    *rd,
   g_autofree char *ends = hl_reader_prop (n, "ends");
   g_autoptr(GPtrArray) problems = NULL;
   const HlMaterial *material;
-  xmlNodePtr nsize, n_je;
+  xmlNodePtr nsize;
 
   if (!check_id (rd, n, "shell", id))
     return FALSE;
@@ -427,9 +458,16 @@ read_shell (HlReader    *rd,
       return FALSE;
     }
   s = hl_reader_shell_default (id);
-  if (!copy_text (rd, n, "name", s.name, sizeof s.name)
-      || !copy_text (rd, n, "material-ref", s.material_ref, sizeof s.material_ref)
-      || !check_id (rd, hl_reader_child (n, "material-ref"), "material-ref", s.material_ref))
+  /* the texts first: the material the shell names is looked up next */
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_SHELL && f->kind == HL_FIELD_TEXT
+          && !read_field (rd, n, f, hl_field_slot (f, &s)))
+        return FALSE;
+    }
+  if (!check_id (rd, hl_reader_child (n, "material-ref"), "material-ref", s.material_ref))
     return FALSE;
   if (form != NULL)
     hl_form_from_string (form, &s.form);
@@ -453,19 +491,16 @@ read_shell (HlReader    *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "shell", "no size given");
       return FALSE;
     }
-  if (!read_quantity (rd, n, hl_size_kind_to_element (s.size_kind), HL_KIND_LENGTH, &s.size)
-      || !read_quantity (rd, n, "wall-thickness", HL_KIND_LENGTH, &s.wall_thickness)
-      || !read_quantity (rd, n, "corrosion-allowance", HL_KIND_LENGTH, &s.corrosion_allowance)
-      || !read_quantity (rd, n, "internal-pressure", HL_KIND_STRESS, &s.internal_pressure)
-      || !read_quantity (rd, n, "external-pressure", HL_KIND_STRESS, &s.external_pressure)
-      || !read_quantity (rd, n, "thin-tolerance", HL_KIND_PERCENT, &s.thin_tolerance))
+  if (!read_quantity (rd, n, hl_size_kind_to_element (s.size_kind), HL_KIND_LENGTH, &s.size))
     return FALSE;
-  n_je = hl_reader_child (n, "joint-efficiency");
-  if (n_je != NULL && !read_number (rd, n_je, &s.joint_efficiency))
-    return FALSE;
-  read_choice (n, "thin-radius-basis", (ChoiceFunc) hl_basis_from_string, &s.thin_basis);
-  read_choice (n, "verdict-measure", (ChoiceFunc) hl_measure_from_string, &s.verdict_measure);
-  read_choice (n, "sizing-criterion", (ChoiceFunc) hl_criterion_from_string, &s.sizing_criterion);
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_SHELL && f->kind != HL_FIELD_TEXT && !f->is_size
+          && !read_field (rd, n, f, hl_field_slot (f, &s)))
+        return FALSE;
+    }
 
   problems = hl_shell_inputs_check (&s);
   if (problems->len > 0)

@@ -7,6 +7,7 @@
 #include "hl-project-file.h"
 #include "hl-atomic-file.h"
 #include "hl-project-reader-private.h"
+#include "hl-field-table.h"
 #include "hl-limits.h"
 #include "hl-shell-check.h"
 
@@ -77,6 +78,33 @@ put_quantity (GString    *out,
   g_string_append_printf (out, "%*s<%s unit=\"%s\">%s</%s>\n", indent, "", element, unit, num, element);
 }
 
+/* One row of the field table at @slot */
+static void
+put_field (GString       *out,
+           const HlField *f,
+           gconstpointer  slot)
+{
+  const HlFieldChoice *choice;
+
+  switch (f->kind)
+    {
+    case HL_FIELD_TEXT:
+      put_text (out, 4, f->element, slot);
+      break;
+    case HL_FIELD_RATIO:
+      put_number (out, 4, f->element, *(const double *) slot);
+      break;
+    case HL_FIELD_CHOICE:
+      choice = hl_field_choice_by_value (f, hl_field_choice_get (f, slot));
+      if (choice != NULL)
+        put_text (out, 4, f->element, choice->word);
+      break;
+    default:  /* the quantities */
+      put_quantity (out, 4, f->element, *(const HlQuantity *) slot);
+      break;
+    }
+}
+
 static void
 put_material (GString          *out,
               const char       *material_id,
@@ -88,50 +116,42 @@ put_material (GString          *out,
   g_string_append_printf (out, "  <material id=\"%s\">\n", id);
   if (built_in)
     put_text (out, 4, "origin", "built-in");
-  put_text (out, 4, "name", m->name);
-  put_quantity (out, 4, "elastic-modulus", m->elastic_modulus);
-  put_number (out, 4, "poisson-ratio", m->poisson_ratio);
-  put_quantity (out, 4, "yield-strength", m->yield_strength);
-  put_quantity (out, 4, "allowable-stress", m->allowable_stress);
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_MATERIAL)
+        put_field (out, f, hl_field_material_cslot (f, m));
+    }
   g_string_append (out, "  </material>\n");
 }
 
 /* Elements equal to what the reader assumes without them are left out:
  * with every element a shell took ~640 bytes, and a 27,000-shell
  * project read from 5 MB grew past the size cap when saved.  The
- * comparison is exact (value and unit), so the file reads back the same. */
+ * comparison is exact (value and unit), so the file reads back the same.
+ * What the schema requires is always written, and the size in the one
+ * element its kind names. */
 static void
 put_shell (GString             *out,
            const HlShellInputs *s)
 {
   g_autofree char *id = escape (s->id, TRUE);
   HlShellInputs d = hl_reader_shell_default (s->id);
-  const struct { const char *element; const HlQuantity *q, *d; } optional[] = {
-    { "corrosion-allowance", &s->corrosion_allowance, &d.corrosion_allowance },
-    { "internal-pressure", &s->internal_pressure, &d.internal_pressure },
-    { "external-pressure", &s->external_pressure, &d.external_pressure },
-  };
 
   g_string_append_printf (out, "  <shell id=\"%s\" form=\"%s\" ends=\"%s\">\n", id,
                           hl_form_to_string (s->form), hl_ends_to_string (s->ends));
-  if (strcmp (s->name, d.name) != 0)
-    put_text (out, 4, "name", s->name);
-  put_text (out, 4, "material-ref", s->material_ref);
-  put_quantity (out, 4, hl_size_kind_to_element (s->size_kind), s->size);
-  put_quantity (out, 4, "wall-thickness", s->wall_thickness);
-  for (guint i = 0; i < G_N_ELEMENTS (optional); i++)
-    if (!hl_quantity_equal (*optional[i].q, *optional[i].d))
-      put_quantity (out, 4, optional[i].element, *optional[i].q);
-  if (s->joint_efficiency != d.joint_efficiency)
-    put_number (out, 4, "joint-efficiency", s->joint_efficiency);
-  if (s->thin_basis != d.thin_basis)
-    put_text (out, 4, "thin-radius-basis", hl_basis_to_string (s->thin_basis));
-  if (!hl_quantity_equal (s->thin_tolerance, d.thin_tolerance))
-    put_quantity (out, 4, "thin-tolerance", s->thin_tolerance);
-  if (s->verdict_measure != d.verdict_measure)
-    put_text (out, 4, "verdict-measure", hl_measure_to_string (s->verdict_measure));
-  if (s->sizing_criterion != d.sizing_criterion)
-    put_text (out, 4, "sizing-criterion", hl_criterion_to_string (s->sizing_criterion));
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+      gconstpointer slot;
+
+      if (f->owner != HL_FIELD_OF_SHELL || (f->is_size && f->size_kind != s->size_kind))
+        continue;
+      slot = hl_field_cslot (f, s);
+      if (f->required || f->is_size || !hl_field_equal (f, slot, hl_field_cslot (f, &d)))
+        put_field (out, f, slot);
+    }
   g_string_append (out, "  </shell>\n");
 }
 

@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-project"
 
 #include "hl-project.h"
+#include "hl-field-table.h"
 
 #include <string.h>
 
@@ -97,16 +98,14 @@ material_difference (const HlMaterial *a,
 {
   if (strcmp (a->id, b->id) != 0)
     return "id";
-  if (strcmp (a->name, b->name) != 0)
-    return "name";
-  if (!hl_quantity_equal (a->elastic_modulus, b->elastic_modulus))
-    return "elastic-modulus";
-  if (a->poisson_ratio != b->poisson_ratio)
-    return "poisson-ratio";
-  if (!hl_quantity_equal (a->yield_strength, b->yield_strength))
-    return "yield-strength";
-  if (!hl_quantity_equal (a->allowable_stress, b->allowable_stress))
-    return "allowable-stress";
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_MATERIAL
+          && !hl_field_equal (f, hl_field_material_cslot (f, a), hl_field_material_cslot (f, b)))
+        return f->element;
+    }
   return NULL;
 }
 
@@ -116,13 +115,6 @@ static char *
 shell_difference (const HlShellInputs *a,
                   const HlShellInputs *b)
 {
-  static const struct { const char *field; gsize offset; } quantities[] = {
-    { "wall-thickness", G_STRUCT_OFFSET (HlShellInputs, wall_thickness) },
-    { "corrosion-allowance", G_STRUCT_OFFSET (HlShellInputs, corrosion_allowance) },
-    { "internal-pressure", G_STRUCT_OFFSET (HlShellInputs, internal_pressure) },
-    { "external-pressure", G_STRUCT_OFFSET (HlShellInputs, external_pressure) },
-    { "thin-tolerance", G_STRUCT_OFFSET (HlShellInputs, thin_tolerance) },
-  };
   const char *material;
 
   if (strcmp (a->id, b->id) != 0)
@@ -135,23 +127,17 @@ shell_difference (const HlShellInputs *a,
     return g_strdup ("ends");
   if (a->size_kind != b->size_kind || !hl_quantity_equal (a->size, b->size))
     return g_strdup (hl_size_kind_to_element (a->size_kind));
-  for (guint i = 0; i < G_N_ELEMENTS (quantities); i++)
-    if (!hl_quantity_equal (G_STRUCT_MEMBER (HlQuantity, a, quantities[i].offset),
-                            G_STRUCT_MEMBER (HlQuantity, b, quantities[i].offset)))
-      return g_strdup (quantities[i].field);
-  if (strcmp (a->material_ref, b->material_ref) != 0)
-    return g_strdup ("material-ref");
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_SHELL && !f->is_size
+          && !hl_field_equal (f, hl_field_cslot (f, a), hl_field_cslot (f, b)))
+        return g_strdup (f->element);
+    }
   if ((material = material_difference (&a->material, &b->material)) != NULL)
     return g_strdup_printf ("material %s (the shell's copy differs from the material “%s” the file holds)",
                             material, a->material_ref);
-  if (a->joint_efficiency != b->joint_efficiency)
-    return g_strdup ("joint-efficiency");
-  if (a->thin_basis != b->thin_basis)
-    return g_strdup ("thin-radius-basis");
-  if (a->verdict_measure != b->verdict_measure)
-    return g_strdup ("verdict-measure");
-  if (a->sizing_criterion != b->sizing_criterion)
-    return g_strdup ("sizing-criterion");
   return NULL;
 }
 

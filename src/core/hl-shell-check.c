@@ -6,87 +6,22 @@
 
 #include "hl-shell-check.h"
 
+#include "hl-field-table.h"
 #include "hl-limits.h"
 
 #include <math.h>
 #include <string.h>
 
-/* Physical bounds of every input, SI.  A value outside them is not a real
- * shell but a slip (a unit, a digit, a paste): 1e-320 as a joint
- * efficiency or a 1 nm bore in a 100 m wall computes, and the answer
- * means nothing.  Each bound names its reason; "from memory" marks a
- * figure recalled without the book at hand, "common practice" a fact of
- * the trade.  The upper bound of lengths stays where it was (100 km):
- * beyond it only overflow downstream is invited; those of pressures and
- * material values come down to what a material can be. */
-typedef struct
-{
-  const char *field;
-  double      min_si;     /* smallest value other than zero, inclusive */
-  double      max_si;     /* inclusive */
-  const char *min_text;   /* the bounds as the messages name them */
-  const char *max_text;
-  const char *why_min;
-} HlBound;
+/* The physical bounds of every input are rows of the field table
+ * (hl-field-table.c), each with its reason.  A value outside them is not
+ * a real shell but a slip (a unit, a digit, a paste). */
 
-/* A bore of 0.1 mm across: capillary tubing, the smallest pressure-
- * carrying bore in use, runs from about 0.1 mm (from memory). */
+/* the smallest bore and wall the table's rows name, for the checks of
+ * the radii together */
 #define HL_MIN_BORE_DIAMETER_M 1e-4
-/* A wall of 0.01 mm: thinner is a foil; bellows plies and diaphragms,
- * the thinnest pressure walls, are about 0.1 mm and 0.025 mm (from
- * memory).  Checked on the new and on the corroded wall. */
 #define HL_MIN_WALL_M          1e-5
 #define HL_MAX_LENGTH_M        1e5
 
-static const HlBound bounds[] = {
-  { "inner-diameter", HL_MIN_BORE_DIAMETER_M, HL_MAX_LENGTH_M, "0.1 mm", "100 km",
-    "a smaller bore than a capillary's is not a pressure shell" },
-  { "inner-radius", HL_MIN_BORE_DIAMETER_M / 2, HL_MAX_LENGTH_M, "0.05 mm", "100 km",
-    "a smaller bore than a capillary's is not a pressure shell" },
-  { "outer-diameter", HL_MIN_BORE_DIAMETER_M, HL_MAX_LENGTH_M, "0.1 mm", "100 km",
-    "a smaller shell than a capillary is not a pressure shell" },
-  { "outer-radius", HL_MIN_BORE_DIAMETER_M / 2, HL_MAX_LENGTH_M, "0.05 mm", "100 km",
-    "a smaller shell than a capillary is not a pressure shell" },
-  { "wall-thickness", HL_MIN_WALL_M, HL_MAX_LENGTH_M, "0.01 mm", "100 km",
-    "a thinner wall is a foil, not a pressure wall" },
-  /* allowances are stated in tenths of a millimetre (common practice),
-   * but a small one is harmless; under a nanometre, a few atoms, it is
-   * a slip, and zero means none */
-  { "corrosion-allowance", 1e-9, HL_MAX_LENGTH_M, "1 nm", "100 km",
-    "a few atoms are no allowance; 0 means none" },
-  /* the results are linear in the pressure, so a small one loses nothing
-   * until the stresses near the subnormal doubles; 1 µPa is far below any
-   * gauge and far above them.  10 GPa is above the yield strength of any
-   * steel: no shell holds it (the highest-pressure equipment in service,
-   * isostatic presses and water-jet intensifiers, works below 1 GPa, from
-   * memory) */
-  { "internal-pressure", 1e-6, 1e10, "1 µPa", "10 GPa",
-    "no gauge reads less; 0 means none" },
-  { "external-pressure", 1e-6, 1e10, "1 µPa", "10 GPa",
-    "no gauge reads less; 0 means none" },
-  /* elastomers, the softest solids a shell is made of, start near 1 MPa;
-   * diamond, the stiffest, is about 1 050 to 1 200 GPa (from memory) */
-  { "elastic-modulus", 1e6, 2e12, "1 MPa", "2000 GPa",
-    "softer than rubber is a slip of the unit" },
-  /* lead, about 5 MPa, is among the weakest metals; the strongest steel
-   * wires reach 3 to 4 GPa (from memory) */
-  { "yield-strength", 1e6, 1e10, "1 MPa", "10 GPa",
-    "weaker than lead is a slip of the unit" },
-  /* allowables of plastics at temperature go down to about 1 MPa (from
-   * memory), a tenth of that leaves room */
-  { "allowable-stress", 1e5, 1e10, "0.1 MPa", "10 GPa",
-    "lower than any material's allowable is a slip of the unit" },
-  /* the thin-wall error is computed to about 1e-12 relative; below
-   * 0.001 % the verdict turns on the last digits of the inputs */
-  { "thin-tolerance", 1e-5, 1.0, "0.001 %", "100 %",
-    "a smaller tolerance than the inputs' own precision decides nothing" },
-};
-
-/* Weld joint efficiencies tabulate from 0.45 (single fillet lap joint,
- * ASME VIII-1 Table UW-12, from memory) to 1; ligament efficiencies of
- * drilled shells go lower, to about 0.2 (from memory).  0.1 leaves room
- * for both; 1e-320 is a slip. */
-#define HL_MIN_JOINT_EFFICIENCY 0.1
 /* below this t/a the wall is a film: differences of nearly equal radii
  * lose more digits than the results can afford */
 #define HL_MIN_THIN_RATIO   1e-8
@@ -122,15 +57,6 @@ add (GPtrArray  *problems,
   p->field = field;
   p->message = message;
   g_ptr_array_add (problems, p);
-}
-
-static const HlBound *
-find_bound (const char *field)
-{
-  for (guint i = 0; field != NULL && i < G_N_ELEMENTS (bounds); i++)
-    if (strcmp (bounds[i].field, field) == 0)
-      return &bounds[i];
-  return NULL;
 }
 
 /* Limits of a kind, for a field without its own bounds */
@@ -171,7 +97,7 @@ hl_check_quantity (const char     *field,
                    gboolean        zero_allowed)
 {
   double factor = hl_unit_factor (kind, q.unit);
-  const HlBound *bound = find_bound (field);
+  const HlField *bound = hl_field_lookup (field);
   double si;
 
   if (kind != HL_KIND_RATIO && factor <= 0.0)
@@ -187,13 +113,15 @@ hl_check_quantity (const char     *field,
     return g_strdup ("must not be negative");
   if (si == 0.0 && !zero_allowed)
     return g_strdup ("must be greater than zero");
-  if (bound == NULL)
+  if (bound == NULL || !bound->bounded || bound->kind == HL_FIELD_RATIO)
     return check_kind_limits (si, kind, zero_allowed);
   if (si > bound->max_si)
     return g_strdup_printf ("is unrealistically large (over %s)", bound->max_text);
   if (si > 0.0 && si < bound->min_si)
     return g_strdup_printf ("is unrealistically small (under %s%s: %s)", bound->min_text,
                             zero_allowed ? ", other than 0" : "", bound->why_min);
+  if (bound->max_exclusive && si >= bound->max_si)
+    return g_strdup_printf ("must be less than %s", bound->max_text);
   return NULL;
 }
 
@@ -257,59 +185,75 @@ check_name (GPtrArray  *problems,
                           "the name of %s is one line of text", whose));
 }
 
+/* A bare number: one message names its whole range */
+static char *
+check_ratio (const HlField *f,
+             double         v)
+{
+  if (!isfinite (v))
+    return g_strdup ("is not a finite number");
+  if ((f->min_exclusive ? v <= f->min_si : v < f->min_si)
+      || (f->max_exclusive ? v >= f->max_si : v > f->max_si))
+    return g_strdup (f->range_message);
+  return NULL;
+}
+
+char *
+hl_field_check (const HlField *f,
+                gconstpointer  slot)
+{
+  g_return_val_if_fail (f != NULL && slot != NULL, NULL);
+
+  switch (f->kind)
+    {
+    case HL_FIELD_TEXT:
+    case HL_FIELD_CHOICE:
+      return NULL;
+    case HL_FIELD_RATIO:
+      return check_ratio (f, *(const double *) slot);
+    default:  /* the quantities */
+      return hl_check_quantity (f->element, *(const HlQuantity *) slot, hl_field_quantity_kind (f),
+                                f->zero_allowed);
+    }
+}
+
 GPtrArray *
 hl_shell_inputs_check (const HlShellInputs *in)
 {
   GPtrArray *problems = g_ptr_array_new_with_free_func ((GDestroyNotify) hl_problem_free);
-  const char *size_field = hl_size_kind_to_element (in->size_kind);
-  char *size_msg, *t_msg, *c_msg;
+  gboolean lengths_ok = TRUE, radii_done = FALSE;
 
   g_return_val_if_fail (in != NULL, problems);
 
   if (in->id[0] == '\0')
     add (problems, "id", g_strdup ("the shell needs an id"));
-  check_name (problems, in->name, "a shell");
-  size_msg = hl_check_quantity (size_field, in->size, HL_KIND_LENGTH, FALSE);
-  t_msg = hl_check_quantity ("wall-thickness", in->wall_thickness, HL_KIND_LENGTH, FALSE);
-  c_msg = hl_check_quantity ("corrosion-allowance", in->corrosion_allowance, HL_KIND_LENGTH, TRUE);
-  add (problems, size_field, size_msg);
-  add (problems, "wall-thickness", t_msg);
-  add (problems, "corrosion-allowance", c_msg);
+  /* in the table's order, which the reader's first problem follows */
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+      char *msg;
 
-  if (size_msg == NULL && t_msg == NULL && c_msg == NULL)
-    check_radii (problems, in);
-
-  add (problems, "internal-pressure",
-       hl_check_quantity ("internal-pressure", in->internal_pressure, HL_KIND_STRESS, TRUE));
-  add (problems, "external-pressure",
-       hl_check_quantity ("external-pressure", in->external_pressure, HL_KIND_STRESS, TRUE));
-
-  check_name (problems, in->material.name, "a material");
-  add (problems, "elastic-modulus",
-       hl_check_quantity ("elastic-modulus", in->material.elastic_modulus, HL_KIND_MODULUS, FALSE));
-  if (!isfinite (in->material.poisson_ratio))
-    add (problems, "poisson-ratio", g_strdup ("is not a finite number"));
-  else if (in->material.poisson_ratio <= -1.0 || in->material.poisson_ratio >= 0.5)
-    add (problems, "poisson-ratio", g_strdup ("must lie between -1 and 0.5 (exclusive)"));
-  add (problems, "yield-strength",
-       hl_check_quantity ("yield-strength", in->material.yield_strength, HL_KIND_STRESS, FALSE));
-  add (problems, "allowable-stress",
-       hl_check_quantity ("allowable-stress", in->material.allowable_stress, HL_KIND_STRESS, FALSE));
-
-  if (!isfinite (in->joint_efficiency))
-    add (problems, "joint-efficiency", g_strdup ("is not a finite number"));
-  else if (in->joint_efficiency < HL_MIN_JOINT_EFFICIENCY || in->joint_efficiency > 1.0)
-    add (problems, "joint-efficiency",
-         g_strdup ("must be greater than 0 and at most 1, and at least 0.1 "
-                   "(weld joint efficiencies tabulate from 0.45 to 1)"));
-
-  {
-    char *msg = hl_check_quantity ("thin-tolerance", in->thin_tolerance, HL_KIND_PERCENT, FALSE);
-
-    if (msg == NULL && hl_quantity_si (in->thin_tolerance, HL_KIND_PERCENT) >= 1.0)
-      msg = g_strdup ("must be less than 100 %");
-    add (problems, "thin-tolerance", msg);
-  }
+      if (f->is_size && f->size_kind != in->size_kind)
+        continue;
+      /* the radii together, once every length is in its bounds */
+      if (!radii_done && f->kind != HL_FIELD_LENGTH && f->kind != HL_FIELD_TEXT)
+        {
+          radii_done = TRUE;
+          if (lengths_ok)
+            check_radii (problems, in);
+        }
+      if (f->kind == HL_FIELD_TEXT)
+        {
+          if (strcmp (f->element, "name") == 0)
+            check_name (problems, hl_field_cslot (f, in),
+                        f->owner == HL_FIELD_OF_MATERIAL ? "a material" : "a shell");
+          continue;
+        }
+      msg = hl_field_check (f, hl_field_cslot (f, in));
+      if (msg != NULL && f->kind == HL_FIELD_LENGTH)
+        lengths_ok = FALSE;
+      add (problems, f->element, msg);
+    }
   return problems;
 }
 

@@ -4,7 +4,7 @@
  */
 #pragma once
 
-#include "hl-shell.h"
+#include "hl-field-table.h"
 
 G_BEGIN_DECLS
 
@@ -32,6 +32,10 @@ char      *hl_check_quantity      (const char     *field,
                                    HlQuantity      q,
                                    HlQuantityKind  kind,
                                    gboolean        zero_allowed);
+
+/* Checks the value at @slot as the table's row @field says */
+char      *hl_field_check         (const HlField *field,
+                                   gconstpointer  slot);
 
 /* "field: message; field: message" — for GError texts */
 char      *hl_problems_join       (GPtrArray *problems);

@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-shell"
 
 #include "hl-shell.h"
+#include "hl-field-table.h"
 
 #include <string.h>
 
@@ -19,18 +20,9 @@ hl_shell_inputs_default (void)
   in.form = HL_FORM_CYLINDER;
   in.ends = HL_ENDS_CLOSED;
   in.size_kind = HL_SIZE_INNER_DIAMETER;
-  in.size = hl_quantity_make (1000, "mm");
-  in.wall_thickness = hl_quantity_make (10, "mm");
-  in.corrosion_allowance = hl_quantity_make (0, "mm");
-  in.internal_pressure = hl_quantity_make (10, "bar");
-  in.external_pressure = hl_quantity_make (0, "bar");
+  hl_field_apply_defaults (&in);
   in.material = hl_material_default ();
   g_strlcpy (in.material_ref, in.material.id, sizeof in.material_ref);
-  in.joint_efficiency = 1.0;
-  in.thin_basis = HL_BASIS_MEAN;
-  in.thin_tolerance = hl_quantity_make (5, "%");
-  in.verdict_measure = HL_MEASURE_HOOP;
-  in.sizing_criterion = HL_CRITERION_VON_MISES;
   return in;
 }
 
@@ -38,23 +30,17 @@ gboolean
 hl_shell_inputs_equal (const HlShellInputs *a,
                        const HlShellInputs *b)
 {
-  return strcmp (a->id, b->id) == 0
-         && strcmp (a->name, b->name) == 0
-         && a->form == b->form
-         && a->ends == b->ends
-         && a->size_kind == b->size_kind
-         && hl_quantity_equal (a->size, b->size)
-         && hl_quantity_equal (a->wall_thickness, b->wall_thickness)
-         && hl_quantity_equal (a->corrosion_allowance, b->corrosion_allowance)
-         && hl_quantity_equal (a->internal_pressure, b->internal_pressure)
-         && hl_quantity_equal (a->external_pressure, b->external_pressure)
-         && strcmp (a->material_ref, b->material_ref) == 0
-         && hl_material_equal (&a->material, &b->material)
-         && a->joint_efficiency == b->joint_efficiency
-         && a->thin_basis == b->thin_basis
-         && hl_quantity_equal (a->thin_tolerance, b->thin_tolerance)
-         && a->verdict_measure == b->verdict_measure
-         && a->sizing_criterion == b->sizing_criterion;
+  if (strcmp (a->id, b->id) != 0 || a->form != b->form || a->ends != b->ends || a->size_kind != b->size_kind
+      || !hl_material_equal (&a->material, &b->material))
+    return FALSE;
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (f->owner == HL_FIELD_OF_SHELL && !hl_field_equal (f, hl_field_cslot (f, a), hl_field_cslot (f, b)))
+        return FALSE;
+    }
+  return TRUE;
 }
 
 void
