@@ -6,6 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-fields.h"
+#include "hl-field-table.h"
 #include "hl-limits.h"
 #include "hl-units.h"
 
@@ -14,36 +15,26 @@
 #include <math.h>
 #include <string.h>
 
+/* names the field table does not hold */
 static const struct
 {
   const char *field;
   const char *label;
-} fields[] = {
+} others[] = {
   { "id", N_("Id") },
-  { "name", N_("Name") },
-  { "inner-diameter", N_("Inner diameter") },
-  { "outer-diameter", N_("Outer diameter") },
-  { "inner-radius", N_("Inner radius") },
-  { "outer-radius", N_("Outer radius") },
   { "size", N_("Size") },
-  { "wall-thickness", N_("Wall thickness") },
-  { "corrosion-allowance", N_("Corrosion allowance") },
-  { "internal-pressure", N_("Internal pressure") },
-  { "external-pressure", N_("External pressure") },
-  { "elastic-modulus", N_("Elastic modulus") },
-  { "poisson-ratio", N_("Poisson’s ratio") },
-  { "yield-strength", N_("Yield strength") },
-  { "allowable-stress", N_("Allowable stress") },
-  { "joint-efficiency", N_("Joint efficiency") },
-  { "thin-tolerance", N_("Tolerance") },
 };
 
 const char *
 hl_field_label (const char *field)
 {
-  for (guint i = 0; i < G_N_ELEMENTS (fields); i++)
-    if (g_strcmp0 (fields[i].field, field) == 0)
-      return _(fields[i].label);
+  const HlField *row = hl_field_lookup (field);
+
+  if (row != NULL && row->label != NULL)
+    return _(row->label);
+  for (guint i = 0; i < G_N_ELEMENTS (others); i++)
+    if (g_strcmp0 (others[i].field, field) == 0)
+      return _(others[i].label);
   return field;
 }
 

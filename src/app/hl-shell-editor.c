@@ -11,6 +11,7 @@
 #include "hl-config.h"
 #include "hl-shell-editor.h"
 #include "hl-fields.h"
+#include "hl-field-table.h"
 #include "hl-limits.h"
 #include "hl-shell-check.h"
 
@@ -75,50 +76,31 @@ collect_rows (HlShellEditor *self,
   memcpy (rows, all, sizeof all);
 }
 
-/* where a quantity field lives in the inputs; size has four names */
+/* where a field of the table lives in the inputs; size has four names */
 static HlQuantity *
 quantity_slot (HlShellInputs *s,
                const char    *field)
 {
-  HlSizeKind kind;
+  const HlField *f = hl_field_lookup (field);
 
-  if (hl_size_kind_from_element (field, &kind))
-    return &s->size;
-  if (strcmp (field, "wall-thickness") == 0)
-    return &s->wall_thickness;
-  if (strcmp (field, "corrosion-allowance") == 0)
-    return &s->corrosion_allowance;
-  if (strcmp (field, "internal-pressure") == 0)
-    return &s->internal_pressure;
-  if (strcmp (field, "external-pressure") == 0)
-    return &s->external_pressure;
-  if (strcmp (field, "thin-tolerance") == 0)
-    return &s->thin_tolerance;
-  if (strcmp (field, "elastic-modulus") == 0)
-    return &s->material.elastic_modulus;
-  if (strcmp (field, "yield-strength") == 0)
-    return &s->material.yield_strength;
-  if (strcmp (field, "allowable-stress") == 0)
-    return &s->material.allowable_stress;
-  return NULL;
+  if (f == NULL || !hl_field_is_number (f) || f->kind == HL_FIELD_RATIO)
+    return NULL;
+  return hl_field_slot (f, s);
 }
 
 static double *
 number_slot (HlShellInputs *s,
              const char    *field)
 {
-  if (strcmp (field, "poisson-ratio") == 0)
-    return &s->material.poisson_ratio;
-  if (strcmp (field, "joint-efficiency") == 0)
-    return &s->joint_efficiency;
-  return NULL;
+  const HlField *f = hl_field_lookup (field);
+
+  return f != NULL && f->kind == HL_FIELD_RATIO ? hl_field_slot (f, s) : NULL;
 }
 
 static gboolean
 is_material_field (const char *field)
 {
-  return strcmp (field, "elastic-modulus") == 0 || strcmp (field, "poisson-ratio") == 0
-         || strcmp (field, "yield-strength") == 0 || strcmp (field, "allowable-stress") == 0;
+  return hl_field_find (HL_FIELD_OF_MATERIAL, field) != NULL;
 }
 
 static void
@@ -129,6 +111,42 @@ set_dropdown (HlShellEditor *self,
   self->updating++;
   gtk_drop_down_set_selected (dropdown, index);
   self->updating--;
+}
+
+/* A drop-down of a choice row lists the row's choices in the table's
+ * order, whatever the enum's order */
+static void
+set_choice (HlShellEditor *self,
+            GtkDropDown   *dropdown,
+            const char    *element)
+{
+  const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, element);
+
+  set_dropdown (self, dropdown, hl_field_choice_position (f, hl_field_choice_get (f, hl_field_cslot (f, &self->shown))));
+}
+
+static void
+fill_choices (GtkDropDown *dropdown,
+              const char  *element)
+{
+  const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, element);
+  g_autoptr(GtkStringList) items = gtk_string_list_new (NULL);
+
+  for (guint i = 0; i < hl_field_choice_count (f); i++)
+    gtk_string_list_append (items, _(f->choices[i].label));
+  gtk_drop_down_set_model (dropdown, G_LIST_MODEL (items));
+}
+
+static void
+get_choice (GtkDropDown   *dropdown,
+            const char    *element,
+            HlShellInputs *shell)
+{
+  const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, element);
+  guint i = gtk_drop_down_get_selected (dropdown);
+
+  if (f->choices != NULL && i < hl_field_choice_count (f))
+    hl_field_choice_set (f, hl_field_slot (f, shell), f->choices[i].value);
 }
 
 static void
@@ -276,9 +294,9 @@ reload (HlShellEditor *self)
                           hl_project_find_material (project, shell->material_ref) == NULL
                           && hl_material_builtin_find (shell->material_ref) != NULL);
 
-  set_dropdown (self, self->basis_dropdown, shell->thin_basis);
-  set_dropdown (self, self->measure_dropdown, shell->verdict_measure);
-  set_dropdown (self, self->criterion_dropdown, shell->sizing_criterion);
+  set_choice (self, self->basis_dropdown, "thin-radius-basis");
+  set_choice (self, self->measure_dropdown, "verdict-measure");
+  set_choice (self, self->criterion_dropdown, "sizing-criterion");
 }
 
 static void
@@ -431,9 +449,9 @@ choices_changed (HlShellEditor *self)
   shell.form = (HlForm) gtk_drop_down_get_selected (self->form_dropdown);
   shell.ends = (HlEnds) gtk_drop_down_get_selected (self->ends_dropdown);
   shell.size_kind = (HlSizeKind) gtk_drop_down_get_selected (self->size_kind_dropdown);
-  shell.thin_basis = (HlRadiusBasis) gtk_drop_down_get_selected (self->basis_dropdown);
-  shell.verdict_measure = (HlVerdictMeasure) gtk_drop_down_get_selected (self->measure_dropdown);
-  shell.sizing_criterion = (HlCriterion) gtk_drop_down_get_selected (self->criterion_dropdown);
+  get_choice (self->basis_dropdown, "thin-radius-basis", &shell);
+  get_choice (self->measure_dropdown, "verdict-measure", &shell);
+  get_choice (self->criterion_dropdown, "sizing-criterion", &shell);
   gtk_widget_set_sensitive (GTK_WIDGET (self->ends_dropdown), shell.form == HL_FORM_CYLINDER);
   /* the size number is kept; only its meaning changes */
   hl_document_clear_input_errors (self->document);
@@ -633,6 +651,11 @@ hl_shell_editor_init (HlShellEditor *self)
 
   self->material_ids = g_ptr_array_new_with_free_func (g_free);
   gtk_widget_init_template (GTK_WIDGET (self));
+  self->updating++;
+  fill_choices (self->basis_dropdown, "thin-radius-basis");
+  fill_choices (self->measure_dropdown, "verdict-measure");
+  fill_choices (self->criterion_dropdown, "sizing-criterion");
+  self->updating--;
   /* Ctrl+Z belongs to the document's undo, which covers every field */
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->name_entry), FALSE);
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->material_name_entry), FALSE);

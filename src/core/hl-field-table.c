@@ -325,6 +325,16 @@ hl_field_choice_by_word (const HlField *field,
 }
 
 guint
+hl_field_choice_count (const HlField *field)
+{
+  guint n = 0;
+
+  while (field->choices != NULL && field->choices[n].word != NULL)
+    n++;
+  return n;
+}
+
+guint
 hl_field_choice_position (const HlField *field,
                           int            value)
 {

@@ -97,6 +97,7 @@ const HlFieldChoice *hl_field_choice_by_word  (const HlField *field,
                                                const char    *word);
 const HlFieldChoice *hl_field_choice_by_value (const HlField *field,
                                                int            value);
+guint           hl_field_choice_count  (const HlField *field);
 /* position of @value in the row's list (a drop-down's position) */
 guint           hl_field_choice_position (const HlField *field,
                                           int            value);

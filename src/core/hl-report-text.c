@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-report-text"
 
 #include "hl-report.h"
+#include "hl-field-table.h"
 #include "hl-result-rows.h"
 
 #include <math.h>
@@ -79,39 +80,50 @@ input_line (GString        *out,
   g_string_append_printf (out, "%14s %-6s = %14s %s\n", typed, typed_unit, converted, unit);
 }
 
+/* one row of the field table; rows without a report label are not listed */
+static void
+input_field (GString             *out,
+             const HlField       *f,
+             const HlShellInputs *in)
+{
+  gconstpointer slot = hl_field_cslot (f, in);
+  const HlFieldChoice *choice;
+
+  if (f->report == NULL || (f->is_size && f->size_kind != in->size_kind))
+    return;
+  if (f->kind == HL_FIELD_TEXT)
+    {
+      /* a material row: its name, with its id */
+      g_autofree char *text = hl_report_escape_line (slot);
+      g_autofree char *material_id = hl_report_escape_line (in->material.id);
+
+      g_string_append_printf (out, "  %-35s%s (%s)\n", f->report, text, material_id);
+    }
+  else if (f->kind == HL_FIELD_RATIO)
+    {
+      g_autofree char *v = hl_format_significant (*(const double *) slot, 6);
+
+      g_string_append_printf (out, "  %-35s%14s\n", f->report, v);
+    }
+  else if (f->kind == HL_FIELD_CHOICE)
+    {
+      choice = hl_field_choice_by_value (f, hl_field_choice_get (f, slot));
+      g_string_append_printf (out, "  %-35s%s\n", f->report, choice != NULL ? choice->report : "");
+    }
+  else
+    input_line (out, f->report, *(const HlQuantity *) slot, hl_field_quantity_kind (f));
+}
+
 static void
 put_inputs (GString             *out,
             const HlShellInputs *in)
 {
-  static const char *const size_labels[] = {
-    "Inner diameter", "Outer diameter", "Inner radius", "Outer radius"
-  };
-  g_autofree char *nu = hl_format_significant (in->material.poisson_ratio, 6);
-  g_autofree char *je = hl_format_significant (in->joint_efficiency, 6);
-  g_autofree char *material = hl_report_escape_line (in->material.name);
-  g_autofree char *material_id = hl_report_escape_line (in->material.id);
-
   rule (out, "Inputs (as entered = converted)");
   g_string_append_printf (out, "  %-35s%s%s%s\n", "Form", hl_form_to_string (in->form),
                           in->form == HL_FORM_CYLINDER ? ", ends " : "",
                           in->form == HL_FORM_CYLINDER ? hl_ends_to_string (in->ends) : "");
-  input_line (out, size_labels[in->size_kind], in->size, HL_KIND_LENGTH);
-  input_line (out, "Wall thickness (new)", in->wall_thickness, HL_KIND_LENGTH);
-  input_line (out, "Corrosion allowance", in->corrosion_allowance, HL_KIND_LENGTH);
-  input_line (out, "Internal pressure (gauge)", in->internal_pressure, HL_KIND_STRESS);
-  input_line (out, "External pressure (gauge)", in->external_pressure, HL_KIND_STRESS);
-  g_string_append_printf (out, "  %-35s%s (%s)\n", "Material", material, material_id);
-  input_line (out, "Elastic modulus E", in->material.elastic_modulus, HL_KIND_MODULUS);
-  g_string_append_printf (out, "  %-35s%14s\n", "Poisson's ratio", nu);
-  input_line (out, "Yield strength", in->material.yield_strength, HL_KIND_STRESS);
-  input_line (out, "Allowable stress S", in->material.allowable_stress, HL_KIND_STRESS);
-  g_string_append_printf (out, "  %-35s%14s\n", "Joint efficiency E", je);
-  g_string_append_printf (out, "  %-35s%s radius\n", "Thin-wall radius basis", hl_basis_to_string (in->thin_basis));
-  input_line (out, "Thin-wall tolerance", in->thin_tolerance, HL_KIND_PERCENT);
-  g_string_append_printf (out, "  %-35s%s\n", "Verdict measure",
-                          in->verdict_measure == HL_MEASURE_EQUIVALENT ? "equivalent (von Mises)" : "hoop stress");
-  g_string_append_printf (out, "  %-35s%s\n", "Sizing criterion (Lame-based)",
-                          in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises");
+  for (guint i = 0; i < hl_field_count (); i++)
+    input_field (out, hl_field_nth (i), in);
 }
 
 static void

@@ -9,6 +9,7 @@
 
 #include "hl-sheet-private.h"
 #include "hl-figure-format.h"
+#include "hl-field-table.h"
 #include "hl-report.h"
 #include "hl-result-rows.h"
 
@@ -64,13 +65,6 @@ add_text (GArray         *rows,
 
 /* the radius basis in three grammatical places: a value on its own,
  * "on the … radius" and "R is the … radius" */
-static const char *
-basis_word (HlRadiusBasis basis)
-{
-  return basis == HL_BASIS_INNER ? C_("radius basis", "inner")
-         : basis == HL_BASIS_OUTER ? C_("radius basis", "outer") : C_("radius basis", "mean");
-}
-
 static const char *
 basis_on (HlRadiusBasis basis)
 {
@@ -141,38 +135,57 @@ input_row (GArray                *rows,
   add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, label, typed, shown);
 }
 
+/* the sheet's word for a choice; a name (von Mises) stays as it is */
+static const char *
+choice_text (const HlFieldChoice *c)
+{
+  if (c == NULL)
+    return "";
+  if (c->sheet == NULL)
+    return c->report;
+  return c->sheet_context != NULL ? g_dpgettext2 (GETTEXT_PACKAGE, c->sheet_context, c->sheet) : _(c->sheet);
+}
+
+/* one row of the field table; rows without a sheet label are not listed */
+static void
+input_field (GArray                *rows,
+             const HlField         *f,
+             const HlFigureContext *ctx)
+{
+  const HlShellInputs *in = &ctx->solution->inputs;
+  gconstpointer slot = hl_field_cslot (f, in);
+
+  if (f->sheet == NULL || (f->is_size && f->size_kind != in->size_kind))
+    return;
+  if (f->kind == HL_FIELD_TEXT)
+    {
+      /* a material row: its name, with its id */
+      g_autofree char *text = g_strdup_printf ("%s (%s)", (const char *) slot, in->material.id);
+
+      add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _(f->sheet), text, "");
+    }
+  else if (f->kind == HL_FIELD_RATIO)
+    {
+      g_autofree char *v = hl_figure_format_sig (*(const double *) slot, 6, ctx->locale_numbers);
+
+      add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _(f->sheet), v, "");
+    }
+  else if (f->kind == HL_FIELD_CHOICE)
+    add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _(f->sheet),
+         choice_text (hl_field_choice_by_value (f, hl_field_choice_get (f, slot))), "");
+  else
+    input_row (rows, ctx, _(f->sheet), *(const HlQuantity *) slot, hl_field_quantity_kind (f));
+}
+
 static void
 inputs (GArray                *rows,
         const HlFigureContext *ctx)
 {
-  static const char *const size_labels[] = {
-    N_("Inner diameter"), N_("Outer diameter"), N_("Inner radius"), N_("Outer radius")
-  };
-  const HlShellInputs *in = &ctx->solution->inputs;
-  g_autofree char *nu = hl_figure_format_sig (in->material.poisson_ratio, 6, ctx->locale_numbers);
-  g_autofree char *je = hl_figure_format_sig (in->joint_efficiency, 6, ctx->locale_numbers);
-  g_autofree char *mat = g_strdup_printf ("%s (%s)", in->material.name, in->material.id);
-
   add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Inputs"));
   add (rows, HL_SHEET_TABLE, cols_input, TRUE, 3, _("Quantity"), _("As entered"), _("In the sheet's units"));
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Form"), hl_figure_form_text (in), "");
-  input_row (rows, ctx, _(size_labels[in->size_kind]), in->size, HL_KIND_LENGTH);
-  input_row (rows, ctx, _("Wall thickness (new)"), in->wall_thickness, HL_KIND_LENGTH);
-  input_row (rows, ctx, _("Corrosion allowance"), in->corrosion_allowance, HL_KIND_LENGTH);
-  input_row (rows, ctx, _("Internal pressure (gauge)"), in->internal_pressure, HL_KIND_STRESS);
-  input_row (rows, ctx, _("External pressure (gauge)"), in->external_pressure, HL_KIND_STRESS);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Material"), mat, "");
-  input_row (rows, ctx, _("Elastic modulus E"), in->material.elastic_modulus, HL_KIND_MODULUS);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Poisson's ratio ν"), nu, "");
-  input_row (rows, ctx, _("Yield strength"), in->material.yield_strength, HL_KIND_STRESS);
-  input_row (rows, ctx, _("Allowable stress S"), in->material.allowable_stress, HL_KIND_STRESS);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Weld joint efficiency"), je, "");
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Thin-wall radius basis"), basis_word (in->thin_basis), "");
-  input_row (rows, ctx, _("Thin-wall tolerance"), in->thin_tolerance, HL_KIND_PERCENT);
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Verdict measure"),
-       in->verdict_measure == HL_MEASURE_EQUIVALENT ? _("von Mises stress") : _("hoop stress"), "");
-  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Sizing criterion"),
-       in->sizing_criterion == HL_CRITERION_TRESCA ? "Tresca" : "von Mises", "");
+  add (rows, HL_SHEET_TABLE, cols_input, FALSE, 3, _("Form"), hl_figure_form_text (&ctx->solution->inputs), "");
+  for (guint i = 0; i < hl_field_count (); i++)
+    input_field (rows, hl_field_nth (i), ctx);
 }
 
 static char *
