@@ -60,20 +60,34 @@ struct _HlShellEditor
 
 G_DEFINE_FINAL_TYPE (HlShellEditor, hl_shell_editor, GTK_TYPE_BOX)
 
-#define N_ROWS 12
+/* room for every row the template may hold, and the NULL at the end */
+#define N_ROWS 48
 
+static void
+collect_in (GtkWidget     *widget,
+            HlQuantityRow *rows[N_ROWS],
+            guint         *n)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (widget); c != NULL; c = gtk_widget_get_next_sibling (c))
+    if (HL_IS_QUANTITY_ROW (c))
+      {
+        if (*n < N_ROWS - 1)
+          rows[(*n)++] = HL_QUANTITY_ROW (c);
+      }
+    else
+      collect_in (c, rows, n);
+}
+
+/* the template's rows, found rather than listed: a new input's row is
+ * one entry in the .ui, its field the table's element name */
 static void
 collect_rows (HlShellEditor *self,
               HlQuantityRow *rows[N_ROWS])
 {
-  HlQuantityRow *all[N_ROWS] = {
-    self->size_row, self->wall_thickness_row, self->corrosion_allowance_row,
-    self->internal_pressure_row, self->external_pressure_row, self->elastic_modulus_row,
-    self->poisson_ratio_row, self->yield_strength_row, self->allowable_stress_row,
-    self->thin_tolerance_row, self->joint_efficiency_row, NULL,
-  };
+  guint n = 0;
 
-  memcpy (rows, all, sizeof all);
+  collect_in (GTK_WIDGET (self), rows, &n);
+  rows[n] = NULL;
 }
 
 /* where a field of the table lives in the inputs; size has four names */
@@ -285,7 +299,8 @@ reload (HlShellEditor *self)
       HlQuantity *q = quantity_slot (&self->shown, field);
       double *d = number_slot (&self->shown, field);
 
-      hl_quantity_row_set_quantity (rows[i], q != NULL ? *q : hl_quantity_make (*d, ""));
+      if (q != NULL || d != NULL)
+        hl_quantity_row_set_quantity (rows[i], q != NULL ? *q : hl_quantity_make (*d, ""));
     }
 
   reload_materials (self);
@@ -423,20 +438,12 @@ row_edited (HlShellEditor *self,
     commit_shell (self, &shell, field);
 }
 
-#define ROW_CALLBACK(name) \
-  static void on_##name##_edited_cb (HlQuantityRow *row, HlShellEditor *self) { row_edited (self, row); }
-ROW_CALLBACK (size_row)
-ROW_CALLBACK (wall_thickness_row)
-ROW_CALLBACK (corrosion_allowance_row)
-ROW_CALLBACK (internal_pressure_row)
-ROW_CALLBACK (external_pressure_row)
-ROW_CALLBACK (elastic_modulus_row)
-ROW_CALLBACK (poisson_ratio_row)
-ROW_CALLBACK (yield_strength_row)
-ROW_CALLBACK (allowable_stress_row)
-ROW_CALLBACK (thin_tolerance_row)
-ROW_CALLBACK (joint_efficiency_row)
-#undef ROW_CALLBACK
+static void
+on_row_edited_cb (HlQuantityRow *row,
+                  HlShellEditor *self)
+{
+  row_edited (self, row);
+}
 
 static void
 choices_changed (HlShellEditor *self)
@@ -595,17 +602,7 @@ hl_shell_editor_class_init (HlShellEditorClass *klass)
   CHILD (criterion_dropdown);
 #undef CHILD
 #define CALLBACK(name) gtk_widget_class_bind_template_callback (widget_class, name)
-  CALLBACK (on_size_row_edited_cb);
-  CALLBACK (on_wall_thickness_row_edited_cb);
-  CALLBACK (on_corrosion_allowance_row_edited_cb);
-  CALLBACK (on_internal_pressure_row_edited_cb);
-  CALLBACK (on_external_pressure_row_edited_cb);
-  CALLBACK (on_elastic_modulus_row_edited_cb);
-  CALLBACK (on_poisson_ratio_row_edited_cb);
-  CALLBACK (on_yield_strength_row_edited_cb);
-  CALLBACK (on_allowable_stress_row_edited_cb);
-  CALLBACK (on_thin_tolerance_row_edited_cb);
-  CALLBACK (on_joint_efficiency_row_edited_cb);
+  CALLBACK (on_row_edited_cb);
   CALLBACK (on_form_dropdown_selected_cb);
   CALLBACK (on_ends_dropdown_selected_cb);
   CALLBACK (on_size_kind_dropdown_selected_cb);
