@@ -6,6 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-properties-dialog.h"
+#include "hl-date.h"
 #include "hl-fields.h"
 #include "hl-limits.h"
 
@@ -167,19 +168,6 @@ on_description_changed_cb (GtkTextBuffer      *buffer,
   apply (self);
 }
 
-static gboolean
-valid_date (const char *text)
-{
-  g_autoptr(GDateTime) date = NULL;
-  g_autofree char *iso = NULL;
-
-  if (strlen (text) != 10)
-    return FALSE;
-  iso = g_strdup_printf ("%sT00:00:00Z", text);
-  date = g_date_time_new_from_iso8601 (iso, NULL);
-  return date != NULL;
-}
-
 static void
 on_add_revision_button_clicked_cb (HlPropertiesDialog *self)
 {
@@ -198,7 +186,7 @@ on_add_revision_button_clicked_cb (HlPropertiesDialog *self)
       gtk_label_set_text (self->revision_error_label, message);
       return;
     }
-  if (!valid_date (date))
+  if (!hl_date_valid (date))
     {
       gtk_label_set_text (self->revision_error_label, _("The date must read YYYY-MM-DD."));
       gtk_widget_grab_focus (GTK_WIDGET (self->revision_date_entry));
@@ -308,6 +296,13 @@ hl_properties_dialog_get_engineer_entry (HlPropertiesDialog *self)
 {
   g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
   return GTK_EDITABLE (self->engineer_entry);
+}
+
+GtkEditable *
+hl_properties_dialog_get_revision_date_entry (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return GTK_EDITABLE (self->revision_date_entry);
 }
 
 GtkEditable *

@@ -24,6 +24,7 @@ HlPropertiesDialog *hl_properties_dialog_new (GtkWindow  *parent,
 GtkEditable        *hl_properties_dialog_get_title_entry           (HlPropertiesDialog *self);
 GtkEditable        *hl_properties_dialog_get_engineer_entry        (HlPropertiesDialog *self);
 GtkTextView        *hl_properties_dialog_get_description_view      (HlPropertiesDialog *self);
+GtkEditable        *hl_properties_dialog_get_revision_date_entry   (HlPropertiesDialog *self);
 GtkEditable        *hl_properties_dialog_get_revision_author_entry (HlPropertiesDialog *self);
 GtkEditable        *hl_properties_dialog_get_revision_text_entry   (HlPropertiesDialog *self);
 const char         *hl_properties_dialog_get_revision_error        (HlPropertiesDialog *self);

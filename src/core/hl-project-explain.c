@@ -5,26 +5,11 @@
 #define G_LOG_DOMAIN "hl-project-reader"
 
 #include "hl-project-reader-private.h"
+#include "hl-date.h"
 #include "hl-field-table.h"
 #include "hl-limits.h"
 
 #include <string.h>
-
-gboolean
-hl_reader_valid_date (const char *date)
-{
-  guint64 y, m, d;
-
-  if (date == NULL || strlen (date) != 10 || date[4] != '-' || date[7] != '-')
-    return FALSE;
-  for (guint i = 0; i < 10; i++)
-    if (i != 4 && i != 7 && !g_ascii_isdigit (date[i]))
-      return FALSE;
-  y = g_ascii_strtoull (date, NULL, 10);
-  m = g_ascii_strtoull (date + 5, NULL, 10);
-  d = g_ascii_strtoull (date + 8, NULL, 10);
-  return y >= 1 && g_date_valid_dmy ((GDateDay) d, (GDateMonth) m, (GDateYear) y);
-}
 
 /* ---- plain reasons for schema failures ----------------------------- */
 /* libxml2's RELAX NG messages name the pattern that failed ("Extra
@@ -204,7 +189,7 @@ explain_attributes (HlReader    *rd,
       else if (number == NULL || !g_ascii_string_to_unsigned (number, 10, 1, HL_LIMIT_REVISION_NUMBER, &v, NULL))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "number “%s” is not a whole number from 1 to %d",
               number != NULL ? number : "", HL_LIMIT_REVISION_NUMBER);
-      else if (!hl_reader_valid_date (date))
+      else if (!hl_date_valid (date))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, line, name, "date “%s” is not a YYYY-MM-DD date", date != NULL ? date : "");
     }
 }

@@ -46,7 +46,6 @@ xmlNodePtr  hl_reader_child               (xmlNodePtr  parent,
 char       *hl_reader_prop                (xmlNodePtr  n,
                                            const char *name);
 gboolean    hl_reader_valid_id            (const char *id);
-gboolean    hl_reader_valid_date          (const char *date);
 
 extern const char *const hl_reader_known_project[];
 /* the field table's elements; a material also holds <origin> */

@@ -12,6 +12,7 @@
 
 #include "hl-project-file.h"
 #include "hl-project-reader-private.h"
+#include "hl-date.h"
 #include "hl-field-table.h"
 #include "hl-limits.h"
 #include "hl-shell-check.h"
@@ -567,7 +568,7 @@ read_revision (HlReader    *rd,
       return FALSE;
     }
   /* the schema's date type also takes time zones and five-digit years */
-  if (!hl_reader_valid_date (g_strstrip (date)))
+  if (!hl_date_valid (g_strstrip (date)))
     {
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "revision", "date “%s” is not a YYYY-MM-DD date", date);
       return FALSE;

@@ -7,6 +7,7 @@
 #include "hl-project-file.h"
 #include "hl-atomic-file.h"
 #include "hl-project-reader-private.h"
+#include "hl-date.h"
 #include "hl-field-table.h"
 #include "hl-limits.h"
 #include "hl-shell-check.h"
@@ -327,7 +328,7 @@ check_fields (const HlProject *project,
           return FALSE;
         }
       /* a clearer word than the reader's for what the user can fix */
-      if (!hl_reader_valid_date (r->date))
+      if (!hl_date_valid (r->date))
         {
           g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
                        "Cannot save: revision %u has the date “%s”, not a YYYY-MM-DD date", r->number, r->date);
