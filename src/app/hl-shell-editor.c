@@ -256,7 +256,7 @@ refresh_marks (HlShellEditor *self)
           const HlProblem *p = g_ptr_array_index (problems, k);
 
           if (strcmp (p->field, field) == 0)
-            message = p->message;
+            message = p->local != NULL ? p->local : p->message;
         }
       hl_quantity_row_set_error (row, message);
     }

@@ -68,23 +68,23 @@ static const HlField fields[] = {
   { .element = "material-ref", .kind = HL_FIELD_TEXT, SHELL (material_ref),
     TEXT_SIZE (HlShellInputs, material_ref), .required = TRUE },
   SIZE_ROW ("inner-diameter", HL_SIZE_INNER_DIAMETER, MIN_BORE_DIAMETER_M, "0.1 mm",
-            "a smaller bore than a capillary's is not a pressure shell", N_("Inner diameter"), N_("Inner diameter")),
+            N_("a smaller bore than a capillary's is not a pressure shell"), N_("Inner diameter"), N_("Inner diameter")),
   SIZE_ROW ("outer-diameter", HL_SIZE_OUTER_DIAMETER, MIN_BORE_DIAMETER_M, "0.1 mm",
-            "a smaller shell than a capillary is not a pressure shell", N_("Outer diameter"), N_("Outer diameter")),
+            N_("a smaller shell than a capillary is not a pressure shell"), N_("Outer diameter"), N_("Outer diameter")),
   SIZE_ROW ("inner-radius", HL_SIZE_INNER_RADIUS, MIN_BORE_DIAMETER_M / 2, "0.05 mm",
-            "a smaller bore than a capillary's is not a pressure shell", N_("Inner radius"), N_("Inner radius")),
+            N_("a smaller bore than a capillary's is not a pressure shell"), N_("Inner radius"), N_("Inner radius")),
   SIZE_ROW ("outer-radius", HL_SIZE_OUTER_RADIUS, MIN_BORE_DIAMETER_M / 2, "0.05 mm",
-            "a smaller shell than a capillary is not a pressure shell", N_("Outer radius"), N_("Outer radius")),
+            N_("a smaller shell than a capillary is not a pressure shell"), N_("Outer radius"), N_("Outer radius")),
   { .element = "wall-thickness", .kind = HL_FIELD_LENGTH, SHELL (wall_thickness), .required = TRUE,
     .bounded = TRUE, .min_si = MIN_WALL_M, .max_si = MAX_LENGTH_M, .min_text = "0.01 mm", .max_text = "100 km",
-    .why_min = "a thinner wall is a foil, not a pressure wall", .default_value = 10, .default_unit = "mm",
+    .why_min = N_("a thinner wall is a foil, not a pressure wall"), .default_value = 10, .default_unit = "mm",
     .label = N_("Wall thickness"), .report = N_("Wall thickness (new)"), .sheet = N_("Wall thickness (new)") },
   /* allowances are stated in tenths of a millimetre (common practice),
    * but a small one is harmless; under a nanometre, a few atoms, it is
    * a slip, and zero means none */
   { .element = "corrosion-allowance", .kind = HL_FIELD_LENGTH, SHELL (corrosion_allowance),
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-9, .max_si = MAX_LENGTH_M, .min_text = "1 nm",
-    .max_text = "100 km", .why_min = "a few atoms are no allowance; 0 means none", .default_value = 0,
+    .max_text = "100 km", .why_min = N_("a few atoms are no allowance; 0 means none"), .default_value = 0,
     .default_unit = "mm", .label = N_("Corrosion allowance"), .report = N_("Corrosion allowance"),
     .sheet = N_("Corrosion allowance") },
   /* the results are linear in the pressure, so a small one loses nothing
@@ -96,12 +96,12 @@ static const HlField fields[] = {
    * none means zero (hl_reader_shell_default). */
   { .element = "internal-pressure", .kind = HL_FIELD_PRESSURE, SHELL (internal_pressure),
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-6, .max_si = 1e10, .min_text = "1 µPa",
-    .max_text = "10 GPa", .why_min = "no gauge reads less; 0 means none", .default_value = 10,
+    .max_text = "10 GPa", .why_min = N_("no gauge reads less; 0 means none"), .default_value = 10,
     .default_unit = "bar", .label = N_("Internal pressure"), .report = N_("Internal pressure (gauge)"),
     .sheet = N_("Internal pressure (gauge)") },
   { .element = "external-pressure", .kind = HL_FIELD_PRESSURE, SHELL (external_pressure),
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-6, .max_si = 1e10, .min_text = "1 µPa",
-    .max_text = "10 GPa", .why_min = "no gauge reads less; 0 means none", .default_value = 0,
+    .max_text = "10 GPa", .why_min = N_("no gauge reads less; 0 means none"), .default_value = 0,
     .default_unit = "bar", .label = N_("External pressure"), .report = N_("External pressure (gauge)"),
     .sheet = N_("External pressure (gauge)") },
   /* the material's rows; their defaults are those of hl_material_default() */
@@ -111,25 +111,25 @@ static const HlField fields[] = {
    * diamond, the stiffest, is about 1 050 to 1 200 GPa (from memory) */
   { .element = "elastic-modulus", .kind = HL_FIELD_MODULUS, MATERIAL (elastic_modulus), .required = TRUE,
     .bounded = TRUE, .min_si = 1e6, .max_si = 2e12, .min_text = "1 MPa", .max_text = "2000 GPa",
-    .why_min = "softer than rubber is a slip of the unit", .default_value = 200, .default_unit = "GPa",
+    .why_min = N_("softer than rubber is a slip of the unit"), .default_value = 200, .default_unit = "GPa",
     .label = N_("Elastic modulus"), .report = "Elastic modulus E", .sheet = N_("Elastic modulus E") },
   /* the thermodynamic limits of an isotropic solid (Timoshenko, Theory
    * of Elasticity) */
   { .element = "poisson-ratio", .kind = HL_FIELD_RATIO, MATERIAL (poisson_ratio), .required = TRUE,
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = -1.0, .max_si = 0.5, .min_exclusive = TRUE,
-    .max_exclusive = TRUE, .range_message = "must lie between -1 and 0.5 (exclusive)", .default_value = 0.30,
+    .max_exclusive = TRUE, .range_message = N_("must lie between -1 and 0.5 (exclusive)"), .default_value = 0.30,
     .label = N_("Poisson’s ratio"), .report = "Poisson's ratio", .sheet = N_("Poisson's ratio ν") },
   /* lead, about 5 MPa, is among the weakest metals; the strongest steel
    * wires reach 3 to 4 GPa (from memory) */
   { .element = "yield-strength", .kind = HL_FIELD_STRESS, MATERIAL (yield_strength), .required = TRUE,
     .bounded = TRUE, .min_si = 1e6, .max_si = 1e10, .min_text = "1 MPa", .max_text = "10 GPa",
-    .why_min = "weaker than lead is a slip of the unit", .default_value = 260, .default_unit = "MPa",
+    .why_min = N_("weaker than lead is a slip of the unit"), .default_value = 260, .default_unit = "MPa",
     .label = N_("Yield strength"), .report = "Yield strength", .sheet = N_("Yield strength") },
   /* allowables of plastics at temperature go down to about 1 MPa (from
    * memory), a tenth of that leaves room */
   { .element = "allowable-stress", .kind = HL_FIELD_STRESS, MATERIAL (allowable_stress), .required = TRUE,
     .bounded = TRUE, .min_si = 1e5, .max_si = 1e10, .min_text = "0.1 MPa", .max_text = "10 GPa",
-    .why_min = "lower than any material's allowable is a slip of the unit", .default_value = 138,
+    .why_min = N_("lower than any material's allowable is a slip of the unit"), .default_value = 138,
     .default_unit = "MPa", .label = N_("Allowable stress"), .report = "Allowable stress S",
     .sheet = N_("Allowable stress S") },
   /* Weld joint efficiencies tabulate from 0.45 (single fillet lap joint,
@@ -138,8 +138,8 @@ static const HlField fields[] = {
    * for both; 1e-320 is a slip. */
   { .element = "joint-efficiency", .kind = HL_FIELD_RATIO, SHELL (joint_efficiency), .bounded = TRUE,
     .min_si = 0.1, .max_si = 1.0,
-    .range_message = "must be greater than 0 and at most 1, and at least 0.1 "
-                     "(weld joint efficiencies tabulate from 0.45 to 1)",
+    .range_message = N_("must be greater than 0 and at most 1, and at least 0.1 "
+                        "(weld joint efficiencies tabulate from 0.45 to 1)"),
     .default_value = 1.0, .label = N_("Joint efficiency"), .report = "Joint efficiency E",
     .sheet = N_("Weld joint efficiency") },
   { .element = "thin-radius-basis", .kind = HL_FIELD_CHOICE, SHELL (thin_basis), .default_value = HL_BASIS_MEAN,
@@ -148,7 +148,7 @@ static const HlField fields[] = {
    * 0.001 % the verdict turns on the last digits of the inputs */
   { .element = "thin-tolerance", .kind = HL_FIELD_PERCENT, SHELL (thin_tolerance), .bounded = TRUE,
     .min_si = 1e-5, .max_si = 1.0, .max_exclusive = TRUE, .min_text = "0.001 %", .max_text = "100 %",
-    .why_min = "a smaller tolerance than the inputs' own precision decides nothing", .default_value = 5,
+    .why_min = N_("a smaller tolerance than the inputs' own precision decides nothing"), .default_value = 5,
     .default_unit = "%", .label = N_("Tolerance"), .report = "Thin-wall tolerance",
     .sheet = N_("Thin-wall tolerance") },
   { .element = "verdict-measure", .kind = HL_FIELD_CHOICE, SHELL (verdict_measure),

@@ -4,11 +4,13 @@
  */
 #define G_LOG_DOMAIN "hl-shell-check"
 
+#include "hl-config.h"
 #include "hl-shell-check.h"
 
 #include "hl-field-table.h"
 #include "hl-limits.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <string.h>
 
@@ -41,26 +43,87 @@ hl_problem_free (HlProblem *problem)
   if (problem == NULL)
     return;
   g_free (problem->message);
+  g_free (problem->local);
   g_free (problem);
+}
+
+/* A message twice: in English for the command line, the files and the
+ * reports, and in the user's language for the window.  The format is
+ * marked with N_(); arguments are numbers, units and quoted values. */
+typedef struct
+{
+  char *en;
+  char *local;
+} Say;
+
+static const Say nothing = { NULL, NULL };
+
+static Say say (const char *format, ...) G_GNUC_PRINTF (1, 2);
+
+static Say
+say (const char *format,
+     ...)
+{
+  Say s;
+  va_list args, again;
+
+  va_start (args, format);
+  va_copy (again, args);
+  s.en = g_strdup_vprintf (format, args);
+  s.local = g_strdup_vprintf (g_dgettext (GETTEXT_PACKAGE, format), again);
+  va_end (again);
+  va_end (args);
+  return s;
+}
+
+/* @format takes two strings: a bound ("0.1 mm") and a reason, itself
+ * marked for translation in the field table */
+static Say
+say_reason (const char *format,
+            const char *bound,
+            const char *reason)
+{
+  Say s;
+
+#pragma GCC diagnostic push
+#pragma GCC diagnostic ignored "-Wformat-nonliteral"
+  s.en = g_strdup_printf (format, bound, reason);
+  s.local = g_strdup_printf (g_dgettext (GETTEXT_PACKAGE, format), bound, g_dgettext (GETTEXT_PACKAGE, reason));
+#pragma GCC diagnostic pop
+  return s;
+}
+
+static gboolean
+said (Say s)
+{
+  return s.en != NULL;
+}
+
+static char *
+english (Say s)
+{
+  g_free (s.local);
+  return s.en;
 }
 
 static void
 add (GPtrArray  *problems,
      const char *field,
-     char       *message)
+     Say         message)
 {
   HlProblem *p;
 
-  if (message == NULL)
+  if (message.en == NULL)
     return;
   p = g_new0 (HlProblem, 1);
   p->field = field;
-  p->message = message;
+  p->message = message.en;
+  p->local = message.local;
   g_ptr_array_add (problems, p);
 }
 
 /* Limits of a kind, for a field without its own bounds */
-static char *
+static Say
 check_kind_limits (double          si,
                    HlQuantityKind  kind,
                    gboolean        zero_allowed)
@@ -69,32 +132,32 @@ check_kind_limits (double          si,
     {
     case HL_KIND_LENGTH:
       if (si > HL_MAX_LENGTH_M)
-        return g_strdup ("is unrealistically large (over 100 km)");
+        return say (N_("is unrealistically large (over 100 km)"));
       if (si > 0.0 && si < HL_MIN_LENGTH_M)
-        return g_strdup ("is unrealistically small (under 1 nm)");
+        return say (N_("is unrealistically small (under 1 nm)"));
       break;
     case HL_KIND_STRESS:
     case HL_KIND_MODULUS:
       if (si > HL_MAX_STRESS_PA)
-        return g_strdup ("is unrealistically large (over 10 000 GPa)");
+        return say (N_("is unrealistically large (over 10 000 GPa)"));
       /* material strengths and moduli (never zero) below a kilopascal are
        * a slip of the unit, not a material */
       if (!zero_allowed && si < HL_MIN_MATERIAL_PA)
-        return g_strdup ("is unrealistically small (under 1 kPa)");
+        return say (N_("is unrealistically small (under 1 kPa)"));
       break;
     case HL_KIND_PERCENT:
     case HL_KIND_RATIO:
     default:
       break;
     }
-  return NULL;
+  return nothing;
 }
 
-char *
-hl_check_quantity (const char     *field,
-                   HlQuantity      q,
-                   HlQuantityKind  kind,
-                   gboolean        zero_allowed)
+static Say
+check_quantity (const char     *field,
+                HlQuantity      q,
+                HlQuantityKind  kind,
+                gboolean        zero_allowed)
 {
   double factor = hl_unit_factor (kind, q.unit);
   const HlField *bound = hl_field_lookup (field);
@@ -104,25 +167,35 @@ hl_check_quantity (const char     *field,
     {
       g_autofree char *quoted = hl_text_quote (q.unit, 40);
 
-      return g_strdup_printf ("unknown unit “%s”", quoted);
+      return say (N_("unknown unit “%s”"), quoted);
     }
   if (!isfinite (q.value))
-    return g_strdup ("is not a finite number");
+    return say (N_("is not a finite number"));
   si = kind == HL_KIND_RATIO ? q.value : q.value * factor;
   if (si < 0.0)
-    return g_strdup ("must not be negative");
+    return say (N_("must not be negative"));
   if (si == 0.0 && !zero_allowed)
-    return g_strdup ("must be greater than zero");
+    return say (N_("must be greater than zero"));
   if (bound == NULL || !bound->bounded || bound->kind == HL_FIELD_RATIO)
     return check_kind_limits (si, kind, zero_allowed);
   if (si > bound->max_si)
-    return g_strdup_printf ("is unrealistically large (over %s)", bound->max_text);
+    return say (N_("is unrealistically large (over %s)"), bound->max_text);
   if (si > 0.0 && si < bound->min_si)
-    return g_strdup_printf ("is unrealistically small (under %s%s: %s)", bound->min_text,
-                            zero_allowed ? ", other than 0" : "", bound->why_min);
+    return say_reason (zero_allowed ? N_("is unrealistically small (under %s, other than 0: %s)")
+                                    : N_("is unrealistically small (under %s: %s)"),
+                       bound->min_text, bound->why_min);
   if (bound->max_exclusive && si >= bound->max_si)
-    return g_strdup_printf ("must be less than %s", bound->max_text);
-  return NULL;
+    return say (N_("must be less than %s"), bound->max_text);
+  return nothing;
+}
+
+char *
+hl_check_quantity (const char     *field,
+                   HlQuantity      q,
+                   HlQuantityKind  kind,
+                   gboolean        zero_allowed)
+{
+  return english (check_quantity (field, q, kind, zero_allowed));
 }
 
 static char *
@@ -145,31 +218,30 @@ check_radii (GPtrArray           *problems,
   hl_shell_inputs_radii (in, TRUE, &a, &b);
   if (a_new <= 0.0)
     add (problems, "wall-thickness",
-         g_strdup ("leaves no bore: the wall is as thick as the outer radius or more"));
+         say (N_("leaves no bore: the wall is as thick as the outer radius or more")));
   else if (2.0 * a_new < HL_MIN_BORE_DIAMETER_M)
     {
       g_autofree char *bore = mm_text (2.0 * a_new);
 
       add (problems, "wall-thickness",
-           g_strdup_printf ("leaves a bore of %s mm across; the bore must be at least 0.1 mm", bore));
+           say (N_("leaves a bore of %s mm across; the bore must be at least 0.1 mm"), bore));
     }
   else if (c >= t)
     add (problems, "corrosion-allowance",
-         g_strdup ("must be less than the wall thickness"));
+         say (N_("must be less than the wall thickness")));
   else if (b - a < HL_MIN_WALL_M)
     {
       g_autofree char *left = mm_text (b - a);
 
       add (problems, "corrosion-allowance",
-           g_strdup_printf ("leaves a corroded wall of %s mm; the wall after corrosion must be at least 0.01 mm",
-                            left));
+           say (N_("leaves a corroded wall of %s mm; the wall after corrosion must be at least 0.01 mm"), left));
     }
   else if ((b - a) / a < HL_MIN_THIN_RATIO)
     add (problems, "wall-thickness",
-         g_strdup ("is too thin to compute reliably (under 1e-8 of the inner radius)"));
+         say (N_("is too thin to compute reliably (under 1e-8 of the inner radius)")));
   else if (b_new / a_new > HL_MAX_RADIUS_RATIO)
     add (problems, "wall-thickness",
-         g_strdup ("makes the outer radius more than 1000 times the bore radius (new wall): not a shell"));
+         say (N_("makes the outer radius more than 1000 times the bore radius (new wall): not a shell")));
 }
 
 /* A name is one line: a line break in it could forge a line of the
@@ -177,25 +249,47 @@ check_radii (GPtrArray           *problems,
 static void
 check_name (GPtrArray  *problems,
             const char *name,
-            const char *whose)
+            gboolean    material)
 {
   if (hl_text_has_control (name, FALSE))
     add (problems, "name",
-         g_strdup_printf ("holds a control character (a line break, tab or the like): "
-                          "the name of %s is one line of text", whose));
+         material ? say (N_("holds a control character (a line break, tab or the like): "
+                            "the name of a material is one line of text"))
+                  : say (N_("holds a control character (a line break, tab or the like): "
+                            "the name of a shell is one line of text")));
 }
 
 /* A bare number: one message names its whole range */
-static char *
+static Say
 check_ratio (const HlField *f,
              double         v)
 {
   if (!isfinite (v))
-    return g_strdup ("is not a finite number");
+    return say (N_("is not a finite number"));
   if ((f->min_exclusive ? v <= f->min_si : v < f->min_si)
       || (f->max_exclusive ? v >= f->max_si : v > f->max_si))
-    return g_strdup (f->range_message);
-  return NULL;
+    {
+      Say range = { g_strdup (f->range_message), g_strdup (g_dgettext (GETTEXT_PACKAGE, f->range_message)) };
+
+      return range;
+    }
+  return nothing;
+}
+
+static Say
+field_check (const HlField *f,
+             gconstpointer  slot)
+{
+  switch (f->kind)
+    {
+    case HL_FIELD_TEXT:
+    case HL_FIELD_CHOICE:
+      return nothing;
+    case HL_FIELD_RATIO:
+      return check_ratio (f, *(const double *) slot);
+    default:  /* the quantities */
+      return check_quantity (f->element, *(const HlQuantity *) slot, hl_field_quantity_kind (f), f->zero_allowed);
+    }
 }
 
 char *
@@ -203,18 +297,7 @@ hl_field_check (const HlField *f,
                 gconstpointer  slot)
 {
   g_return_val_if_fail (f != NULL && slot != NULL, NULL);
-
-  switch (f->kind)
-    {
-    case HL_FIELD_TEXT:
-    case HL_FIELD_CHOICE:
-      return NULL;
-    case HL_FIELD_RATIO:
-      return check_ratio (f, *(const double *) slot);
-    default:  /* the quantities */
-      return hl_check_quantity (f->element, *(const HlQuantity *) slot, hl_field_quantity_kind (f),
-                                f->zero_allowed);
-    }
+  return english (field_check (f, slot));
 }
 
 GPtrArray *
@@ -226,12 +309,12 @@ hl_shell_inputs_check (const HlShellInputs *in)
   g_return_val_if_fail (in != NULL, problems);
 
   if (in->id[0] == '\0')
-    add (problems, "id", g_strdup ("the shell needs an id"));
+    add (problems, "id", say (N_("the shell needs an id")));
   /* in the table's order, which the reader's first problem follows */
   for (guint i = 0; i < hl_field_count (); i++)
     {
       const HlField *f = hl_field_nth (i);
-      char *msg;
+      Say msg;
 
       if (f->is_size && f->size_kind != in->size_kind)
         continue;
@@ -245,12 +328,11 @@ hl_shell_inputs_check (const HlShellInputs *in)
       if (f->kind == HL_FIELD_TEXT)
         {
           if (strcmp (f->element, "name") == 0)
-            check_name (problems, hl_field_cslot (f, in),
-                        f->owner == HL_FIELD_OF_MATERIAL ? "a material" : "a shell");
+            check_name (problems, hl_field_cslot (f, in), f->owner == HL_FIELD_OF_MATERIAL);
           continue;
         }
-      msg = hl_field_check (f, hl_field_cslot (f, in));
-      if (msg != NULL && f->kind == HL_FIELD_LENGTH)
+      msg = field_check (f, hl_field_cslot (f, in));
+      if (said (msg) && f->kind == HL_FIELD_LENGTH)
         lengths_ok = FALSE;
       add (problems, f->element, msg);
     }

@@ -14,7 +14,8 @@ G_BEGIN_DECLS
 typedef struct
 {
   const char *field;
-  char       *message;
+  char       *message;  /* English: the command line, files, reports */
+  char       *local;    /* the same in the user's language: the window */
 } HlProblem;
 
 void       hl_problem_free        (HlProblem *problem);

@@ -8,9 +8,11 @@
  */
 #define G_LOG_DOMAIN "hl-units"
 
+#include "hl-config.h"
 #include "hl-units.h"
 #include "hl-limits.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -236,6 +238,7 @@ static gboolean
 convert_number (const char *start,
                 gsize       len,
                 char        separator,
+                gboolean    translate,
                 double     *value,
                 GError    **error)
 {
@@ -250,7 +253,7 @@ convert_number (const char *start,
       g_autofree char *quoted = hl_text_quote (copy, QUOTE_CHARS);
 
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_OUT_OF_RANGE,
-                   "“%s” is too large to be a value", quoted);
+                   translate ? _("“%s” is too large to be a value") : "“%s” is too large to be a value", quoted);
       return FALSE;
     }
   /* -0 is zero: keeps sign tests and the printed value honest */
@@ -283,7 +286,7 @@ hl_parse_number (const char *text,
                    "“%s” is not a plain decimal number", quoted);
       return FALSE;
     }
-  return convert_number (stripped, len, '.', value, error);
+  return convert_number (stripped, len, '.', FALSE, value, error);
 }
 
 /* ---- digit grouping ---------------------------------------------------
@@ -420,11 +423,11 @@ refuse_grouping (const char *s,
           g_autofree char *alt_q = hl_text_quote (alt, QUOTE_CHARS);
 
           g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                       "“%s”: digit grouping is not accepted; write “%s” or “%s”", quoted, plain_q, alt_q);
+                       _("“%s”: digit grouping is not accepted; write “%s” or “%s”"), quoted, plain_q, alt_q);
         }
       else
         g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                     "“%s”: digit grouping is not accepted; write “%s”", quoted, plain_q);
+                     _("“%s”: digit grouping is not accepted; write “%s”"), quoted, plain_q);
       return TRUE;
     }
   /* the locale's own decimal mark used as a group mark before the other
@@ -434,7 +437,7 @@ refuse_grouping (const char *s,
       plain = ungrouped (s, &g, decimal);
       plain_q = hl_text_quote (plain, QUOTE_CHARS);
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                   "“%s”: digit grouping is not accepted; write “%s”", quoted, plain_q);
+                   _("“%s”: digit grouping is not accepted; write “%s”"), quoted, plain_q);
       return TRUE;
     }
   if (!decimal_comma)
@@ -449,7 +452,7 @@ refuse_grouping (const char *s,
           plain[len] = '.';
           plain_q = hl_text_quote (plain, QUOTE_CHARS);
           g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                       "“%s”: the decimal mark here is a point, not a comma; write “%s”", quoted, plain_q);
+                       _("“%s”: the decimal mark here is a point, not a comma; write “%s”"), quoted, plain_q);
           return TRUE;
         }
     }
@@ -468,17 +471,17 @@ set_unknown_unit (GError        **error,
   if (kind == HL_KIND_RATIO)
     {
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
-                   "“%s” is not expected here: this value is a plain number", quoted);
+                   _("“%s” is not expected here: this value is a plain number"), quoted);
       return;
     }
   slip = case_slip (kind, unit_text);
   if (slip != NULL)
     g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
-                 "unknown unit “%s”: the case of a unit symbol matters, did you mean “%s”? "
-                 "(use one of %s)", quoted, slip, known);
+                 _("unknown unit “%s”: the case of a unit symbol matters, did you mean “%s”? "
+                   "(use one of %s)"), quoted, slip, known);
   else
     g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_UNKNOWN_UNIT,
-                 "unknown unit “%s” (use one of %s)", quoted, known);
+                 _("unknown unit “%s” (use one of %s)"), quoted, known);
 }
 
 gboolean
@@ -501,7 +504,7 @@ hl_units_parse (const char     *text,
   stripped = g_strstrip (g_strdup (text != NULL ? text : ""));
   if (stripped[0] == '\0')
     {
-      g_set_error_literal (error, HL_UNITS_ERROR, HL_UNITS_ERROR_EMPTY, "no value given");
+      g_set_error_literal (error, HL_UNITS_ERROR, HL_UNITS_ERROR_EMPTY, _("no value given"));
       return FALSE;
     }
   if (refuse_grouping (stripped, decimal_comma, error))
@@ -519,7 +522,7 @@ hl_units_parse (const char     *text,
       g_autofree char *quoted = hl_text_quote (stripped, QUOTE_CHARS);
 
       g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                   "“%s” does not start with a number", quoted);
+                   _("“%s” does not start with a number"), quoted);
       return FALSE;
     }
   unit_text = stripped + len;
@@ -539,7 +542,7 @@ hl_units_parse (const char     *text,
       set_unknown_unit (error, kind, unit_text);
       return FALSE;
     }
-  if (!convert_number (stripped, len, separator, value, error))
+  if (!convert_number (stripped, len, separator, TRUE, value, error))
     return FALSE;
   if (unit_out != NULL)
     *unit_out = canonical;

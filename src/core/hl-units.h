@@ -64,7 +64,8 @@ const char   *hl_unit_default           (HlQuantityKind kind,
  * a decimal comma a pasted point still reads as a decimal point ("0.5",
  * "7.25", "1.5000", "1.500e3") except where it could group ("1.500",
  * "1.500,5", "1.500.000"), and "1,500.5" is refused as English grouping.
- * Messages quote at most 40 characters of @text.
+ * Messages quote at most 40 characters of @text and are in the user's
+ * language: this parser reads what is typed in the window.
  * On success stores the number as typed in @value and the canonical unit
  * in @unit_out (static string). */
 gboolean      hl_units_parse            (const char     *text,
