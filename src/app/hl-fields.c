@@ -49,36 +49,7 @@ hl_locale_decimal_comma (void)
 char *
 hl_format_field_number (double value)
 {
-  char buf[G_ASCII_DTOSTR_BUF_SIZE];
-  int digits;
-  char *text;
-
-  if (!isfinite (value))
-    return g_strdup ("");
-  /* shortest text that reads back exactly, so showing a value and
-   * reading it again never changes it */
-  for (digits = 1; digits <= 17; digits++)
-    {
-      g_ascii_formatd (buf, sizeof buf, (const char *[]) { "%.1g", "%.2g", "%.3g", "%.4g", "%.5g", "%.6g",
-                                                           "%.7g", "%.8g", "%.9g", "%.10g", "%.11g",
-                                                           "%.12g", "%.13g", "%.14g", "%.15g", "%.16g",
-                                                           "%.17g" }[digits - 1], value);
-      if (g_ascii_strtod (buf, NULL) == value)
-        break;
-    }
-  /* people type 10 and 0.0015, not 1e+01 and 1.5e-03 */
-  if (strchr (buf, 'e') != NULL && value != 0.0 && fabs (value) >= 1e-6 && fabs (value) < 1e15)
-    {
-      int decimals = MAX (0, digits - 1 - (int) floor (log10 (fabs (value))));
-      char fmt[16];
-
-      g_snprintf (fmt, sizeof fmt, "%%.%df", decimals);
-      g_ascii_formatd (buf, sizeof buf, fmt, value);
-    }
-  text = g_strdup (buf);
-  if (hl_locale_decimal_comma ())
-    g_strdelimit (text, ".", ',');
-  return text;
+  return hl_format_shortest (value, hl_locale_decimal_comma ());
 }
 
 typedef struct

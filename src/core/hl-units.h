@@ -1,8 +1,11 @@
-/* hl-units.h — unit tables, parsing and formatting of physical values
+/* hl-units.h — unit tables and parsing of physical values (numbers as
+ * text: hl-number-format.h)
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
 #pragma once
+
+#include "hl-number-format.h"
 
 #include <glib.h>
 
@@ -80,19 +83,5 @@ gboolean      hl_units_parse            (const char     *text,
 gboolean      hl_parse_number           (const char *text,
                                          double     *value,
                                          GError    **error);
-
-/* C-locale text with the fewest significant digits that reads back to
- * exactly @value: a plain decimal for 1e-6 <= |v| < 1e15 ("2000",
- * "0.0125"), printf's exponent form beyond ("1e-320", "1e+22"). */
-char         *hl_format_exact           (double value);
-
-/* @value with @significant digits, C locale, no exponent for
- * 1e-4 <= |v| < 1e9.  Never prints nan or inf: those come out as "n/a". */
-char         *hl_format_significant     (double value,
-                                         int    significant);
-
-/* As hl_format_significant but in the user's locale (decimal comma). */
-char         *hl_format_display         (double value,
-                                         int    significant);
 
 G_END_DECLS

@@ -29,24 +29,9 @@ hl_figure_format_fixed (double   value,
                         int      decimals,
                         gboolean locale)
 {
-  char buf[G_ASCII_DTOSTR_BUF_SIZE];
-
   if (!isfinite (value))
     return g_strdup (_("n/a"));
-  decimals = CLAMP (decimals, 0, 12);
-  /* "-0.0" is not a value anyone wants to read on an axis */
-  if (fabs (value) < 0.5 * pow (10, -decimals))
-    value = 0.0;
-  if (locale)
-    g_snprintf (buf, sizeof buf, "%.*f", decimals, value);
-  else
-    {
-      char fmt[16];
-
-      g_snprintf (fmt, sizeof fmt, "%%.%df", decimals);
-      g_ascii_formatd (buf, sizeof buf, fmt, value);
-    }
-  return true_minus (g_strdup (buf));
+  return true_minus (hl_format_fixed (value, decimals, locale));
 }
 
 char *
@@ -54,19 +39,7 @@ hl_figure_format_sig (double   value,
                       int      digits,
                       gboolean locale)
 {
-  /* a reader of a figure gets 0.000001, not 1e-06: fixed decimals down
-   * to a billionth, trailing zeros trimmed */
-  if (value != 0 && fabs (value) < 1e-4 && fabs (value) >= 1e-9)
-    {
-      int decimals = digits - 1 - (int) floor (log10 (fabs (value)));
-      char *s = hl_figure_format_fixed (value, MIN (decimals, 12), locale);
-      char *end = s + strlen (s) - 1;
-
-      while (end > s && *end == '0')
-        *end-- = '\0';
-      return s;
-    }
-  return true_minus (locale ? hl_format_display (value, digits) : hl_format_significant (value, digits));
+  return true_minus (hl_format_readable (value, digits, locale));
 }
 
 char *

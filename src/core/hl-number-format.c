@@ -1,0 +1,227 @@
+/* hl-number-format.c — every number as text: files, reports, sheet,
+ * figure and fields
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "hl-number-format"
+
+#include "hl-number-format.h"
+
+#include <math.h>
+#include <string.h>
+
+/* Plain decimals for 1e-6 <= |v| < 1e15: the magnitudes of lengths in
+ * metres and pressures in pascals a file holds read and diff better as
+ * "2000" than as "2e+03"; beyond them the exponent is shorter and
+ * clearer ("1e-320"). */
+#define PLAIN_MIN_EXPONENT (-6)
+#define PLAIN_MAX_EXPONENT 14
+
+/* @sci is "[-]d[.ddd]e±X" as printf's %e writes it; the same decimal
+ * number without the exponent, so it reads back to the same double. */
+static char *
+plain_from_scientific (const char *sci)
+{
+  GString *out = g_string_new (NULL);
+  GString *digits = g_string_new (NULL);
+  const char *e = strchr (sci, 'e');
+  int exponent = (int) g_ascii_strtoll (e + 1, NULL, 10);
+  const char *p = sci;
+
+  if (*p == '-')
+    g_string_append_c (out, *p++);
+  for (; p < e; p++)
+    if (g_ascii_isdigit (*p))
+      g_string_append_c (digits, *p);
+  if (exponent >= 0)
+    {
+      gsize int_len = (gsize) exponent + 1;
+
+      for (gsize i = 0; i < int_len; i++)
+        g_string_append_c (out, i < digits->len ? digits->str[i] : '0');
+      if (digits->len > int_len)
+        {
+          g_string_append_c (out, '.');
+          g_string_append (out, digits->str + int_len);
+        }
+    }
+  else
+    {
+      g_string_append (out, "0.");
+      for (int i = 0; i < -exponent - 1; i++)
+        g_string_append_c (out, '0');
+      g_string_append (out, digits->str);
+    }
+  g_string_free (digits, TRUE);
+  return g_string_free (out, FALSE);
+}
+
+char *
+hl_format_exact (double value)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+  int exponent;
+
+  if (!isfinite (value))
+    return g_strdup ("n/a");
+  if (value == 0.0)
+    return g_strdup ("0");
+  /* fewest significant digits that read back exactly (at most 17,
+   * IEEE 754-2008 §5.12.2) */
+  for (int digits = 1; digits <= 17; digits++)
+    {
+      char fmt[8];
+
+      g_snprintf (fmt, sizeof fmt, "%%.%de", digits - 1);
+      g_ascii_formatd (buf, sizeof buf, fmt, value);
+      if (g_ascii_strtod (buf, NULL) == value)
+        break;
+    }
+  exponent = (int) g_ascii_strtoll (strchr (buf, 'e') + 1, NULL, 10);
+  if (exponent < PLAIN_MIN_EXPONENT || exponent > PLAIN_MAX_EXPONENT)
+    return g_strdup (buf);
+  return plain_from_scientific (buf);
+}
+
+static char *
+format_with (double   value,
+             int      significant,
+             gboolean c_locale)
+{
+  char buf[64];
+  double mag;
+
+  if (!isfinite (value))
+    return g_strdup ("n/a");
+  significant = CLAMP (significant, 1, 17);
+  if (value == 0.0)
+    return g_strdup ("0");
+  mag = fabs (value);
+  if (mag >= 1e-4 && mag < 1e9)
+    {
+      int decimals = significant - 1 - (int) floor (log10 (mag));
+
+      decimals = MAX (decimals, 0);
+      if (c_locale)
+        {
+          char fmt[16];
+
+          g_snprintf (fmt, sizeof fmt, "%%.%df", decimals);
+          g_ascii_formatd (buf, sizeof buf, fmt, value);
+        }
+      else
+        g_snprintf (buf, sizeof buf, "%.*f", decimals, value);
+      /* trim trailing zeros after the separator: "12.50" -> "12.5" */
+      if (decimals > 0)
+        {
+          char *end = buf + strlen (buf) - 1;
+
+          while (end > buf && *end == '0')
+            *end-- = '\0';
+          if (*end == '.' || *end == ',')
+            *end = '\0';
+        }
+    }
+  else if (c_locale)
+    {
+      char fmt[16];
+
+      g_snprintf (fmt, sizeof fmt, "%%.%dg", significant);
+      g_ascii_formatd (buf, sizeof buf, fmt, value);
+    }
+  else
+    g_snprintf (buf, sizeof buf, "%.*g", significant, value);
+  if (strcmp (buf, "-0") == 0)
+    return g_strdup ("0");
+  return g_strdup (buf);
+}
+
+char *
+hl_format_significant (double value,
+                       int    significant)
+{
+  return format_with (value, significant, TRUE);
+}
+
+char *
+hl_format_display (double value,
+                   int    significant)
+{
+  return format_with (value, significant, FALSE);
+}
+
+char *
+hl_format_fixed (double   value,
+                 int      decimals,
+                 gboolean locale)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+
+  if (!isfinite (value))
+    return g_strdup ("n/a");
+  decimals = CLAMP (decimals, 0, 12);
+  /* "-0.0" is not a value anyone wants to read on an axis */
+  if (fabs (value) < 0.5 * pow (10, -decimals))
+    value = 0.0;
+  if (locale)
+    g_snprintf (buf, sizeof buf, "%.*f", decimals, value);
+  else
+    {
+      char fmt[16];
+
+      g_snprintf (fmt, sizeof fmt, "%%.%df", decimals);
+      g_ascii_formatd (buf, sizeof buf, fmt, value);
+    }
+  return g_strdup (buf);
+}
+
+char *
+hl_format_readable (double   value,
+                    int      digits,
+                    gboolean locale)
+{
+  if (value != 0 && fabs (value) < 1e-4 && fabs (value) >= 1e-9)
+    {
+      int decimals = digits - 1 - (int) floor (log10 (fabs (value)));
+      char *s = hl_format_fixed (value, MIN (decimals, 12), locale);
+      char *end = s + strlen (s) - 1;
+
+      while (end > s && *end == '0')
+        *end-- = '\0';
+      return s;
+    }
+  return locale ? hl_format_display (value, digits) : hl_format_significant (value, digits);
+}
+
+char *
+hl_format_shortest (double   value,
+                    gboolean decimal_comma)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+  int digits;
+  char *text;
+
+  if (!isfinite (value))
+    return g_strdup ("");
+  for (digits = 1; digits <= 17; digits++)
+    {
+      char fmt[8];
+
+      g_snprintf (fmt, sizeof fmt, "%%.%dg", digits);
+      g_ascii_formatd (buf, sizeof buf, fmt, value);
+      if (g_ascii_strtod (buf, NULL) == value)
+        break;
+    }
+  if (strchr (buf, 'e') != NULL && value != 0.0 && fabs (value) >= 1e-6 && fabs (value) < 1e15)
+    {
+      int decimals = MAX (0, digits - 1 - (int) floor (log10 (fabs (value))));
+      char fmt[16];
+
+      g_snprintf (fmt, sizeof fmt, "%%.%df", decimals);
+      g_ascii_formatd (buf, sizeof buf, fmt, value);
+    }
+  text = g_strdup (buf);
+  if (decimal_comma)
+    g_strdelimit (text, ".", ',');
+  return text;
+}

@@ -1,0 +1,49 @@
+/* hl-number-format.h — every number as text: files, reports, sheet,
+ * figure and fields
+ *
+ * One module, so that a number reads the same wherever it is shown and
+ * a file's number reads back exactly.
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#pragma once
+
+#include <glib.h>
+
+G_BEGIN_DECLS
+
+/* C-locale text with the fewest significant digits that reads back to
+ * exactly @value: a plain decimal for 1e-6 <= |v| < 1e15 ("2000",
+ * "0.0125"), printf's exponent form beyond ("1e-320", "1e+22"). */
+char         *hl_format_exact           (double value);
+
+/* @value with @significant digits, C locale, no exponent for
+ * 1e-4 <= |v| < 1e9.  Never prints nan or inf: those come out as "n/a". */
+char         *hl_format_significant     (double value,
+                                         int    significant);
+
+/* As hl_format_significant but in the user's locale (decimal comma). */
+char         *hl_format_display         (double value,
+                                         int    significant);
+
+/* @decimals after the point (0 to 12), C locale unless @locale; a value
+ * that would print as -0.00 prints as 0.00.  "n/a" when not finite. */
+char         *hl_format_fixed           (double   value,
+                                         int      decimals,
+                                         gboolean locale);
+
+/* For a reader of a figure or sheet: as hl_format_significant (or
+ * hl_format_display with @locale), but fixed decimals, trailing zeros
+ * trimmed, for 1e-9 <= |v| < 1e-4: 0.000001, not 1e-06. */
+char         *hl_format_readable        (double   value,
+                                         int      digits,
+                                         gboolean locale);
+
+/* The shortest text that reads back to exactly @value, without an
+ * exponent for 1e-6 <= |v| < 1e15 (people type 10 and 0.0015), with a
+ * decimal comma when @decimal_comma; "" when not finite.  What a field
+ * shows, so showing a value and reading it again never changes it. */
+char         *hl_format_shortest        (double   value,
+                                         gboolean decimal_comma);
+
+G_END_DECLS
