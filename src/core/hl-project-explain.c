@@ -40,6 +40,20 @@ is_size_element (const char *name)
   return f != NULL && f->is_size;
 }
 
+/* "inner-diameter, outer-diameter, ...": the ways to give a size */
+static char *
+size_list (void)
+{
+  g_autoptr(GStrvBuilder) builder = g_strv_builder_new ();
+  g_auto(GStrv) names = NULL;
+
+  for (guint i = 0; i < hl_field_count (); i++)
+    if (hl_field_nth (i)->is_size)
+      g_strv_builder_add (builder, hl_field_nth (i)->element);
+  names = g_strv_builder_end (builder);
+  return g_strjoinv (", ", names);
+}
+
 /* the words @name may hold, or NULL when it is no word element */
 static GStrv
 choice_words (const char *name)
@@ -205,6 +219,7 @@ explain_children (HlReader            *rd,
   const char *name = (const char *) n->name;
   g_autoptr(GHashTable) seen = g_hash_table_new (g_str_hash, g_str_equal);
   const char *size = NULL;
+  g_autofree char *sizes = size_list ();
 
   for (xmlNodePtr c = n->children; c != NULL && rd->error == NULL; c = c->next)
     {
@@ -216,7 +231,7 @@ explain_children (HlReader            *rd,
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "is not an element of <%s> in format 1", name);
       else if (is_size_element (cname) && size != NULL)
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname,
-              "a second size after <%s>: give exactly one of inner-diameter, outer-diameter, inner-radius, outer-radius", size);
+              "a second size after <%s>: give exactly one of %s", size, sizes);
       else if (g_hash_table_contains (seen, cname)
                && !g_strv_contains ((const char *const[]) { "material", "shell", "revision", NULL }, cname))
         hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (c), cname, "appears twice in <%s>", name);
@@ -229,7 +244,7 @@ explain_children (HlReader            *rd,
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name, "<%s> is missing", required[i]);
   if (rd->error == NULL && strcmp (name, "shell") == 0 && size == NULL)
     hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_SCHEMA, xmlGetLineNo (n), name,
-          "no size given: one of inner-diameter, outer-diameter, inner-radius, outer-radius");
+          "no size given: one of %s", sizes);
 }
 
 void

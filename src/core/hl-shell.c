@@ -87,13 +87,6 @@ typedef struct
 
 static const HlName form_names[] = { { HL_FORM_CYLINDER, "cylinder" }, { HL_FORM_SPHERE, "sphere" }, { 0, NULL } };
 static const HlName ends_names[] = { { HL_ENDS_CLOSED, "closed" }, { HL_ENDS_OPEN, "open" }, { HL_ENDS_PLANE_STRAIN, "plane-strain" }, { 0, NULL } };
-static const HlName size_names[] = {
-  { HL_SIZE_INNER_DIAMETER, "inner-diameter" }, { HL_SIZE_OUTER_DIAMETER, "outer-diameter" },
-  { HL_SIZE_INNER_RADIUS, "inner-radius" }, { HL_SIZE_OUTER_RADIUS, "outer-radius" }, { 0, NULL }
-};
-static const HlName basis_names[] = { { HL_BASIS_INNER, "inner" }, { HL_BASIS_MEAN, "mean" }, { HL_BASIS_OUTER, "outer" }, { 0, NULL } };
-static const HlName measure_names[] = { { HL_MEASURE_HOOP, "hoop" }, { HL_MEASURE_EQUIVALENT, "equivalent" }, { 0, NULL } };
-static const HlName criterion_names[] = { { HL_CRITERION_VON_MISES, "von-mises" }, { HL_CRITERION_TRESCA, "tresca" }, { 0, NULL } };
 
 static const char *
 name_of (const HlName *table,
@@ -119,8 +112,34 @@ value_of (const HlName *table,
   return FALSE;
 }
 
-#define HL_DEFINE_NAMES(prefix, Type, table)                            \
-  const char *prefix##_to_string (Type v) { return name_of (table, (int) v); } \
+/* the words of the choices are the field table's */
+static const char *
+choice_word (const char *element,
+             int         value)
+{
+  const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, element);
+  const HlFieldChoice *c = hl_field_choice_by_value (f, value);
+
+  return c != NULL ? c->word : f->choices[0].word;
+}
+
+static gboolean
+choice_value (const char *element,
+              const char *word,
+              int        *out)
+{
+  const HlFieldChoice *c = hl_field_choice_by_word (hl_field_find (HL_FIELD_OF_SHELL, element), word);
+
+  if (c == NULL)
+    return FALSE;
+  *out = c->value;
+  return TRUE;
+}
+
+/* prefix_to_string() and prefix_from_string() over @table, looked up
+ * with @word_of and @value_of */
+#define HL_DEFINE_WORDS(prefix, Type, word_of, value_of, table)       \
+  const char *prefix##_to_string (Type v) { return word_of (table, (int) v); } \
   gboolean prefix##_from_string (const char *s, Type *out)              \
   {                                                                     \
     int v;                                                              \
@@ -130,26 +149,42 @@ value_of (const HlName *table,
     return TRUE;                                                        \
   }
 
-HL_DEFINE_NAMES (hl_form, HlForm, form_names)
-HL_DEFINE_NAMES (hl_ends, HlEnds, ends_names)
-HL_DEFINE_NAMES (hl_basis, HlRadiusBasis, basis_names)
-HL_DEFINE_NAMES (hl_measure, HlVerdictMeasure, measure_names)
-HL_DEFINE_NAMES (hl_criterion, HlCriterion, criterion_names)
+/* form and ends are attributes, outside the field table; the others
+ * are choice rows of it */
+HL_DEFINE_WORDS (hl_form, HlForm, name_of, value_of, form_names)
+HL_DEFINE_WORDS (hl_ends, HlEnds, name_of, value_of, ends_names)
+HL_DEFINE_WORDS (hl_basis, HlRadiusBasis, choice_word, choice_value, "thin-radius-basis")
+HL_DEFINE_WORDS (hl_measure, HlVerdictMeasure, choice_word, choice_value, "verdict-measure")
+HL_DEFINE_WORDS (hl_criterion, HlCriterion, choice_word, choice_value, "sizing-criterion")
 
+/* the four size elements are rows of the field table */
 const char *
 hl_size_kind_to_element (HlSizeKind kind)
 {
-  return name_of (size_names, (int) kind);
+  const char *first = NULL;
+
+  for (guint i = 0; i < hl_field_count (); i++)
+    {
+      const HlField *f = hl_field_nth (i);
+
+      if (!f->is_size)
+        continue;
+      if (f->size_kind == kind)
+        return f->element;
+      if (first == NULL)
+        first = f->element;
+    }
+  return first;
 }
 
 gboolean
 hl_size_kind_from_element (const char *s,
                            HlSizeKind *out)
 {
-  int v;
+  const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, s);
 
-  if (!value_of (size_names, s, &v))
+  if (f == NULL || !f->is_size)
     return FALSE;
-  *out = (HlSizeKind) v;
+  *out = f->size_kind;
   return TRUE;
 }
