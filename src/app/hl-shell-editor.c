@@ -90,6 +90,33 @@ collect_rows (HlShellEditor *self,
   rows[n] = NULL;
 }
 
+/* A row the template gives no label takes the table's, and every row
+ * the table's tooltip, so a new input needs no more than its entry */
+static void
+label_rows (HlShellEditor *self)
+{
+  HlQuantityRow *rows[N_ROWS];
+
+  collect_rows (self, rows);
+  for (guint i = 0; rows[i] != NULL; i++)
+    {
+      const HlField *f = hl_field_lookup (hl_quantity_row_get_field (rows[i]));
+      g_autofree char *label = NULL;
+
+      if (f == NULL)
+        continue;
+      if (f->tooltip != NULL)
+        gtk_widget_set_tooltip_text (GTK_WIDGET (rows[i]), _(f->tooltip));
+      g_object_get (rows[i], "label", &label, NULL);
+      if ((label == NULL || label[0] == '\0') && f->label != NULL)
+        {
+          g_autofree char *mnemonic = g_strdup_printf ("_%s", _(f->label));
+
+          hl_quantity_row_set_label (rows[i], mnemonic);
+        }
+    }
+}
+
 /* where a field of the table lives in the inputs; size has four names */
 static HlQuantity *
 quantity_slot (HlShellInputs *s,
@@ -653,6 +680,7 @@ hl_shell_editor_init (HlShellEditor *self)
   fill_choices (self->measure_dropdown, "verdict-measure");
   fill_choices (self->criterion_dropdown, "sizing-criterion");
   self->updating--;
+  label_rows (self);
   /* Ctrl+Z belongs to the document's undo, which covers every field */
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->name_entry), FALSE);
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->material_name_entry), FALSE);
