@@ -14,6 +14,8 @@
 #include "hl-config.h"
 #include "hl-window-private.h"
 #include "hl-project-chooser.h"
+#include "hl-questions.h"
+#include "hl-recent-menu.h"
 #include "hl-atomic-file.h"
 
 #include <glib/gi18n.h>
@@ -67,11 +69,8 @@ save_now (HlWindow *self,
     hl_atomic_permit_in_place (NULL);
   if (!saved)
     {
-      GtkWidget *dialog = gtk_message_dialog_new (GTK_WINDOW (self), GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
-                                                  GTK_MESSAGE_ERROR, GTK_BUTTONS_CLOSE,
-                                                  "%s", _("The project was not saved"));
+      GtkWidget *dialog = hl_failure_notice_new (GTK_WINDOW (self), _("The project was not saved"), error->message);
 
-      gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s", error->message);
       g_signal_connect (dialog, "response", G_CALLBACK (gtk_window_destroy), NULL);
       gtk_window_present (GTK_WINDOW (dialog));
       /* a failed save never continues into close or open */
@@ -81,6 +80,13 @@ save_now (HlWindow *self,
   hl_recent_menu_remember (hl_document_get_file (self->document));
   /* what is on disk now is ours: its change notice must not come */
   hl_window_watch_file (self, NULL);
+  {
+    g_autofree char *name = g_file_get_basename (file);
+    /* TRANSLATORS: %s is a file name */
+    g_autofree char *text = g_strdup_printf (_("Saved “%s”."), name);
+
+    hl_window_show_toast (self, text);
+  }
   return TRUE;
 }
 
@@ -112,16 +118,16 @@ static void save_from (HlWindow *self,
                        int       step);
 
 static void
-on_save_question_response_cb (GtkDialog *dialog,
-                              int        response,
-                              HlWindow  *self)
+on_save_question_response_cb (AdwMessageDialog *dialog,
+                              const char       *response,
+                              HlWindow         *self)
 {
   g_autoptr(GFile) file = g_steal_pointer (&self->save_file);
 
   gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
   gtk_window_destroy (GTK_WINDOW (dialog));
   self->question = NULL;
-  if (response == GTK_RESPONSE_ACCEPT)
+  if (g_strcmp0 (response, HL_QUESTION_ACCEPT) == 0)
     save_from (self, file, self->save_step);
   else
     drop_pending (self);   /* nothing written; a close or open waits too */
@@ -217,9 +223,9 @@ save_from (HlWindow *self,
 }
 
 static void
-on_question_response_cb (GtkDialog *dialog,
-                         int        response,
-                         HlWindow  *self)
+on_question_response_cb (AdwMessageDialog *dialog,
+                         const char       *response,
+                         HlWindow         *self)
 {
   /* the answer may close this window while the signal still holds the
    * dialog: it must not point at a window that is gone */
@@ -227,21 +233,17 @@ on_question_response_cb (GtkDialog *dialog,
   gtk_window_destroy (GTK_WINDOW (dialog));
   self->question = NULL;
 
-  switch (response)
+  if (g_strcmp0 (response, HL_QUESTION_SAVE) == 0)
     {
-    case GTK_RESPONSE_ACCEPT:
       if (hl_document_get_file (self->document) == NULL)
         save_as (self);              /* continues after the save */
       else
         save_from (self, NULL, SAVE_STEP_NEWER);
-      break;
-    case GTK_RESPONSE_REJECT:
-      run_pending (self);
-      break;
-    default:
-      drop_pending (self);
-      break;
     }
+  else if (g_strcmp0 (response, HL_QUESTION_DISCARD) == 0)
+    run_pending (self);
+  else
+    drop_pending (self);
 }
 
 /* Runs @k at once when nothing would be lost, else after the user has
@@ -415,17 +417,15 @@ show_disk_notice (HlWindow *self,
     text = g_strdup_printf (_("“%s” was changed by another program. Reload shows that version and drops any "
                               "unsaved changes made here; Keep Mine keeps this version, and saving replaces the "
                               "file with it."), name);
-  gtk_label_set_text (self->disk_label, text);
   g_simple_action_set_enabled (G_SIMPLE_ACTION (g_action_map_lookup_action (G_ACTION_MAP (self), "disk-reload")),
                                !gone);
-  gtk_info_bar_set_revealed (self->disk_bar, TRUE);
+  hl_banner_show (self->disk_bar, GTK_MESSAGE_WARNING, text);
 }
 
 static void
 hide_disk_notice (HlWindow *self)
 {
-  gtk_info_bar_set_revealed (self->disk_bar, FALSE);
-  gtk_label_set_text (self->disk_label, "");
+  hl_banner_hide (self->disk_bar);
 }
 
 /* Every kind of event ends here: the etag alone tells whether the file

@@ -4,7 +4,10 @@
  */
 #pragma once
 
+#include <adwaita.h>
+
 #include "hl-autosave.h"
+#include "hl-banner.h"
 #include "hl-results-table.h"
 #include "hl-shell-editor.h"
 #include "hl-shell-list.h"
@@ -23,10 +26,10 @@ struct _HlWindow
   GtkLabel       *subtitle_label;
   GtkMenuButton  *primary_menu_button;
   GMenu          *recent_section;
-  GtkInfoBar     *info_bar;
-  GtkLabel       *info_label;
-  GtkInfoBar     *disk_bar;      /* the open file changed on disk */
-  GtkLabel       *disk_label;
+  AdwToastOverlay *toast_overlay;
+  HlBanner       *info_bar;
+  HlBanner       *disk_bar;      /* the open file changed on disk */
+  AdwToast       *toast;         /* the one shown, while it is */
   GtkPaned       *paned;
   GtkPaned       *results_paned;
   HlShellList    *shell_list;
@@ -55,6 +58,9 @@ void        hl_window_show_message     (HlWindow       *self,
                                         GtkMessageType  type,
                                         const char     *text);
 void        hl_window_hide_message     (HlWindow       *self);
+/* a short notice that goes by itself ("saved", "exported") */
+void        hl_window_show_toast       (HlWindow       *self,
+                                        const char     *text);
 void        hl_window_set_document     (HlWindow       *self,
                                         HlDocument     *document);
 HlDocument *hl_window_new_document     (HlWindow       *self);

@@ -41,6 +41,8 @@ HlCanvas       *hl_window_get_canvas        (HlWindow *self);
 GtkWidget      *hl_window_get_question      (HlWindow *self);
 /* the message shown in the info bar, or NULL */
 const char     *hl_window_get_message       (HlWindow *self);
+/* the short notice shown now ("Exported …", "Saved …"), or NULL */
+const char     *hl_window_get_toast         (HlWindow *self);
 /* the notice that the file changed on disk while it shows, else NULL */
 const char     *hl_window_get_disk_notice   (HlWindow *self);
 
