@@ -13,6 +13,8 @@ packages=(
   xvfb xauth desktop-file-utils appstream locales poppler-utils
   imagemagick librsvg2-bin librsvg2-common shared-mime-info valgrind libclang-rt-14-dev
   fonts-dejavu-core
+  # tools/check-format.sh
+  clang-format
 )
 
 missing=()
