@@ -7,7 +7,7 @@
 #include "hl-config.h"
 #include "hl-recovery.h"
 #include "hl-autosave.h"
-#include "hl-window-private.h"
+#include "hl-window.h"
 
 #include <glib/gi18n.h>
 
@@ -79,9 +79,8 @@ recover (Recovery              *r,
     window = HL_WINDOW (parent);
   else
     window = hl_window_new (r->application);
-  hl_window_set_document (window, document);
+  hl_window_restore (window, document);
   /* the work now lives in this run's copy, so the old one can go */
-  hl_window_autosave_now (window);
   hl_autosave_entry_delete (entry);
   gtk_window_present (GTK_WINDOW (window));
 }

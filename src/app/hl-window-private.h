@@ -54,9 +54,6 @@ struct _HlWindow
   int             save_step;     /* where that save goes on */
 };
 
-void        hl_window_show_message     (HlWindow       *self,
-                                        GtkMessageType  type,
-                                        const char     *text);
 void        hl_window_hide_message     (HlWindow       *self);
 /* a short notice that goes by itself ("saved", "exported") */
 void        hl_window_show_toast       (HlWindow       *self,
@@ -72,11 +69,17 @@ void        hl_window_open_when_safe   (HlWindow       *self,
                                         GFile          *file);
 /* TRUE when closing must wait for the user's answer */
 gboolean    hl_window_ask_before_close (HlWindow       *self);
-/* watches the document's file for changes by others; @etag (nullable)
- * is the one its content was read with, else the file's etag now */
+
+/* hl-window-disk.c: the file on disk.  Watches the document's file for
+ * changes by others; @etag (nullable) is the one its content was read
+ * with, else the file's etag now */
 void        hl_window_watch_file       (HlWindow       *self,
                                         const char     *etag);
 void        hl_window_unwatch_file     (HlWindow       *self);
+/* the etag of @file now, NULL when it cannot be read */
+char       *hl_window_query_etag       (GFile          *file);
+/* win.disk-reload, win.disk-keep: the banner's answers */
+void        hl_window_add_disk_actions (HlWindow       *self);
 
 /* hl-window-autosave.c: the crash-recovery copy.  _update after every
  * change of the document, _now to write at once, _finish when the window

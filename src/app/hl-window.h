@@ -28,6 +28,16 @@ gboolean        hl_window_is_pristine       (HlWindow *self);
 gboolean        hl_window_shows_file        (HlWindow *self,
                                              GFile    *file);
 
+/* Shows @text in the banner over the window until it is closed or the
+ * project changes. */
+void            hl_window_show_message      (HlWindow       *self,
+                                             GtkMessageType  type,
+                                             const char     *text);
+/* Shows the recovered @document and keeps it in this run's
+ * crash-recovery copy at once, so the copy it came from can go. */
+void            hl_window_restore           (HlWindow   *self,
+                                             HlDocument *document);
+
 /* The session ends now (SIGTERM, SIGINT): unsaved work is kept as a
  * crash-recovery copy for the next start and the window goes without
  * asking. */
