@@ -1,8 +1,8 @@
-/* hl-window-files.c — the window's file commands and the unsaved-changes
- * question
+/* hl-window-files.c — the window's file commands
  *
- * Anything that would drop unsaved work goes through ask_unsaved_then(),
- * which runs the command at once or after the user's answer.  A save
+ * Anything that would drop unsaved work goes through
+ * hl_window_ask_unsaved_then() (hl-window-unsaved.c), which runs the
+ * command at once or after the user's answer.  A save
  * goes through save_from(), which asks before it writes over anything
  * the user may not mean to lose.  Watching the open file is in
  * hl-window-disk.c.
@@ -32,27 +32,6 @@ enum
   SAVE_STEP_WRITE_IN_PLACE,
 };
 
-/* ---- unsaved work ------------------------------------------------- */
-
-static void
-run_pending (HlWindow *self)
-{
-  HlContinuation k = self->pending;
-  g_autoptr(GFile) file = g_steal_pointer (&self->pending_file);
-
-  self->pending = NULL;
-  if (k != NULL)
-    k (self, file);
-}
-
-static void
-drop_pending (HlWindow *self)
-{
-  self->pending = NULL;
-  g_clear_object (&self->pending_file);
-  g_clear_object (&self->save_file);
-}
-
 static gboolean
 save_now (HlWindow *self,
           GFile    *file,
@@ -74,7 +53,7 @@ save_now (HlWindow *self,
       g_signal_connect (dialog, "response", G_CALLBACK (gtk_window_destroy), NULL);
       gtk_window_present (GTK_WINDOW (dialog));
       /* a failed save never continues into close or open */
-      drop_pending (self);
+      hl_window_drop_pending (self);
       return FALSE;
     }
   hl_recent_menu_remember (hl_document_get_file (self->document));
@@ -121,7 +100,7 @@ on_save_question_response_cb (AdwMessageDialog *dialog,
   if (g_strcmp0 (response, HL_QUESTION_ACCEPT) == 0)
     save_from (self, file, self->save_step);
   else
-    drop_pending (self);   /* nothing written; a close or open waits too */
+    hl_window_drop_pending (self);   /* nothing written; a close or open waits too */
 }
 
 /* asks @question; on yes the save of @file goes on at @next */
@@ -208,61 +187,9 @@ save_from (HlWindow *self,
   if (step <= SAVE_STEP_IN_PLACE && ask_in_place (self, target))
     return;
   if (save_now (self, target, step == SAVE_STEP_WRITE_IN_PLACE))
-    run_pending (self);
+    hl_window_run_pending (self);
   else
-    drop_pending (self);
-}
-
-static void
-on_question_response_cb (AdwMessageDialog *dialog,
-                         const char       *response,
-                         HlWindow         *self)
-{
-  /* the answer may close this window while the signal still holds the
-   * dialog: it must not point at a window that is gone */
-  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
-  gtk_window_destroy (GTK_WINDOW (dialog));
-  self->question = NULL;
-
-  if (g_strcmp0 (response, HL_QUESTION_SAVE) == 0)
-    {
-      if (hl_document_get_file (self->document) == NULL)
-        save_as (self);              /* continues after the save */
-      else
-        save_from (self, NULL, SAVE_STEP_NEWER);
-    }
-  else if (g_strcmp0 (response, HL_QUESTION_DISCARD) == 0)
-    run_pending (self);
-  else
-    drop_pending (self);
-}
-
-/* Runs @k at once when nothing would be lost, else after the user has
- * chosen to save or to discard. */
-static void
-ask_unsaved_then (HlWindow     *self,
-                  HlContinuation k,
-                  GFile        *file)
-{
-  GtkWidget *dialog;
-
-  /* one question at a time: it answers for the command that raised it */
-  if (self->question != NULL)
-    {
-      gtk_window_present (GTK_WINDOW (self->question));
-      return;
-    }
-  self->pending = k;
-  g_set_object (&self->pending_file, file);
-  if (!hl_document_get_modified (self->document))
-    {
-      run_pending (self);
-      return;
-    }
-  dialog = hl_unsaved_question_new (GTK_WINDOW (self), hl_document_get_title (self->document));
-  g_signal_connect (dialog, "response", G_CALLBACK (on_question_response_cb), self);
-  self->question = dialog;
-  gtk_window_present (GTK_WINDOW (dialog));
+    hl_window_drop_pending (self);
 }
 
 /* ---- file commands ------------------------------------------------ */
@@ -325,14 +252,6 @@ new_continuation (HlWindow *self,
 }
 
 static void
-close_continuation (HlWindow *self,
-                    GFile    *file)
-{
-  self->close_confirmed = TRUE;
-  gtk_window_close (GTK_WINDOW (self));
-}
-
-static void
 on_open_chooser_response_cb (GtkNativeDialog *chooser,
                              int              response,
                              HlWindow        *self)
@@ -373,7 +292,7 @@ on_save_chooser_response_cb (GtkNativeDialog *chooser,
       save_from (self, file, extension_added ? SAVE_STEP_NAME : SAVE_STEP_NEWER);
     }
   else
-    drop_pending (self);
+    hl_window_drop_pending (self);
   g_clear_object (&self->chooser);
 }
 
@@ -397,7 +316,7 @@ new_activated (GSimpleAction *action,
                GVariant      *param,
                gpointer       user_data)
 {
-  ask_unsaved_then (HL_WINDOW (user_data), new_continuation, NULL);
+  hl_window_ask_unsaved_then (HL_WINDOW (user_data), new_continuation, NULL);
 }
 
 static void
@@ -405,7 +324,7 @@ open_activated (GSimpleAction *action,
                 GVariant      *param,
                 gpointer       user_data)
 {
-  ask_unsaved_then (HL_WINDOW (user_data), open_chooser_continuation, NULL);
+  hl_window_ask_unsaved_then (HL_WINDOW (user_data), open_chooser_continuation, NULL);
 }
 
 /* "open-file" with a path or URI: the same as dropping the file on the
@@ -417,7 +336,16 @@ open_file_activated (GSimpleAction *action,
 {
   g_autoptr(GFile) file = g_file_new_for_commandline_arg (g_variant_get_string (param, NULL));
 
-  ask_unsaved_then (HL_WINDOW (user_data), load_continuation, file);
+  hl_window_ask_unsaved_then (HL_WINDOW (user_data), load_continuation, file);
+}
+
+void
+hl_window_save (HlWindow *self)
+{
+  if (hl_document_get_file (self->document) == NULL)
+    save_as (self);              /* goes on once a file is chosen */
+  else
+    save_from (self, NULL, SAVE_STEP_NEWER);
 }
 
 static void
@@ -425,12 +353,7 @@ save_activated (GSimpleAction *action,
                 GVariant      *param,
                 gpointer       user_data)
 {
-  HlWindow *self = HL_WINDOW (user_data);
-
-  if (hl_document_get_file (self->document) == NULL)
-    save_as (self);
-  else
-    save_from (self, NULL, SAVE_STEP_NEWER);
+  hl_window_save (HL_WINDOW (user_data));
 }
 
 /* "save-to" with a path: saving without the chooser (tests, scripts) */
@@ -467,7 +390,7 @@ void
 hl_window_open_when_safe (HlWindow *self,
                           GFile    *file)
 {
-  ask_unsaved_then (self, load_continuation, file);
+  hl_window_ask_unsaved_then (self, load_continuation, file);
 }
 
 void
@@ -475,13 +398,4 @@ hl_window_add_file_actions (HlWindow *self)
 {
   g_action_map_add_action_entries (G_ACTION_MAP (self), file_entries, G_N_ELEMENTS (file_entries), self);
   hl_window_add_disk_actions (self);
-}
-
-gboolean
-hl_window_ask_before_close (HlWindow *self)
-{
-  if (self->close_confirmed || !hl_document_get_modified (self->document))
-    return FALSE;
-  ask_unsaved_then (self, close_continuation, NULL);
-  return TRUE;
 }

@@ -62,11 +62,23 @@ void        hl_window_set_document     (HlWindow       *self,
                                         HlDocument     *document);
 HlDocument *hl_window_new_document     (HlWindow       *self);
 
-/* hl-window-files.c: new, open, save; the unsaved-changes question */
+/* hl-window-files.c: new, open, save */
 void        hl_window_add_file_actions (HlWindow       *self);
+/* saves to the document's file, or asks for one first */
+void        hl_window_save             (HlWindow       *self);
 /* loads @file once unsaved work is saved or given up */
 void        hl_window_open_when_safe   (HlWindow       *self,
                                         GFile          *file);
+
+/* hl-window-unsaved.c: the unsaved-changes question.  Runs @k at once
+ * when nothing would be lost, else after the user has chosen to save
+ * or to discard */
+void        hl_window_ask_unsaved_then (HlWindow       *self,
+                                        HlContinuation  k,
+                                        GFile          *file);
+/* the command waiting for the answer goes on, or is dropped */
+void        hl_window_run_pending      (HlWindow       *self);
+void        hl_window_drop_pending     (HlWindow       *self);
 /* TRUE when closing must wait for the user's answer */
 gboolean    hl_window_ask_before_close (HlWindow       *self);
 
