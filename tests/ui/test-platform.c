@@ -200,6 +200,26 @@ test_notices (void)
   g_unlink (broken);
 }
 
+/* the first widget under @root of @type with @tooltip (nullable) */
+static GtkWidget *
+find_descendant (GtkWidget  *root,
+                 GType       type,
+                 const char *tooltip)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c != NULL; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (G_TYPE_CHECK_INSTANCE_TYPE (c, type)
+          && (tooltip == NULL || g_strcmp0 (gtk_widget_get_tooltip_text (c), tooltip) == 0))
+        return c;
+      found = find_descendant (c, type, tooltip);
+      if (found != NULL)
+        return found;
+    }
+  return NULL;
+}
+
 static GtkWindow *
 find_toplevel (GType type)
 {
@@ -240,6 +260,29 @@ test_question_escape_keeps_work (void)
   hl_ui_iterate ();
 }
 
+/* The banner's close button takes the problem notice away. */
+static void
+test_banner_closes (void)
+{
+  g_autofree char *path = hl_ui_demo_path ();
+  g_autofree char *broken = g_build_filename (tmp_dir, "broken-again.hoop", NULL);
+  g_autoptr(GFile) broken_file = g_file_new_for_path (broken);
+  HlWindow *window = hl_ui_open_window (app, path);
+  GtkWidget *close;
+
+  g_assert_true (g_file_set_contents (broken, "<hoopline-project format=\"1\"><shell>", -1, NULL));
+  g_assert_false (hl_window_load_file (window, broken_file));
+  g_assert_nonnull (hl_window_get_message (window));
+  close = find_descendant (GTK_WIDGET (window), GTK_TYPE_BUTTON, "Close the notice");
+  g_assert_nonnull (close);
+  g_signal_emit_by_name (close, "clicked");
+  hl_ui_iterate ();
+  g_assert_null (hl_window_get_message (window));
+  gtk_window_destroy (GTK_WINDOW (window));
+  hl_ui_iterate ();
+  g_unlink (broken);
+}
+
 /* Preferences and About are libadwaita's standard windows. */
 static void
 test_standard_windows (void)
@@ -253,6 +296,19 @@ test_standard_windows (void)
   found = find_toplevel (ADW_TYPE_PREFERENCES_WINDOW);
   g_assert_nonnull (found);
   g_assert_true (gtk_window_get_transient_for (found) == GTK_WINDOW (window));
+  /* its rows store their choice at once */
+  {
+    GtkWidget *units = find_descendant (GTK_WIDGET (found), ADW_TYPE_COMBO_ROW, NULL);
+    GSettings *settings = hl_application_get_settings (app);
+    g_autofree char *system = NULL;
+
+    g_assert_nonnull (units);
+    adw_combo_row_set_selected (ADW_COMBO_ROW (units), 1);
+    system = g_settings_get_string (settings, "unit-system");
+    g_assert_cmpstr (system, ==, "us");
+    g_settings_reset (settings, "unit-system");
+    g_assert_cmpuint (adw_combo_row_get_selected (ADW_COMBO_ROW (units)), ==, 0);
+  }
   gtk_window_destroy (found);
 
   g_action_group_activate_action (G_ACTION_GROUP (app), "about", NULL);
@@ -292,6 +348,7 @@ main (int    argc,
   g_test_add_func ("/platform/dark-style", test_dark_style);
   g_test_add_func ("/platform/notices", test_notices);
   g_test_add_func ("/platform/question-escape-keeps-work", test_question_escape_keeps_work);
+  g_test_add_func ("/platform/banner-closes", test_banner_closes);
   g_test_add_func ("/platform/standard-windows", test_standard_windows);
   status = g_test_run ();
   g_clear_object (&app);
