@@ -144,7 +144,6 @@ hl_application_startup (GApplication *application)
     { "win.shell-rename", { "F2", NULL } },
     { "window.close", { "<Control>w", NULL } },
   };
-  g_autoptr(GtkCssProvider) css = gtk_css_provider_new ();
 
   G_APPLICATION_CLASS (hl_application_parent_class)->startup (application);
   hl_canvas_trace ("toolkit started");
@@ -155,9 +154,8 @@ hl_application_startup (GApplication *application)
   for (guint i = 0; i < G_N_ELEMENTS (accels); i++)
     gtk_application_set_accels_for_action (GTK_APPLICATION (self), accels[i].action, accels[i].accels);
 
-  gtk_css_provider_load_from_resource (css, "/org/hoopline/Hoopline/style.css");
-  gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
-                                              GTK_STYLE_PROVIDER_PRIORITY_APPLICATION);
+  /* AdwApplication loads style.css from the resource base path itself
+   * (GtkStyleContext, which adding it by hand takes, goes in GTK 4.10) */
   g_signal_connect (self->settings, "changed::dark-style", G_CALLBACK (on_dark_style_changed_cb), self);
   apply_dark_style (self);
 }
