@@ -49,7 +49,7 @@ HlResultsTable *hl_window_get_results_table (HlWindow *self);
 HlCanvas       *hl_window_get_canvas        (HlWindow *self);
 /* the unsaved-changes question while it is open, else NULL */
 GtkWidget      *hl_window_get_question      (HlWindow *self);
-/* the message shown in the info bar, or NULL */
+/* the problem shown in the banner over the window, or NULL */
 const char     *hl_window_get_message       (HlWindow *self);
 /* the short notice shown now ("Exported …", "Saved …"), or NULL */
 const char     *hl_window_get_toast         (HlWindow *self);
