@@ -20,20 +20,23 @@
 
 struct _HlApplication
 {
-  GtkApplication parent_instance;
+  AdwApplication parent_instance;
 
   GSettings     *settings;
-  gboolean       desktop_dark;   /* the desktop's own choice, kept when ours is off */
   guint          signal_sources[2];
 };
 
-G_DEFINE_FINAL_TYPE (HlApplication, hl_application, GTK_TYPE_APPLICATION)
+G_DEFINE_FINAL_TYPE (HlApplication, hl_application, ADW_TYPE_APPLICATION)
 
+/* Off, the desktop's own light or dark preference decides; on, dark
+ * whatever the desktop says.  The style manager reads the desktop's
+ * preference itself, where the theme name was only a guess. */
 static void
 apply_dark_style (HlApplication *self)
 {
-  g_object_set (gtk_settings_get_default (), "gtk-application-prefer-dark-theme",
-                self->desktop_dark || g_settings_get_boolean (self->settings, "dark-style"), NULL);
+  adw_style_manager_set_color_scheme (adw_style_manager_get_default (),
+                                      g_settings_get_boolean (self->settings, "dark-style")
+                                      ? ADW_COLOR_SCHEME_FORCE_DARK : ADW_COLOR_SCHEME_PREFER_LIGHT);
 }
 
 static void
@@ -97,16 +100,21 @@ about_activated (GSimpleAction *action,
                                                _(HL_CAUTION));
   const char *authors[] = { _("The Hoopline developers"), NULL };
 
-  gtk_show_about_dialog (parent,
-                         "program-name", "Hoopline",
-                         "version", HL_VERSION,
-                         "comments", comments,
-                         "logo-icon-name", HL_APPLICATION_ID,
-                         "license-type", GTK_LICENSE_GPL_3_0,
-                         "authors", authors,
-                         /* TRANSLATORS: your name, one line per translator */
-                         "translator-credits", _("translator-credits"),
-                         NULL);
+  GtkWidget *about = adw_about_window_new ();
+
+  g_object_set (about,
+                "transient-for", parent,
+                "modal", TRUE,
+                "application-name", "Hoopline",
+                "application-icon", HL_APPLICATION_ID,
+                "version", HL_VERSION,
+                "comments", comments,
+                "license-type", GTK_LICENSE_GPL_3_0,
+                "developers", authors,
+                /* TRANSLATORS: your name, one line per translator */
+                "translator-credits", _("translator-credits"),
+                NULL);
+  gtk_window_present (GTK_WINDOW (about));
 }
 
 static const GActionEntry app_entries[] = {
@@ -136,7 +144,6 @@ hl_application_startup (GApplication *application)
     { "win.shell-rename", { "F2", NULL } },
     { "window.close", { "<Control>w", NULL } },
   };
-  g_autoptr(GtkCssProvider) css = gtk_css_provider_new ();
 
   G_APPLICATION_CLASS (hl_application_parent_class)->startup (application);
   hl_canvas_trace ("toolkit started");
@@ -147,10 +154,8 @@ hl_application_startup (GApplication *application)
   for (guint i = 0; i < G_N_ELEMENTS (accels); i++)
     gtk_application_set_accels_for_action (GTK_APPLICATION (self), accels[i].action, accels[i].accels);
 
-  gtk_css_provider_load_from_resource (css, "/org/hoopline/Hoopline/style.css");
-  gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
-                                              GTK_STYLE_PROVIDER_PRIORITY_APPLICATION);
-  g_object_get (gtk_settings_get_default (), "gtk-application-prefer-dark-theme", &self->desktop_dark, NULL);
+  /* AdwApplication loads style.css from the resource base path itself
+   * (GtkStyleContext, which adding it by hand takes, goes in GTK 4.10) */
   g_signal_connect (self->settings, "changed::dark-style", G_CALLBACK (on_dark_style_changed_cb), self);
   apply_dark_style (self);
 }

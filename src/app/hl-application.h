@@ -4,7 +4,7 @@
  */
 #pragma once
 
-#include <gtk/gtk.h>
+#include <adwaita.h>
 
 #include "hl-shell.h"
 
@@ -13,7 +13,7 @@ G_BEGIN_DECLS
 #define HL_APPLICATION_ID "org.hoopline.Hoopline"
 
 #define HL_TYPE_APPLICATION (hl_application_get_type ())
-G_DECLARE_FINAL_TYPE (HlApplication, hl_application, HL, APPLICATION, GtkApplication)
+G_DECLARE_FINAL_TYPE (HlApplication, hl_application, HL, APPLICATION, AdwApplication)
 
 /* @extra_flags: tests add G_APPLICATION_NON_UNIQUE */
 HlApplication *hl_application_new           (GApplicationFlags extra_flags);

@@ -12,8 +12,8 @@
 #include "hl-canvas.h"
 #include "hl-figure.h"
 
+#include <adwaita.h>
 #include <stdio.h>
-#include <string.h>
 #include <time.h>
 
 struct _HlCanvas
@@ -46,20 +46,10 @@ hl_canvas_trace (const char *stage)
 gboolean
 hl_canvas_get_dark (HlCanvas *self)
 {
-  GtkSettings *settings = gtk_widget_get_settings (GTK_WIDGET (self));
-  const char *forced = g_getenv ("GTK_THEME");
-  g_autofree char *theme = NULL;
-  g_autofree char *lower = NULL;
-  gboolean dark = FALSE;
-
   g_return_val_if_fail (HL_IS_CANVAS (self), FALSE);
-  g_object_get (settings, "gtk-application-prefer-dark-theme", &dark, "gtk-theme-name", &theme, NULL);
-  /* the figure follows the widgets: a dark variant asked for by the
-   * preference, the desktop's settings or GTK_THEME ("Adwaita:dark") */
-  if (forced != NULL && forced[0] != '\0')
-    return g_str_has_suffix (forced, ":dark") || strstr (forced, "-dark") != NULL;
-  lower = g_ascii_strdown (theme != NULL ? theme : "", -1);
-  return dark || strstr (lower, "dark") != NULL;
+  /* the figure follows the widgets, whose style the style manager sets
+   * from the desktop's preference and ours */
+  return adw_style_manager_get_dark (adw_style_manager_get_default ());
 }
 
 static void
@@ -106,9 +96,9 @@ on_document_changed_cb (HlDocument *document,
 }
 
 static void
-on_dark_changed_cb (GtkSettings *settings,
-                    GParamSpec  *pspec,
-                    HlCanvas    *self)
+on_dark_changed_cb (AdwStyleManager *manager,
+                    GParamSpec      *pspec,
+                    HlCanvas        *self)
 {
   gtk_widget_queue_draw (GTK_WIDGET (self));
 }
@@ -117,9 +107,7 @@ static void
 hl_canvas_realize (GtkWidget *widget)
 {
   GTK_WIDGET_CLASS (hl_canvas_parent_class)->realize (widget);
-  g_signal_connect_object (gtk_widget_get_settings (widget), "notify::gtk-application-prefer-dark-theme",
-                           G_CALLBACK (on_dark_changed_cb), widget, 0);
-  g_signal_connect_object (gtk_widget_get_settings (widget), "notify::gtk-theme-name",
+  g_signal_connect_object (adw_style_manager_get_default (), "notify::dark",
                            G_CALLBACK (on_dark_changed_cb), widget, 0);
 }
 

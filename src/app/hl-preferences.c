@@ -12,17 +12,17 @@
 
 struct _HlPreferences
 {
-  GtkWindow      parent_instance;
+  AdwPreferencesWindow parent_instance;
 
-  GtkDropDown   *unit_system_dropdown;
+  AdwComboRow   *unit_system_dropdown;
   GtkSpinButton *tolerance_spin;
-  GtkDropDown   *measure_dropdown;
+  AdwComboRow   *measure_dropdown;
   GtkSwitch     *dark_switch;
 };
 
-G_DEFINE_FINAL_TYPE (HlPreferences, hl_preferences, GTK_TYPE_WINDOW)
+G_DEFINE_FINAL_TYPE (HlPreferences, hl_preferences, ADW_TYPE_PREFERENCES_WINDOW)
 
-/* enum keys hold nicks; the drop-downs list them in schema order */
+/* enum keys hold nicks; the combo rows list them in schema order */
 static gboolean
 nick_to_index (GValue   *value,
                GVariant *variant,

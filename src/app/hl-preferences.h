@@ -4,12 +4,12 @@
  */
 #pragma once
 
-#include <gtk/gtk.h>
+#include <adwaita.h>
 
 G_BEGIN_DECLS
 
 #define HL_TYPE_PREFERENCES (hl_preferences_get_type ())
-G_DECLARE_FINAL_TYPE (HlPreferences, hl_preferences, HL, PREFERENCES, GtkWindow)
+G_DECLARE_FINAL_TYPE (HlPreferences, hl_preferences, HL, PREFERENCES, AdwPreferencesWindow)
 
 HlPreferences *hl_preferences_new (GtkWindow *parent,
                                    GSettings *settings);

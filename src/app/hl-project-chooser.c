@@ -1,4 +1,4 @@
-/* hl-project-chooser.c — the file choosers and questions for project files
+/* hl-project-chooser.c — the file choosers for project files
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -9,7 +9,9 @@
 
 #include <glib/gi18n.h>
 
-#define MAX_RECENT 8
+/* GtkFileChooserNative is deprecated from GTK 4.10 in favour of
+ * GtkFileDialog, which GTK 4.8 (Debian 12) does not have yet; it stays
+ * until the oldest supported GTK offers the replacement. */
 
 static GtkFileFilter *
 project_filter (void)
@@ -71,93 +73,4 @@ hl_project_chooser_get_file (GtkNativeDialog *chooser,
         *extension_added = TRUE;
     }
   return file;
-}
-
-GtkWidget *
-hl_save_question_new (GtkWindow  *parent,
-                      const char *question,
-                      const char *detail,
-                      const char *accept_label)
-{
-  GtkWidget *dialog = gtk_message_dialog_new (parent, GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
-                                              GTK_MESSAGE_WARNING, GTK_BUTTONS_NONE, "%s", question);
-
-  gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s", detail);
-  gtk_dialog_add_button (GTK_DIALOG (dialog), _("_Cancel"), GTK_RESPONSE_CANCEL);
-  gtk_widget_add_css_class (gtk_dialog_add_button (GTK_DIALOG (dialog), accept_label, GTK_RESPONSE_ACCEPT),
-                            "destructive-action");
-  /* Enter must not overwrite anything: the safe answer is the default */
-  gtk_dialog_set_default_response (GTK_DIALOG (dialog), GTK_RESPONSE_CANCEL);
-  return dialog;
-}
-
-GtkWidget *
-hl_unsaved_question_new (GtkWindow  *parent,
-                         const char *title)
-{
-  GtkWidget *dialog, *discard;
-
-  dialog = gtk_message_dialog_new (parent, GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
-                                   GTK_MESSAGE_QUESTION, GTK_BUTTONS_NONE,
-                                   _("Save changes to “%s”?"), title);
-  gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s",
-                                            _("Changes that are not saved will be lost."));
-  gtk_dialog_add_button (GTK_DIALOG (dialog), _("_Cancel"), GTK_RESPONSE_CANCEL);
-  discard = gtk_dialog_add_button (GTK_DIALOG (dialog), _("_Discard"), GTK_RESPONSE_REJECT);
-  gtk_widget_add_css_class (discard, "destructive-action");
-  gtk_widget_add_css_class (gtk_dialog_add_button (GTK_DIALOG (dialog), _("_Save"), GTK_RESPONSE_ACCEPT),
-                            "suggested-action");
-  gtk_dialog_set_default_response (GTK_DIALOG (dialog), GTK_RESPONSE_ACCEPT);
-  return dialog;
-}
-
-static void
-rebuild_recent (GMenu *section)
-{
-  GtkRecentManager *manager = gtk_recent_manager_get_default ();
-  GList *items = gtk_recent_manager_get_items (manager);
-  guint n = 0;
-
-  g_menu_remove_all (section);
-  for (GList *l = items; l != NULL && n < MAX_RECENT; l = l->next)
-    {
-      GtkRecentInfo *info = l->data;
-      const char *uri = gtk_recent_info_get_uri (info);
-      g_autoptr(GMenuItem) item = NULL;
-
-      if (!g_str_has_suffix (uri, ".hoop") || !gtk_recent_info_exists (info))
-        continue;
-      item = g_menu_item_new (gtk_recent_info_get_display_name (info), NULL);
-      g_menu_item_set_action_and_target_value (item, "win.open-recent", g_variant_new_string (uri));
-      g_menu_append_item (section, item);
-      n++;
-    }
-  g_list_free_full (items, (GDestroyNotify) gtk_recent_info_unref);
-}
-
-static void
-on_recent_changed_cb (GtkRecentManager *manager,
-                      GMenu            *section)
-{
-  rebuild_recent (section);
-}
-
-void
-hl_recent_menu_bind (GMenu    *section,
-                     gpointer  owner)
-{
-  g_return_if_fail (G_IS_MENU (section));
-
-  g_signal_connect_object (gtk_recent_manager_get_default (), "changed",
-                           G_CALLBACK (on_recent_changed_cb), section, 0);
-  g_object_set_data_full (G_OBJECT (owner), "hl-recent-section", g_object_ref (section), g_object_unref);
-  rebuild_recent (section);
-}
-
-void
-hl_recent_menu_remember (GFile *file)
-{
-  g_autofree char *uri = g_file_get_uri (file);
-
-  gtk_recent_manager_add_item (gtk_recent_manager_get_default (), uri);
 }

@@ -7,7 +7,7 @@
 #include "hl-config.h"
 #include "hl-recovery.h"
 #include "hl-autosave.h"
-#include "hl-window-private.h"
+#include "hl-window.h"
 
 #include <glib/gi18n.h>
 
@@ -79,9 +79,8 @@ recover (Recovery              *r,
     window = HL_WINDOW (parent);
   else
     window = hl_window_new (r->application);
-  hl_window_set_document (window, document);
+  hl_window_restore (window, document);
   /* the work now lives in this run's copy, so the old one can go */
-  hl_window_autosave_now (window);
   hl_autosave_entry_delete (entry);
   gtk_window_present (GTK_WINDOW (window));
 }
@@ -90,9 +89,9 @@ static void ask_next (Recovery  *r,
                       GtkWindow *parent);
 
 static void
-on_response_cb (GtkDialog *dialog,
-                int        response,
-                Recovery  *r)
+on_response_cb (AdwMessageDialog *dialog,
+                const char       *response,
+                Recovery         *r)
 {
   GtkWindow *parent = gtk_window_get_transient_for (GTK_WINDOW (dialog));
   const HlAutosaveEntry *entry = g_ptr_array_index (r->entries, r->next);
@@ -105,18 +104,11 @@ on_response_cb (GtkDialog *dialog,
   gtk_window_destroy (GTK_WINDOW (dialog));
   r->next++;
 
-  switch (response)
-    {
-    case HL_RECOVERY_RESPONSE_RECOVER:
-      recover (r, entry, parent);
-      break;
-    case HL_RECOVERY_RESPONSE_DISCARD:
-      hl_autosave_entry_delete (entry);
-      break;
-    default:
-      /* "Later" or the question closed: the copy waits for the next start */
-      break;
-    }
+  if (g_strcmp0 (response, HL_RECOVERY_RESPONSE_RECOVER) == 0)
+    recover (r, entry, parent);
+  else if (g_strcmp0 (response, HL_RECOVERY_RESPONSE_DISCARD) == 0)
+    hl_autosave_entry_delete (entry);
+  /* else "Later" or the question closed: the copy waits for the next start */
   ask_next (r, parent);
   g_clear_object (&parent);
 }
@@ -129,6 +121,7 @@ ask_next (Recovery  *r,
   g_autofree char *when = NULL;
   const char *title;
   GtkWidget *dialog;
+  AdwMessageDialog *question;
 
   if (r->next >= r->entries->len)
     return;
@@ -138,25 +131,27 @@ ask_next (Recovery  *r,
   if (parent == NULL)
     parent = gtk_application_get_active_window (r->application);
 
-  dialog = gtk_message_dialog_new (parent, GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
-                                   GTK_MESSAGE_QUESTION, GTK_BUTTONS_NONE,
-                                   /* TRANSLATORS: project title, time of the copy */
-                                   _("Hoopline closed unexpectedly. Recover unsaved changes to “%s” from %s?"),
-                                   title, when);
+  dialog = adw_message_dialog_new (parent, NULL, NULL);
+  question = ADW_MESSAGE_DIALOG (dialog);
+  /* TRANSLATORS: project title, time of the copy */
+  adw_message_dialog_format_heading (question, _("Hoopline closed unexpectedly. Recover unsaved changes to “%s” from %s?"),
+                                     title, when);
   if (entry->original_path != NULL && entry->original_path[0] != '\0')
-    gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog),
-                                              _("The project is saved as “%s”. Recovered changes are "
+    adw_message_dialog_format_body (question, _("The project is saved as “%s”. Recovered changes are "
                                                 "written there only when you save."),
-                                              entry->original_path);
+                                    entry->original_path);
   else
-    gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s",
-                                              _("The project had not been saved yet."));
-  gtk_dialog_add_buttons (GTK_DIALOG (dialog),
-                          _("_Later"), HL_RECOVERY_RESPONSE_LATER,
-                          _("_Discard"), HL_RECOVERY_RESPONSE_DISCARD,
-                          _("_Recover"), HL_RECOVERY_RESPONSE_RECOVER,
-                          NULL);
-  gtk_dialog_set_default_response (GTK_DIALOG (dialog), HL_RECOVERY_RESPONSE_RECOVER);
+    adw_message_dialog_set_body (question, _("The project had not been saved yet."));
+  adw_message_dialog_add_responses (question,
+                                    HL_RECOVERY_RESPONSE_LATER, _("_Later"),
+                                    HL_RECOVERY_RESPONSE_DISCARD, _("_Discard"),
+                                    HL_RECOVERY_RESPONSE_RECOVER, _("_Recover"),
+                                    NULL);
+  adw_message_dialog_set_response_appearance (question, HL_RECOVERY_RESPONSE_RECOVER, ADW_RESPONSE_SUGGESTED);
+  adw_message_dialog_set_default_response (question, HL_RECOVERY_RESPONSE_RECOVER);
+  adw_message_dialog_set_close_response (question, HL_RECOVERY_RESPONSE_LATER);
+  gtk_window_set_modal (GTK_WINDOW (dialog), TRUE);
+  gtk_window_set_destroy_with_parent (GTK_WINDOW (dialog), TRUE);
   g_signal_connect (dialog, "response", G_CALLBACK (on_response_cb), r);
   r->question = dialog;
   /* closed with its parent, the question must not be answered later */

@@ -4,15 +4,15 @@
  */
 #pragma once
 
-#include <gtk/gtk.h>
+#include <adwaita.h>
 
 G_BEGIN_DECLS
 
-/* the question's answers */
-#define HL_RECOVERY_RESPONSE_RECOVER GTK_RESPONSE_ACCEPT
-#define HL_RECOVERY_RESPONSE_DISCARD GTK_RESPONSE_REJECT
-/* keeps the copy for the next start */
-#define HL_RECOVERY_RESPONSE_LATER   GTK_RESPONSE_CANCEL
+/* the question's answers, as AdwMessageDialog response ids */
+#define HL_RECOVERY_RESPONSE_RECOVER "recover"
+#define HL_RECOVERY_RESPONSE_DISCARD "discard"
+/* keeps the copy for the next start; Escape answers this too */
+#define HL_RECOVERY_RESPONSE_LATER   "later"
 
 /* Asks about each copy whose writer is gone, newest first, one question
  * at a time over @parent.  Recover opens the project in @parent when

@@ -113,6 +113,17 @@ hl_window_autosave_finish (HlWindow *self)
 }
 
 void
+hl_window_restore (HlWindow   *self,
+                   HlDocument *document)
+{
+  g_return_if_fail (HL_IS_WINDOW (self));
+  g_return_if_fail (HL_IS_DOCUMENT (document));
+
+  hl_window_set_document (self, document);
+  hl_window_autosave_now (self);
+}
+
+void
 hl_window_autosave_keep (HlWindow *self)
 {
   if (self->autosave == NULL || self->document == NULL || !hl_document_get_modified (self->document))

@@ -1,11 +1,11 @@
-/* hl-window-files.c — the window's file commands and the unsaved-changes
- * question
+/* hl-window-files.c — the window's file commands
  *
- * Anything that would drop unsaved work goes through ask_unsaved_then(),
- * which runs the command at once or after the user's answer.  A save
+ * Anything that would drop unsaved work goes through
+ * hl_window_ask_unsaved_then() (hl-window-unsaved.c), which runs the
+ * command at once or after the user's answer.  A save
  * goes through save_from(), which asks before it writes over anything
- * the user may not mean to lose.  The open file is watched, so that a
- * version saved by someone else is neither missed nor silently lost.
+ * the user may not mean to lose.  Watching the open file is in
+ * hl-window-disk.c.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -14,6 +14,8 @@
 #include "hl-config.h"
 #include "hl-window-private.h"
 #include "hl-project-chooser.h"
+#include "hl-questions.h"
+#include "hl-recent-menu.h"
 #include "hl-atomic-file.h"
 
 #include <glib/gi18n.h>
@@ -29,27 +31,6 @@ enum
   SAVE_STEP_WRITE,
   SAVE_STEP_WRITE_IN_PLACE,
 };
-
-/* ---- unsaved work ------------------------------------------------- */
-
-static void
-run_pending (HlWindow *self)
-{
-  HlContinuation k = self->pending;
-  g_autoptr(GFile) file = g_steal_pointer (&self->pending_file);
-
-  self->pending = NULL;
-  if (k != NULL)
-    k (self, file);
-}
-
-static void
-drop_pending (HlWindow *self)
-{
-  self->pending = NULL;
-  g_clear_object (&self->pending_file);
-  g_clear_object (&self->save_file);
-}
 
 static gboolean
 save_now (HlWindow *self,
@@ -67,30 +48,25 @@ save_now (HlWindow *self,
     hl_atomic_permit_in_place (NULL);
   if (!saved)
     {
-      GtkWidget *dialog = gtk_message_dialog_new (GTK_WINDOW (self), GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
-                                                  GTK_MESSAGE_ERROR, GTK_BUTTONS_CLOSE,
-                                                  "%s", _("The project was not saved"));
+      GtkWidget *dialog = hl_failure_notice_new (GTK_WINDOW (self), _("The project was not saved"), error->message);
 
-      gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s", error->message);
       g_signal_connect (dialog, "response", G_CALLBACK (gtk_window_destroy), NULL);
       gtk_window_present (GTK_WINDOW (dialog));
       /* a failed save never continues into close or open */
-      drop_pending (self);
+      hl_window_drop_pending (self);
       return FALSE;
     }
   hl_recent_menu_remember (hl_document_get_file (self->document));
   /* what is on disk now is ours: its change notice must not come */
   hl_window_watch_file (self, NULL);
+  {
+    g_autofree char *name = g_file_get_basename (file);
+    /* TRANSLATORS: %s is a file name */
+    g_autofree char *text = g_strdup_printf (_("Saved “%s”."), name);
+
+    hl_window_show_toast (self, text);
+  }
   return TRUE;
-}
-
-static char *
-query_etag (GFile *file)
-{
-  g_autoptr(GFileInfo) info = g_file_query_info (file, G_FILE_ATTRIBUTE_ETAG_VALUE,
-                                                 G_FILE_QUERY_INFO_NONE, NULL, NULL);
-
-  return info != NULL ? g_strdup (g_file_info_get_etag (info)) : NULL;
 }
 
 /* the file we read was saved again by someone else (a file that is gone
@@ -103,7 +79,7 @@ changed_on_disk (HlWindow *self,
 
   if (self->disk_etag == NULL || !hl_window_shows_file (self, file))
     return FALSE;
-  now = query_etag (file);
+  now = hl_window_query_etag (file);
   return now != NULL && g_strcmp0 (now, self->disk_etag) != 0;
 }
 
@@ -112,19 +88,19 @@ static void save_from (HlWindow *self,
                        int       step);
 
 static void
-on_save_question_response_cb (GtkDialog *dialog,
-                              int        response,
-                              HlWindow  *self)
+on_save_question_response_cb (AdwMessageDialog *dialog,
+                              const char       *response,
+                              HlWindow         *self)
 {
   g_autoptr(GFile) file = g_steal_pointer (&self->save_file);
 
   gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
   gtk_window_destroy (GTK_WINDOW (dialog));
   self->question = NULL;
-  if (response == GTK_RESPONSE_ACCEPT)
+  if (g_strcmp0 (response, HL_QUESTION_ACCEPT) == 0)
     save_from (self, file, self->save_step);
   else
-    drop_pending (self);   /* nothing written; a close or open waits too */
+    hl_window_drop_pending (self);   /* nothing written; a close or open waits too */
 }
 
 /* asks @question; on yes the save of @file goes on at @next */
@@ -211,65 +187,9 @@ save_from (HlWindow *self,
   if (step <= SAVE_STEP_IN_PLACE && ask_in_place (self, target))
     return;
   if (save_now (self, target, step == SAVE_STEP_WRITE_IN_PLACE))
-    run_pending (self);
+    hl_window_run_pending (self);
   else
-    drop_pending (self);
-}
-
-static void
-on_question_response_cb (GtkDialog *dialog,
-                         int        response,
-                         HlWindow  *self)
-{
-  /* the answer may close this window while the signal still holds the
-   * dialog: it must not point at a window that is gone */
-  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
-  gtk_window_destroy (GTK_WINDOW (dialog));
-  self->question = NULL;
-
-  switch (response)
-    {
-    case GTK_RESPONSE_ACCEPT:
-      if (hl_document_get_file (self->document) == NULL)
-        save_as (self);              /* continues after the save */
-      else
-        save_from (self, NULL, SAVE_STEP_NEWER);
-      break;
-    case GTK_RESPONSE_REJECT:
-      run_pending (self);
-      break;
-    default:
-      drop_pending (self);
-      break;
-    }
-}
-
-/* Runs @k at once when nothing would be lost, else after the user has
- * chosen to save or to discard. */
-static void
-ask_unsaved_then (HlWindow     *self,
-                  HlContinuation k,
-                  GFile        *file)
-{
-  GtkWidget *dialog;
-
-  /* one question at a time: it answers for the command that raised it */
-  if (self->question != NULL)
-    {
-      gtk_window_present (GTK_WINDOW (self->question));
-      return;
-    }
-  self->pending = k;
-  g_set_object (&self->pending_file, file);
-  if (!hl_document_get_modified (self->document))
-    {
-      run_pending (self);
-      return;
-    }
-  dialog = hl_unsaved_question_new (GTK_WINDOW (self), hl_document_get_title (self->document));
-  g_signal_connect (dialog, "response", G_CALLBACK (on_question_response_cb), self);
-  self->question = dialog;
-  gtk_window_present (GTK_WINDOW (dialog));
+    hl_window_drop_pending (self);
 }
 
 /* ---- file commands ------------------------------------------------ */
@@ -290,7 +210,7 @@ hl_window_load_file (HlWindow *self,
     hl_atomic_clean_leftovers (g_file_peek_path (file));
   /* taken before reading: a change in between makes the save ask once
    * too often, never once too few */
-  etag = query_etag (file);
+  etag = hl_window_query_etag (file);
   if (!hl_document_load (self->document, file, &warnings, &error))
     {
       /* TRANSLATORS: %s is the loader's message, with file and line */
@@ -329,14 +249,6 @@ new_continuation (HlWindow *self,
   g_autoptr(HlDocument) document = hl_window_new_document (self);
 
   hl_window_set_document (self, document);
-}
-
-static void
-close_continuation (HlWindow *self,
-                    GFile    *file)
-{
-  self->close_confirmed = TRUE;
-  gtk_window_close (GTK_WINDOW (self));
 }
 
 static void
@@ -380,7 +292,7 @@ on_save_chooser_response_cb (GtkNativeDialog *chooser,
       save_from (self, file, extension_added ? SAVE_STEP_NAME : SAVE_STEP_NEWER);
     }
   else
-    drop_pending (self);
+    hl_window_drop_pending (self);
   g_clear_object (&self->chooser);
 }
 
@@ -397,123 +309,6 @@ save_as (HlWindow *self)
   gtk_native_dialog_show (self->chooser);
 }
 
-/* ---- the file on disk --------------------------------------------- */
-
-static void
-show_disk_notice (HlWindow *self,
-                  gboolean  gone)
-{
-  GFile *file = hl_document_get_file (self->document);
-  g_autofree char *name = g_file_get_basename (file);
-  g_autofree char *text = NULL;
-
-  if (gone)
-    /* TRANSLATORS: %s is a file name */
-    text = g_strdup_printf (_("“%s” was deleted or moved by another program. Saving writes it again."), name);
-  else
-    /* TRANSLATORS: %s is a file name */
-    text = g_strdup_printf (_("“%s” was changed by another program. Reload shows that version and drops any "
-                              "unsaved changes made here; Keep Mine keeps this version, and saving replaces the "
-                              "file with it."), name);
-  gtk_label_set_text (self->disk_label, text);
-  g_simple_action_set_enabled (G_SIMPLE_ACTION (g_action_map_lookup_action (G_ACTION_MAP (self), "disk-reload")),
-                               !gone);
-  gtk_info_bar_set_revealed (self->disk_bar, TRUE);
-}
-
-static void
-hide_disk_notice (HlWindow *self)
-{
-  gtk_info_bar_set_revealed (self->disk_bar, FALSE);
-  gtk_label_set_text (self->disk_label, "");
-}
-
-/* Every kind of event ends here: the etag alone tells whether the file
- * is another one now, and it is the one our own saves leave. */
-static void
-on_file_monitor_changed_cb (GFileMonitor      *monitor,
-                            GFile             *file,
-                            GFile             *other,
-                            GFileMonitorEvent  event,
-                            HlWindow          *self)
-{
-  GFile *mine = hl_document_get_file (self->document);
-  g_autofree char *now = NULL;
-
-  if (event == G_FILE_MONITOR_EVENT_ATTRIBUTE_CHANGED || mine == NULL)
-    return;
-  now = query_etag (mine);
-  if (now == NULL)
-    show_disk_notice (self, TRUE);
-  else if (g_strcmp0 (now, self->disk_etag) != 0)
-    show_disk_notice (self, FALSE);
-}
-
-void
-hl_window_unwatch_file (HlWindow *self)
-{
-  if (self->monitor != NULL)
-    {
-      g_signal_handlers_disconnect_by_data (self->monitor, self);
-      g_file_monitor_cancel (self->monitor);
-      g_clear_object (&self->monitor);
-    }
-  g_clear_pointer (&self->disk_etag, g_free);
-  /* dispose may come twice, the second time without the template */
-  if (self->disk_bar != NULL)
-    hide_disk_notice (self);
-}
-
-void
-hl_window_watch_file (HlWindow   *self,
-                      const char *etag)
-{
-  GFile *file = hl_document_get_file (self->document);
-  g_autofree char *kept = g_strdup (etag);
-
-  hl_window_unwatch_file (self);
-  if (file == NULL)
-    return;
-  self->disk_etag = kept != NULL ? g_steal_pointer (&kept) : query_etag (file);
-  /* moves too: another program's save usually renames a new file over
-   * this one */
-  self->monitor = g_file_monitor_file (file, G_FILE_MONITOR_WATCH_MOVES, NULL, NULL);
-  if (self->monitor != NULL)
-    g_signal_connect (self->monitor, "changed", G_CALLBACK (on_file_monitor_changed_cb), self);
-}
-
-static void
-disk_reload_activated (GSimpleAction *action,
-                       GVariant      *param,
-                       gpointer       user_data)
-{
-  HlWindow *self = HL_WINDOW (user_data);
-  g_autoptr(GFile) file = NULL;
-
-  if (hl_document_get_file (self->document) == NULL)
-    return;
-  file = g_object_ref (hl_document_get_file (self->document));
-  hl_window_load_file (self, file);
-}
-
-/* the user has seen the other version and keeps theirs: a save then
- * replaces it without asking again */
-static void
-disk_keep_activated (GSimpleAction *action,
-                     GVariant      *param,
-                     gpointer       user_data)
-{
-  HlWindow *self = HL_WINDOW (user_data);
-  GFile *file = hl_document_get_file (self->document);
-
-  if (file != NULL)
-    {
-      g_free (self->disk_etag);
-      self->disk_etag = query_etag (file);
-    }
-  hide_disk_notice (self);
-}
-
 /* ---- actions ------------------------------------------------------ */
 
 static void
@@ -521,7 +316,7 @@ new_activated (GSimpleAction *action,
                GVariant      *param,
                gpointer       user_data)
 {
-  ask_unsaved_then (HL_WINDOW (user_data), new_continuation, NULL);
+  hl_window_ask_unsaved_then (HL_WINDOW (user_data), new_continuation, NULL);
 }
 
 static void
@@ -529,7 +324,7 @@ open_activated (GSimpleAction *action,
                 GVariant      *param,
                 gpointer       user_data)
 {
-  ask_unsaved_then (HL_WINDOW (user_data), open_chooser_continuation, NULL);
+  hl_window_ask_unsaved_then (HL_WINDOW (user_data), open_chooser_continuation, NULL);
 }
 
 /* "open-file" with a path or URI: the same as dropping the file on the
@@ -541,7 +336,16 @@ open_file_activated (GSimpleAction *action,
 {
   g_autoptr(GFile) file = g_file_new_for_commandline_arg (g_variant_get_string (param, NULL));
 
-  ask_unsaved_then (HL_WINDOW (user_data), load_continuation, file);
+  hl_window_ask_unsaved_then (HL_WINDOW (user_data), load_continuation, file);
+}
+
+void
+hl_window_save (HlWindow *self)
+{
+  if (hl_document_get_file (self->document) == NULL)
+    save_as (self);              /* goes on once a file is chosen */
+  else
+    save_from (self, NULL, SAVE_STEP_NEWER);
 }
 
 static void
@@ -549,12 +353,7 @@ save_activated (GSimpleAction *action,
                 GVariant      *param,
                 gpointer       user_data)
 {
-  HlWindow *self = HL_WINDOW (user_data);
-
-  if (hl_document_get_file (self->document) == NULL)
-    save_as (self);
-  else
-    save_from (self, NULL, SAVE_STEP_NEWER);
+  hl_window_save (HL_WINDOW (user_data));
 }
 
 /* "save-to" with a path: saving without the chooser (tests, scripts) */
@@ -585,28 +384,18 @@ static const GActionEntry file_entries[] = {
   { "save", save_activated },
   { "save-to", save_to_activated, "s" },
   { "save-as", save_as_activated },
-  { "disk-reload", disk_reload_activated },
-  { "disk-keep", disk_keep_activated },
 };
 
 void
 hl_window_open_when_safe (HlWindow *self,
                           GFile    *file)
 {
-  ask_unsaved_then (self, load_continuation, file);
+  hl_window_ask_unsaved_then (self, load_continuation, file);
 }
 
 void
 hl_window_add_file_actions (HlWindow *self)
 {
   g_action_map_add_action_entries (G_ACTION_MAP (self), file_entries, G_N_ELEMENTS (file_entries), self);
-}
-
-gboolean
-hl_window_ask_before_close (HlWindow *self)
-{
-  if (self->close_confirmed || !hl_document_get_modified (self->document))
-    return FALSE;
-  ask_unsaved_then (self, close_continuation, NULL);
-  return TRUE;
+  hl_window_add_disk_actions (self);
 }

@@ -10,7 +10,7 @@
 #include "hl-config.h"
 #include "hl-window.h"
 #include "hl-window-private.h"
-#include "hl-project-chooser.h"
+#include "hl-recent-menu.h"
 #include "hl-application.h"
 #include "hl-export-dialog.h"
 #include "hl-print.h"
@@ -24,27 +24,37 @@ G_DEFINE_FINAL_TYPE (HlWindow, hl_window, GTK_TYPE_APPLICATION_WINDOW)
 
 void
 hl_window_show_message (HlWindow       *self,
-              GtkMessageType  type,
-              const char     *text)
+                        GtkMessageType  type,
+                        const char     *text)
 {
-  gtk_info_bar_set_message_type (self->info_bar, type);
-  gtk_label_set_text (self->info_label, text);
-  gtk_info_bar_set_revealed (self->info_bar, TRUE);
+  hl_banner_show (self->info_bar, type, text);
 }
 
 void
 hl_window_hide_message (HlWindow *self)
 {
-  gtk_info_bar_set_revealed (self->info_bar, FALSE);
-  gtk_label_set_text (self->info_label, "");
+  hl_banner_hide (self->info_bar);
 }
 
 static void
-on_info_bar_response_cb (GtkInfoBar *info_bar,
-                         int         response,
-                         HlWindow   *self)
+on_toast_dismissed_cb (AdwToast *toast,
+                       HlWindow *self)
 {
-  hl_window_hide_message (self);
+  if (self->toast == toast)
+    self->toast = NULL;
+}
+
+void
+hl_window_show_toast (HlWindow   *self,
+                      const char *text)
+{
+  AdwToast *toast = adw_toast_new (text);
+
+  /* the newest notice is the one that counts: it replaces an older one */
+  adw_toast_set_priority (toast, ADW_TOAST_PRIORITY_HIGH);
+  g_signal_connect_object (toast, "dismissed", G_CALLBACK (on_toast_dismissed_cb), self, 0);
+  self->toast = toast;
+  adw_toast_overlay_add_toast (self->toast_overlay, toast);
 }
 
 static void
@@ -162,7 +172,10 @@ export_to (HlWindow   *self,
       g_autofree char *name = g_path_get_basename (path);
       g_autofree char *text = g_strdup_printf (_("Exported “%s”."), name);
 
-      hl_window_show_message (self, GTK_MESSAGE_INFO, text);
+      /* a success needs no answer: it goes by itself, and an older
+       * problem notice goes with it */
+      hl_window_hide_message (self);
+      hl_window_show_toast (self, text);
     }
 }
 
@@ -414,6 +427,7 @@ hl_window_class_init (HlWindowClass *klass)
   object_class->dispose = hl_window_dispose;
   window_class->close_request = hl_window_close_request;
 
+  g_type_ensure (HL_TYPE_BANNER);
   g_type_ensure (HL_TYPE_SHELL_LIST);
   g_type_ensure (HL_TYPE_SHELL_EDITOR);
   g_type_ensure (HL_TYPE_CANVAS);
@@ -425,9 +439,7 @@ hl_window_class_init (HlWindowClass *klass)
   CHILD (primary_menu_button);
   CHILD (recent_section);
   CHILD (info_bar);
-  CHILD (info_label);
   CHILD (disk_bar);
-  CHILD (disk_label);
   CHILD (paned);
   CHILD (results_paned);
   CHILD (shell_list);
@@ -437,7 +449,6 @@ hl_window_class_init (HlWindowClass *klass)
   CHILD (results_table);
   CHILD (caution_label);
 #undef CHILD
-  gtk_widget_class_bind_template_callback (widget_class, on_info_bar_response_cb);
 }
 
 static void
@@ -446,6 +457,9 @@ hl_window_init (HlWindow *self)
   GtkDropTarget *drop;
 
   gtk_widget_init_template (GTK_WIDGET (self));
+  /* the window's own child: bound as a template child, it would be
+   * freed twice when the window goes */
+  self->toast_overlay = ADW_TOAST_OVERLAY (gtk_window_get_child (GTK_WINDOW (self)));
   hl_window_autosave_init (self);
   g_action_map_add_action_entries (G_ACTION_MAP (self), win_entries, G_N_ELEMENTS (win_entries), self);
   hl_window_add_file_actions (self);
@@ -544,16 +558,19 @@ const char *
 hl_window_get_message (HlWindow *self)
 {
   g_return_val_if_fail (HL_IS_WINDOW (self), NULL);
-  if (!gtk_info_bar_get_revealed (self->info_bar))
-    return NULL;
-  return gtk_label_get_text (self->info_label);
+  return hl_banner_get_text (self->info_bar);
 }
 
 const char *
 hl_window_get_disk_notice (HlWindow *self)
 {
   g_return_val_if_fail (HL_IS_WINDOW (self), NULL);
-  if (!gtk_info_bar_get_revealed (self->disk_bar))
-    return NULL;
-  return gtk_label_get_text (self->disk_label);
+  return hl_banner_get_text (self->disk_bar);
+}
+
+const char *
+hl_window_get_toast (HlWindow *self)
+{
+  g_return_val_if_fail (HL_IS_WINDOW (self), NULL);
+  return self->toast != NULL ? adw_toast_get_title (self->toast) : NULL;
 }

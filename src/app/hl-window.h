@@ -28,6 +28,16 @@ gboolean        hl_window_is_pristine       (HlWindow *self);
 gboolean        hl_window_shows_file        (HlWindow *self,
                                              GFile    *file);
 
+/* Shows @text in the banner over the window until it is closed or the
+ * project changes. */
+void            hl_window_show_message      (HlWindow       *self,
+                                             GtkMessageType  type,
+                                             const char     *text);
+/* Shows the recovered @document and keeps it in this run's
+ * crash-recovery copy at once, so the copy it came from can go. */
+void            hl_window_restore           (HlWindow   *self,
+                                             HlDocument *document);
+
 /* The session ends now (SIGTERM, SIGINT): unsaved work is kept as a
  * crash-recovery copy for the next start and the window goes without
  * asking. */
@@ -39,8 +49,10 @@ HlResultsTable *hl_window_get_results_table (HlWindow *self);
 HlCanvas       *hl_window_get_canvas        (HlWindow *self);
 /* the unsaved-changes question while it is open, else NULL */
 GtkWidget      *hl_window_get_question      (HlWindow *self);
-/* the message shown in the info bar, or NULL */
+/* the problem shown in the banner over the window, or NULL */
 const char     *hl_window_get_message       (HlWindow *self);
+/* the short notice shown now ("Exported …", "Saved …"), or NULL */
+const char     *hl_window_get_toast         (HlWindow *self);
 /* the notice that the file changed on disk while it shows, else NULL */
 const char     *hl_window_get_disk_notice   (HlWindow *self);
 

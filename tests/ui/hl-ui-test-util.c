@@ -54,6 +54,23 @@ hl_ui_open_window (HlApplication *app,
   return window;
 }
 
+void
+hl_ui_answer (GtkWidget  *question,
+              const char *response)
+{
+  g_assert_true (ADW_IS_MESSAGE_DIALOG (question));
+  g_assert_true (adw_message_dialog_has_response (ADW_MESSAGE_DIALOG (question), response));
+  g_assert_true (adw_message_dialog_get_response_enabled (ADW_MESSAGE_DIALOG (question), response));
+  adw_message_dialog_response (ADW_MESSAGE_DIALOG (question), response);
+}
+
+char *
+hl_ui_question_text (GtkWidget *question)
+{
+  g_assert_true (ADW_IS_MESSAGE_DIALOG (question));
+  return g_strdup (adw_message_dialog_get_heading (ADW_MESSAGE_DIALOG (question)));
+}
+
 HlApplication *
 hl_ui_application_new (void)
 {

@@ -6,6 +6,7 @@
 #pragma once
 
 #include "hl-application.h"
+#include "hl-questions.h"
 #include "hl-window.h"
 
 G_BEGIN_DECLS
@@ -19,6 +20,12 @@ char          *hl_ui_demo_path       (void);
 /* a new window of @app showing the project at @path, presented */
 HlWindow      *hl_ui_open_window     (HlApplication *app,
                                       const char    *path);
+/* answers the AdwMessageDialog @question with @response, which it must
+ * offer, as a click on that button would */
+void           hl_ui_answer          (GtkWidget     *question,
+                                      const char    *response);
+/* the heading of the AdwMessageDialog @question */
+char          *hl_ui_question_text   (GtkWidget     *question);
 /* a registered application (its startup has run), not unique */
 HlApplication *hl_ui_application_new (void);
 

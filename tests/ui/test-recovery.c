@@ -181,7 +181,7 @@ test_copy_follows_edits (void)
   hl_ui_iterate ();
   question = hl_window_get_question (window);
   g_assert_nonnull (question);
-  gtk_dialog_response (GTK_DIALOG (question), GTK_RESPONSE_REJECT);
+  hl_ui_answer (question, HL_QUESTION_DISCARD);
   hl_ui_iterate ();
   g_assert_null (gtk_application_get_windows (GTK_APPLICATION (app)));
   g_assert_cmpuint (count_copies (".info"), ==, 0);
@@ -266,15 +266,6 @@ crash (GPid pid)
   g_spawn_close_pid (pid);
 }
 
-static char *
-question_text (GtkWidget *question)
-{
-  char *text = NULL;
-
-  g_object_get (question, "text", &text, NULL);
-  return text;
-}
-
 /* Two runs crash with unsaved edits; the next start asks about each: one
  * is recovered, the other discarded. */
 static void
@@ -340,19 +331,19 @@ test_crash_then_recover (void)
       g_assert_true (listed);
       g_assert_true (gtk_window_get_modal (GTK_WINDOW (question)));
       g_assert_nonnull (gtk_window_get_transient_for (GTK_WINDOW (question))); /* over the window */
-      text = question_text (question);
+      text = hl_ui_question_text (question);
       if (strstr (text, "Receiver to keep") != NULL)
         {
           g_assert_false (saw_keep);
           saw_keep = TRUE;
-          gtk_dialog_response (GTK_DIALOG (question), HL_RECOVERY_RESPONSE_RECOVER);
+          hl_ui_answer (question, HL_RECOVERY_RESPONSE_RECOVER);
         }
       else
         {
           g_assert_nonnull (strstr (text, "Receiver to drop"));
           g_assert_false (saw_drop);
           saw_drop = TRUE;
-          gtk_dialog_response (GTK_DIALOG (question), HL_RECOVERY_RESPONSE_DISCARD);
+          hl_ui_answer (question, HL_RECOVERY_RESPONSE_DISCARD);
         }
       hl_ui_iterate ();
     }
@@ -408,7 +399,7 @@ test_later_keeps_copy (void)
   hl_recovery_offer (next_start, NULL);
   question = hl_recovery_get_question (next_start);
   g_assert_nonnull (question);
-  gtk_dialog_response (GTK_DIALOG (question), HL_RECOVERY_RESPONSE_LATER);
+  hl_ui_answer (question, HL_RECOVERY_RESPONSE_LATER);
   hl_ui_iterate ();
   g_assert_null (hl_recovery_get_question (next_start));
   orphans = hl_autosave_find_orphans ();

@@ -135,15 +135,6 @@ activate (HlWindow   *window,
   hl_ui_iterate ();
 }
 
-static char *
-question_text (GtkWidget *question)
-{
-  char *text = NULL;
-
-  g_object_get (question, "text", &text, NULL);
-  return text;
-}
-
 /* the window's question, which must be there and mention @words */
 static GtkWidget *
 expect_question (HlWindow   *window,
@@ -155,7 +146,7 @@ expect_question (HlWindow   *window,
   g_assert_nonnull (question);
   g_assert_true (gtk_widget_get_visible (question));
   g_assert_true (gtk_window_get_modal (GTK_WINDOW (question)));
-  text = question_text (question);
+  text = hl_ui_question_text (question);
   g_test_message ("asked: %s", text);
   if (strstr (text, words) == NULL)
     g_error ("“%s” lacks “%s”", text, words);
@@ -163,10 +154,10 @@ expect_question (HlWindow   *window,
 }
 
 static void
-answer (HlWindow *window,
-        int       response)
+answer (HlWindow   *window,
+        const char *response)
 {
-  gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), response);
+  hl_ui_answer (hl_window_get_question (window), response);
   hl_ui_iterate ();
 }
 
@@ -232,7 +223,7 @@ test_save_as_without_extension (Fixture      *f,
   save_as_typed (f->window, f->dir, "existing");
   expect_question (f->window, "existing.hoop");
   assert_title_on_disk (existing, "Someone's existing project");
-  answer (f->window, GTK_RESPONSE_CANCEL);
+  answer (f->window, HL_QUESTION_CANCEL);
   g_assert_null (hl_window_get_question (f->window));
   assert_title_on_disk (existing, "Someone's existing project");
   g_assert_true (modified (f->window));
@@ -244,7 +235,7 @@ test_save_as_without_extension (Fixture      *f,
 
   save_as_typed (f->window, f->dir, "existing");
   expect_question (f->window, "existing.hoop");
-  answer (f->window, GTK_RESPONSE_ACCEPT);
+  answer (f->window, HL_QUESTION_ACCEPT);
   assert_title_on_disk (existing, "Mine, edited");
   g_assert_false (modified (f->window));
   assert_title_on_disk (f->path, "Mine as opened");
@@ -323,13 +314,13 @@ test_newer_version_asks_before_save (Fixture      *f,
   activate (f->window, "save");
   expect_question (f->window, "changed by someone else");
   assert_title_on_disk (f->path, "Theirs, newer");
-  answer (f->window, GTK_RESPONSE_CANCEL);
+  answer (f->window, HL_QUESTION_CANCEL);
   assert_title_on_disk (f->path, "Theirs, newer");
   g_assert_true (modified (f->window));
 
   activate (f->window, "save");
   expect_question (f->window, "changed by someone else");
-  answer (f->window, GTK_RESPONSE_ACCEPT);
+  answer (f->window, HL_QUESTION_ACCEPT);
   assert_title_on_disk (f->path, "Mine, edited");
   g_assert_false (modified (f->window));
   /* the version on disk is ours now: the next save asks nothing */
@@ -367,9 +358,9 @@ test_close_save_asks_about_newer (Fixture      *f,
   gtk_window_close (GTK_WINDOW (f->window));
   hl_ui_iterate ();
   expect_question (f->window, "Save changes");
-  answer (f->window, GTK_RESPONSE_ACCEPT);
+  answer (f->window, HL_QUESTION_SAVE);
   expect_question (f->window, "changed by someone else");
-  answer (f->window, GTK_RESPONSE_CANCEL);
+  answer (f->window, HL_QUESTION_CANCEL);
   g_assert_null (hl_window_get_question (f->window));
   /* nothing written, and the window stays with the work */
   assert_title_on_disk (f->path, "Theirs, newer");
@@ -415,13 +406,13 @@ test_no_temp_asks (Fixture      *f,
   edit_title (f->window, "Mine, edited");
   activate (f->window, "save");
   expect_question (f->window, "directly");
-  answer (f->window, GTK_RESPONSE_CANCEL);
+  answer (f->window, HL_QUESTION_CANCEL);
   assert_title_on_disk (f->path, "Mine as opened");
   g_assert_true (modified (f->window));
 
   activate (f->window, "save");
   expect_question (f->window, "directly");
-  answer (f->window, GTK_RESPONSE_ACCEPT);
+  answer (f->window, HL_QUESTION_ACCEPT);
   assert_title_on_disk (f->path, "Mine, edited");
   g_assert_false (modified (f->window));
   g_assert_cmpuint (hl_save_test_count_entries (f->dir), ==, 1);
@@ -438,7 +429,7 @@ test_hard_links_ask (Fixture      *f,
   edit_title (f->window, "Mine, edited");
   activate (f->window, "save");
   expect_question (f->window, "directly");
-  answer (f->window, GTK_RESPONSE_ACCEPT);
+  answer (f->window, HL_QUESTION_ACCEPT);
   assert_title_on_disk (f->path, "Mine, edited");
   assert_title_on_disk (second, "Mine, edited");
   g_assert_cmpuint (hl_save_test_stat (f->path).st_nlink, ==, 2);

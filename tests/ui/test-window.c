@@ -271,7 +271,7 @@ test_unsaved_question (void)
   question = hl_window_get_question (window);
   g_assert_nonnull (question);
   g_assert_true (gtk_widget_get_visible (GTK_WIDGET (window)));
-  gtk_dialog_response (GTK_DIALOG (question), GTK_RESPONSE_CANCEL);
+  hl_ui_answer (question, HL_QUESTION_CANCEL);
   hl_ui_iterate ();
   g_assert_null (hl_window_get_question (window));
   g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
@@ -282,7 +282,7 @@ test_unsaved_question (void)
 
     activate (window, "open-file", g_variant_new_string (path));
     g_assert_nonnull (hl_window_get_question (window));
-    gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_CANCEL);
+    hl_ui_answer (hl_window_get_question (window), HL_QUESTION_CANCEL);
     hl_ui_iterate ();
     g_assert_true (hl_document_get_modified (hl_window_get_document (window)));
   }
@@ -290,7 +290,7 @@ test_unsaved_question (void)
   /* ... and a new project */
   activate (window, "new", NULL);
   g_assert_nonnull (hl_window_get_question (window));
-  gtk_dialog_response (GTK_DIALOG (hl_window_get_question (window)), GTK_RESPONSE_REJECT);
+  hl_ui_answer (hl_window_get_question (window), HL_QUESTION_DISCARD);
   hl_ui_iterate ();
   g_assert_null (hl_document_get_file (hl_window_get_document (window)));
   g_assert_false (hl_document_get_modified (hl_window_get_document (window)));
