@@ -271,9 +271,15 @@ hl_command_line_run (int    argc,
       HlExportRequest req = { project, shells, o.export_path, system, (guint) o.points,
                               o.size, o.figure_only, o.shell_id != NULL };
 
-      status = hl_export_run (&req, &error);
-      if (status != HL_EXIT_OK)
-        fprintf (stderr, "hoopline: %s\n", error->message);
+      /* the exit code is ours to choose: a bad request (extension,
+       * size) is a command-line mistake, anything else bad input */
+      if (hl_export_run (&req, &error))
+        status = HL_EXIT_OK;
+      else
+        {
+          status = g_error_matches (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST) ? HL_EXIT_BAD_USAGE : HL_EXIT_BAD_INPUT;
+          fprintf (stderr, "hoopline: %s\n", error->message);
+        }
     }
 
 out:

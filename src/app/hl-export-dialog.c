@@ -60,7 +60,7 @@ hl_export_document (HlDocument  *document,
   HlExportFormat format = hl_export_format_for_path (path);
   HlExportRequest req = { 0 };
   GList *shells = NULL;
-  int status;
+  gboolean ok;
 
   g_return_val_if_fail (HL_IS_DOCUMENT (document), FALSE);
   g_return_val_if_fail (path != NULL, FALSE);
@@ -84,9 +84,9 @@ hl_export_document (HlDocument  *document,
   req.size = size != NULL && size[0] != '\0' ? size : NULL;
   req.figure_only = FALSE;
   req.shell_given = format != HL_EXPORT_TXT;
-  status = hl_export_run (&req, error);
+  ok = hl_export_run (&req, error);
   g_list_free (shells);
-  return status == 0;
+  return ok;
 }
 
 static void

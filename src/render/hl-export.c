@@ -13,6 +13,8 @@
 #include <gio/gio.h>
 #include <string.h>
 
+G_DEFINE_QUARK (hl-export-error-quark, hl_export_error)
+
 HlExportFormat
 hl_export_format_for_path (const char *path)
 {
@@ -51,7 +53,7 @@ append_report (GString             *out,
   return TRUE;
 }
 
-static int
+static gboolean
 export_text (const HlExportRequest *req,
              HlExportFormat         format,
              GError               **error)
@@ -68,7 +70,7 @@ export_text (const HlExportRequest *req,
         {
           g_set_error (error, local->domain, local->code, "shell %s: %s",
                        ((HlShellInputs *) req->shells->data)->id, local->message);
-          return 1;
+          return FALSE;
         }
       csv = hl_report_csv (sol, req->units);
       g_string_append (out, csv);
@@ -81,15 +83,15 @@ export_text (const HlExportRequest *req,
           {
             g_set_error (error, local->domain, local->code, "shell %s: %s",
                          ((HlShellInputs *) l->data)->id, local->message);
-            return 1;
+            return FALSE;
           }
     }
   if (!hl_atomic_write (req->path, out->str, out->len, error))
-    return 1;
-  return 0;
+    return FALSE;
+  return TRUE;
 }
 
-static int
+static gboolean
 export_figure (const HlExportRequest *req,
                HlExportFormat         format,
                GError               **error)
@@ -100,16 +102,19 @@ export_figure (const HlExportRequest *req,
   HlFigureContext ctx = { 0 };
   guint width, height;
 
-  if (!hl_export_parse_size (req->size, format, &width, &height, error))
-    return 2;
+  if (!hl_export_parse_size (req->size, format, &width, &height, &local))
+    {
+      g_set_error_literal (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST, local->message);
+      return FALSE;
+    }
   if (!hl_atomic_check_target (req->path, error))
-    return 1;
+    return FALSE;
   /* without --shell the figure is of the first shell */
   sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
   if (sol == NULL)
     {
       g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
-      return 1;
+      return FALSE;
     }
   ctx.project = req->project;
   ctx.solution = sol;
@@ -117,24 +122,24 @@ export_figure (const HlExportRequest *req,
   ctx.style = HL_FIGURE_STYLE_LIGHT;
   ctx.shell = shell;
   if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
-    return 1;
-  return 0;
+    return FALSE;
+  return TRUE;
 }
 
-int
+gboolean
 hl_export_run (const HlExportRequest *req,
                GError               **error)
 {
   HlExportFormat format = hl_export_format_for_path (req->path);
 
-  g_return_val_if_fail (req != NULL && req->shells != NULL, 2);
+  g_return_val_if_fail (req != NULL && req->shells != NULL, FALSE);
 
   switch (format)
     {
     case HL_EXPORT_CSV:
     case HL_EXPORT_TXT:
       if (!hl_atomic_check_target (req->path, error))
-        return 1;
+        return FALSE;
       return export_text (req, format, error);
     case HL_EXPORT_SVG:
     case HL_EXPORT_PDF:
@@ -142,8 +147,8 @@ hl_export_run (const HlExportRequest *req,
       return export_figure (req, format, error);
     case HL_EXPORT_UNKNOWN:
     default:
-      g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT,
+      g_set_error (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST,
                    "“%s”: the output name must end in .svg, .pdf, .png, .csv or .txt", req->path);
-      return 2;
+      return FALSE;
     }
 }

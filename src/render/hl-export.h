@@ -63,10 +63,20 @@ gboolean       hl_export_figure_file     (const char            *path,
                                           gboolean               figure_only,
                                           GError               **error);
 
-/* Returns 0, 1 (bad values, unwritable target) or 2 (bad request such as
- * an unknown extension or size), the command-line exit codes.  Nothing is
- * left at @path unless the whole export succeeded. */
-int            hl_export_run             (const HlExportRequest *request,
+#define HL_EXPORT_ERROR (hl_export_error_quark ())
+
+/* The export's own errors; others come from the solver and the file
+ * (GIO, HL_ATOMIC_ERROR).  Only the caller knows what a failure means
+ * to it: the command line maps a bad request to its exit code 2. */
+typedef enum
+{
+  HL_EXPORT_ERROR_BAD_REQUEST,   /* unknown extension, bad size */
+} HlExportError;
+
+GQuark         hl_export_error_quark     (void);
+
+/* Nothing is left at @path unless the whole export succeeded. */
+gboolean       hl_export_run             (const HlExportRequest *request,
                                           GError               **error);
 
 G_END_DECLS

@@ -129,8 +129,16 @@ run_export (HlProject           *project,
 {
   g_autoptr(GList) shells = g_list_append (NULL, (gpointer) shell);
   HlExportRequest req = { project, shells, path, HL_UNIT_SYSTEM_SI, HL_DEFAULT_POINTS, size, figure_only, TRUE };
+  g_autoptr(GError) local = NULL;
+  int status;
 
-  return hl_export_run (&req, error);
+  /* the command line's exit codes (DESIGN.md §5), from the error kind */
+  if (hl_export_run (&req, &local))
+    return 0;
+  g_assert_nonnull (local);
+  status = g_error_matches (local, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST) ? 2 : 1;
+  g_propagate_error (error, g_steal_pointer (&local));
+  return status;
 }
 
 static void
@@ -314,7 +322,8 @@ test_bad_values (void)
   {
     HlExportRequest req = { demo, shells, out, HL_UNIT_SYSTEM_SI, HL_DEFAULT_POINTS, NULL, FALSE, FALSE };
 
-    g_assert_cmpint (hl_export_run (&req, &error), ==, 1);
+    g_assert_false (hl_export_run (&req, &error));
+  g_assert_false (g_error_matches (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST));
     g_assert_nonnull (strstr (error->message, bad.id));
   }
   g_assert_cmpuint (count_entries (dir), ==, 0);
