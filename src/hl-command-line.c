@@ -277,7 +277,8 @@ hl_command_line_run (int    argc,
         status = HL_EXIT_OK;
       else
         {
-          status = g_error_matches (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST) ? HL_EXIT_BAD_USAGE : HL_EXIT_BAD_INPUT;
+          status = g_error_matches (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST) ? HL_EXIT_BAD_USAGE
+                                                                                          : HL_EXIT_BAD_INPUT;
           fprintf (stderr, "hoopline: %s\n", error->message);
         }
     }

@@ -13,8 +13,8 @@ packages=(
   xvfb xauth desktop-file-utils appstream locales poppler-utils
   imagemagick librsvg2-bin librsvg2-common shared-mime-info valgrind libclang-rt-14-dev
   fonts-dejavu-core
-  # tools/check-format.sh
-  clang-format
+  # tools/check-format.py (the test "format") and .ci/run's count
+  python3 git
 )
 
 missing=()

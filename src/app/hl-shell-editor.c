@@ -163,7 +163,8 @@ set_choice (HlShellEditor *self,
 {
   const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, element);
 
-  set_dropdown (self, dropdown, hl_field_choice_position (f, hl_field_choice_get (f, hl_field_cslot (f, &self->shown))));
+  set_dropdown (self, dropdown,
+                hl_field_choice_position (f, hl_field_choice_get (f, hl_field_cslot (f, &self->shown))));
 }
 
 static void

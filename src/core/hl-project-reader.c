@@ -508,7 +508,8 @@ read_shell (HlReader    *rd,
     {
       HlProblem *p = g_ptr_array_index (problems, 0);
       /* material fields live in the material element */
-      gboolean in_material = hl_reader_child (n, p->field) == NULL && reader_material (rd, project, s.material_ref) != NULL;
+      gboolean in_material = hl_reader_child (n, p->field) == NULL
+                             && reader_material (rd, project, s.material_ref) != NULL;
 
       hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, field_line (n, p->field), p->field, "%s%s", p->message,
             in_material ? " (in the shell's material)" : "");

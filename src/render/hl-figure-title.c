@@ -15,7 +15,7 @@ verdict_text (HlFigure *f)
   const HlSolution *sol = f->sol;
   gboolean eq = sol->inputs.verdict_measure == HL_MEASURE_EQUIVALENT;
   HlResult err = eq ? sol->thin_wall_error_equivalent : sol->thin_wall_error;
-  
+
   g_autofree char *tol = hl_figure_format_sig (sol->tolerance, 3, f->locale);
   g_autofree char *e = NULL, *e_pct = NULL, *tol_pct = NULL;
 

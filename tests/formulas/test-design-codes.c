@@ -420,7 +420,8 @@ test_barlow (void)
 
   for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
     {
-      HlShellInputs in = hlt_shell (HL_FORM_CYLINDER, HL_ENDS_OPEN, cases[i].kind, cases[i].size, cases[i].t, 1 * MPA, 0);
+      HlShellInputs in = hlt_shell (HL_FORM_CYLINDER, HL_ENDS_OPEN, cases[i].kind, cases[i].size, cases[i].t,
+                                    1 * MPA, 0);
       g_autoptr(HlSolution) s = NULL;
 
       in.material.allowable_stress = hl_quantity_make (85, "MPa");

@@ -514,7 +514,8 @@ test_thin_wall_error (void)
       if (s == NULL)
         return;
       hlt_assert_result (s->thin_wall_error, hand[i].hoop_error, 1e-12, 1e-12);
-      hlt_assert_close (hl_thin_wall_error (&s->lame, hand[i].basis, HL_MEASURE_HOOP), hand[i].hoop_error, 1e-12, 1e-12);
+      hlt_assert_close (hl_thin_wall_error (&s->lame, hand[i].basis, HL_MEASURE_HOOP), hand[i].hoop_error,
+                        1e-12, 1e-12);
       if (!isnan (hand[i].eq_error))
         hlt_assert_result (s->thin_wall_error_equivalent, hand[i].eq_error, 1e-12, 0);
     }
@@ -533,7 +534,10 @@ test_thin_wall_error (void)
             s = hlt_solve (&in, 11);
             if (s == NULL)
               return;
-            hlt_assert_result (s->thin_wall_error, hlt_thin_wall_error (s->inputs.form, s->inputs.ends, basis, HL_MEASURE_HOOP, s->a, s->b, s->pi, s->po), 1e-9, 1e-9);
+            hlt_assert_result (s->thin_wall_error,
+                               hlt_thin_wall_error (s->inputs.form, s->inputs.ends, basis, HL_MEASURE_HOOP,
+                                                    s->a, s->b, s->pi, s->po),
+                               1e-9, 1e-9);
             hlt_assert_result (s->thin_wall_error_equivalent,
                                hlt_thin_wall_error (s->inputs.form, s->inputs.ends, basis, HL_MEASURE_EQUIVALENT,
                                                     s->a, s->b, s->pi, s->po), 1e-9, 1e-9);

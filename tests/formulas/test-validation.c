@@ -450,7 +450,9 @@ test_extreme_valid (void)
    * corrosion allowance. */
   static const double ks[] = { 1.00002, 1.01, 2, 1000 };
   static const double loads[][2] = { { 1e-6, 0 }, { 10e6, 0 }, { 0, 10e6 }, { 20e6, 5e6 }, { 0, 0 }, { 1e-6, 1e-6 } };
-  static const HlSizeKind kinds[] = { HL_SIZE_INNER_DIAMETER, HL_SIZE_OUTER_DIAMETER, HL_SIZE_INNER_RADIUS, HL_SIZE_OUTER_RADIUS };
+  static const HlSizeKind kinds[] = {
+    HL_SIZE_INNER_DIAMETER, HL_SIZE_OUTER_DIAMETER, HL_SIZE_INNER_RADIUS, HL_SIZE_OUTER_RADIUS
+  };
   guint n = 0;
 
   for (guint f = 0; f < 4; f++)
