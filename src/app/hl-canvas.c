@@ -52,6 +52,18 @@ hl_canvas_get_dark (HlCanvas *self)
   return adw_style_manager_get_dark (adw_style_manager_get_default ());
 }
 
+void
+hl_canvas_build_context (HlCanvas        *self,
+                         HlFigureContext *ctx)
+{
+  g_return_if_fail (HL_IS_CANVAS (self) && self->document != NULL);
+
+  hl_figure_context_init (ctx, hl_document_get_project (self->document), hl_document_get_shell (self->document),
+                          hl_document_get_solution (self->document), hl_document_get_problem_text (self->document),
+                          HL_FIGURE_TARGET_SCREEN);
+  ctx->style = hl_canvas_get_dark (self) ? HL_FIGURE_STYLE_DARK : HL_FIGURE_STYLE_LIGHT;
+}
+
 static void
 draw_cb (GtkDrawingArea *area,
          cairo_t        *cr,
@@ -60,19 +72,12 @@ draw_cb (GtkDrawingArea *area,
          gpointer        user_data)
 {
   HlCanvas *self = HL_CANVAS (area);
-  const HlProject *project;
   HlFigureContext ctx = { 0 };
   gint64 before = g_get_monotonic_time ();
 
   if (self->document == NULL)
     return;
-  project = hl_document_get_project (self->document);
-  ctx.project = project;
-  ctx.solution = hl_document_get_solution (self->document);
-  ctx.problem_text = hl_document_get_problem_text (self->document);
-  ctx.units = project->display_units;
-  ctx.style = hl_canvas_get_dark (self) ? HL_FIGURE_STYLE_DARK : HL_FIGURE_STYLE_LIGHT;
-  ctx.locale_numbers = TRUE;
+  hl_canvas_build_context (self, &ctx);
   hl_figure_draw (cr, width, height, &ctx);
 
   /* the real-time stamp lets a script measure from before exec() */

@@ -7,6 +7,7 @@
 #include <gtk/gtk.h>
 
 #include "hl-document.h"
+#include "hl-figure.h"
 
 G_BEGIN_DECLS
 
@@ -18,6 +19,9 @@ void     hl_canvas_set_document (HlCanvas   *self,
 /* frames drawn so far, for tests */
 guint    hl_canvas_get_n_draws  (HlCanvas   *self);
 gboolean hl_canvas_get_dark     (HlCanvas   *self);
+/* the context the canvas draws with (hl_figure_context_init) */
+void     hl_canvas_build_context (HlCanvas        *self,
+                                  HlFigureContext *ctx);
 
 /* Time origin for the HL_TRACE_STARTUP report, set once at start. */
 void     hl_canvas_mark_start   (void);

@@ -35,15 +35,10 @@ static void
 fill_context (PrintJob        *job,
               HlFigureContext *ctx)
 {
-  const HlProject *project = hl_document_get_project (job->document);
-
-  ctx->project = project;
-  ctx->solution = hl_document_get_solution (job->document);
-  ctx->problem_text = hl_document_get_problem_text (job->document);
-  ctx->units = project->display_units;
-  ctx->style = HL_FIGURE_STYLE_LIGHT;
+  hl_figure_context_init (ctx, hl_document_get_project (job->document), hl_document_get_shell (job->document),
+                          hl_document_get_solution (job->document), hl_document_get_problem_text (job->document),
+                          HL_FIGURE_TARGET_PAPER);
   ctx->export_date = job->date;
-  ctx->locale_numbers = FALSE;
 }
 
 /* page 1 is the figure on landscape paper, the sheet follows portrait */

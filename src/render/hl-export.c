@@ -116,11 +116,8 @@ export_figure (const HlExportRequest *req,
       g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
       return FALSE;
     }
-  ctx.project = req->project;
-  ctx.solution = sol;
+  hl_figure_context_init (&ctx, req->project, shell, sol, NULL, HL_FIGURE_TARGET_PAPER);
   ctx.units = req->units;
-  ctx.style = HL_FIGURE_STYLE_LIGHT;
-  ctx.shell = shell;
   if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
     return FALSE;
   return TRUE;

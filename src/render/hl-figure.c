@@ -262,6 +262,26 @@ hl_figure_draw_full (cairo_t               *cr,
 }
 
 void
+hl_figure_context_init (HlFigureContext     *ctx,
+                        const HlProject     *project,
+                        const HlShellInputs *shell,
+                        const HlSolution    *solution,
+                        const char          *problem_text,
+                        HlFigureTarget       target)
+{
+  g_return_if_fail (ctx != NULL);
+
+  *ctx = (HlFigureContext) { 0 };
+  ctx->project = project;
+  ctx->solution = solution;
+  ctx->problem_text = solution == NULL ? problem_text : NULL;
+  ctx->shell = solution != NULL ? &solution->inputs : shell;
+  ctx->units = project != NULL ? project->display_units : HL_UNIT_SYSTEM_SI;
+  ctx->style = HL_FIGURE_STYLE_LIGHT;
+  ctx->locale_numbers = target == HL_FIGURE_TARGET_SCREEN;
+}
+
+void
 hl_figure_draw (cairo_t               *cr,
                 double                 width,
                 double                 height,

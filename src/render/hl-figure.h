@@ -35,6 +35,24 @@ typedef struct
                                    * block when there is no solution */
 } HlFigureContext;
 
+typedef enum
+{
+  HL_FIGURE_TARGET_SCREEN,  /* the window: the user's decimal separator */
+  HL_FIGURE_TARGET_PAPER,   /* print and export: C locale, light style */
+} HlFigureTarget;
+
+/* The one way every output fills a context, so the canvas, the printout
+ * and the exports show the same title block: the shell is named even when
+ * its values are bad and there is no @solution.  Units are the project's
+ * display units (an export may then choose others); the style is light
+ * (the canvas may then choose dark); the date is today's. */
+void hl_figure_context_init (HlFigureContext     *ctx,
+                             const HlProject     *project,
+                             const HlShellInputs *shell,
+                             const HlSolution    *solution,
+                             const char          *problem_text,
+                             HlFigureTarget       target);
+
 /* Draws the whole figure (section, wall detail, through-thickness plot,
  * thinness chart, verdict, title block, caution) to fill @width x @height
  * user units of @cr. */

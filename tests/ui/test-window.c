@@ -118,6 +118,18 @@ test_bad_value_is_marked (void)
   g_assert_true (gtk_widget_has_css_class (entry, "error"));
   g_assert_null (solution (window));
   g_assert_nonnull (hl_document_get_problem_text (hl_window_get_document (window)));
+  /* the canvas's title block still names the shell being fixed, as the
+   * printout and the exports do (one context builder) */
+  {
+    HlFigureContext ctx;
+
+    hl_canvas_build_context (hl_window_get_canvas (window), &ctx);
+    g_assert_null (ctx.solution);
+    g_assert_nonnull (ctx.problem_text);
+    g_assert_nonnull (ctx.shell);
+    g_assert_cmpstr (ctx.shell->name, ==, "Plant air receiver AR-2");
+    g_assert_true (ctx.locale_numbers);
+  }
   text = hl_results_table_get_text (hl_window_get_results_table (window));
   g_assert_cmpstr (text, ==, "");
   g_assert_false (g_action_group_get_action_enabled (G_ACTION_GROUP (window), "export"));
