@@ -98,6 +98,7 @@ export_figure (const HlExportRequest *req,
 {
   const HlShellInputs *shell = req->shells->data;
   g_autoptr(HlSolution) sol = NULL;
+  g_autoptr(HlSolution) new_wall = NULL;
   g_autoptr(GError) local = NULL;
   HlFigureContext ctx = { 0 };
   guint width, height;
@@ -116,7 +117,9 @@ export_figure (const HlExportRequest *req,
       g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
       return FALSE;
     }
-  hl_figure_context_init (&ctx, req->project, shell, sol, NULL, HL_FIGURE_TARGET_PAPER);
+  /* solved once here for every page of the sheet */
+  new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
+  hl_figure_context_init (&ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
   ctx.units = req->units;
   if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
     return FALSE;

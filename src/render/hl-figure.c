@@ -266,6 +266,7 @@ hl_figure_context_init (HlFigureContext     *ctx,
                         const HlProject     *project,
                         const HlShellInputs *shell,
                         const HlSolution    *solution,
+                        const HlSolution    *new_wall,
                         const char          *problem_text,
                         HlFigureTarget       target)
 {
@@ -274,6 +275,7 @@ hl_figure_context_init (HlFigureContext     *ctx,
   *ctx = (HlFigureContext) { 0 };
   ctx->project = project;
   ctx->solution = solution;
+  ctx->new_wall = solution != NULL ? new_wall : NULL;
   ctx->problem_text = solution == NULL ? problem_text : NULL;
   ctx->shell = solution != NULL ? &solution->inputs : shell;
   ctx->units = project != NULL ? project->display_units : HL_UNIT_SYSTEM_SI;

@@ -33,6 +33,9 @@ typedef struct
                                      * window); FALSE: C locale (exports) */
   const HlShellInputs *shell;     /* optional: names the shell in the title
                                    * block when there is no solution */
+  const HlSolution *new_wall;     /* optional: the uncorroded wall beside a
+                                   * corroded @solution, for the sheet; the
+                                   * sheet solves it itself when NULL */
 } HlFigureContext;
 
 typedef enum
@@ -50,6 +53,7 @@ void hl_figure_context_init (HlFigureContext     *ctx,
                              const HlProject     *project,
                              const HlShellInputs *shell,
                              const HlSolution    *solution,
+                             const HlSolution    *new_wall,
                              const char          *problem_text,
                              HlFigureTarget       target);
 

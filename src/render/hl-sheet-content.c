@@ -348,14 +348,16 @@ hl_sheet_rows (const HlFigureContext *ctx)
 {
   GArray *rows = g_array_new (FALSE, TRUE, sizeof (HlSheetRow));
   const HlSolution *s = ctx->solution;
-  g_autoptr(HlSolution) new_wall = NULL;
+  g_autoptr(HlSolution) solved_here = NULL;
+  const HlSolution *new_wall = NULL;
   double c = hl_quantity_si (s->inputs.corrosion_allowance, HL_KIND_LENGTH);
 
   g_array_set_clear_func (rows, clear_row);
   /* with an allowance the sheet shows the new wall beside the corroded
-   * one, as the text report does; the engine solves both */
+   * one, as the text report does: the caller's analysis, when it has one */
   if (s->corroded && c > 0)
-    new_wall = hl_solve (&s->inputs, HL_DEFAULT_POINTS, FALSE, NULL);
+    new_wall = ctx->new_wall != NULL ? ctx->new_wall
+                                     : (solved_here = hl_solve (&s->inputs, HL_DEFAULT_POINTS, FALSE, NULL));
   header (rows, ctx);
   inputs (rows, ctx);
   results (rows, ctx, new_wall);

@@ -10,6 +10,7 @@
 
 #include "hl-render-test.h"
 #include "hl-figure-private.h"
+#include "hl-sheet-private.h"
 
 #include <math.h>
 
@@ -445,6 +446,52 @@ test_problem (void)
   hl_figure_geometry_clear (&g);
 }
 
+/* the sheet's text of @ctx, rows joined */
+static char *
+sheet_text (const HlFigureContext *ctx)
+{
+  g_autoptr(GArray) rows = hl_sheet_rows (ctx);
+  GString *out = g_string_new (NULL);
+
+  for (guint i = 0; i < rows->len; i++)
+    {
+      const HlSheetRow *r = &g_array_index (rows, HlSheetRow, i);
+
+      for (guint c = 0; c < r->n_cells; c++)
+        g_string_append_printf (out, "%s|", r->cells[c] != NULL ? r->cells[c] : "");
+      g_string_append_c (out, '\n');
+    }
+  return g_string_free (out, FALSE);
+}
+
+/* The sheet shows the new wall beside the corroded one from the
+ * caller's analysis (solved once per export or print job), not from a
+ * solve of its own per page: the demo receiver has a 1.5 mm allowance. */
+static void
+test_sheet_reads_new_wall (void)
+{
+  g_autoptr(HlProject) demo = hl_rt_load_demo ();
+  const HlShellInputs *shell = hl_project_shell (demo, 0);
+  g_autoptr(HlSolution) corroded = hl_rt_solve (shell);
+  g_autoptr(HlSolution) fresh = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
+  HlShellInputs thicker = *shell;
+  g_autoptr(HlSolution) other = NULL;
+  HlFigureContext own, given, wrong;
+  g_autofree char *own_text = NULL, *given_text = NULL, *wrong_text = NULL;
+
+  g_assert_nonnull (fresh);
+  thicker.wall_thickness = hl_quantity_make (20, "mm");
+  other = hl_solve (&thicker, HL_DEFAULT_POINTS, FALSE, NULL);
+  hl_figure_context_init (&own, demo, shell, corroded, NULL, NULL, HL_FIGURE_TARGET_PAPER);
+  hl_figure_context_init (&given, demo, shell, corroded, fresh, NULL, HL_FIGURE_TARGET_PAPER);
+  hl_figure_context_init (&wrong, demo, shell, corroded, other, NULL, HL_FIGURE_TARGET_PAPER);
+  own_text = sheet_text (&own);
+  given_text = sheet_text (&given);
+  wrong_text = sheet_text (&wrong);
+  g_assert_cmpstr (given_text, ==, own_text);
+  g_assert_cmpstr (wrong_text, !=, own_text);
+}
+
 static void
 test_dark (void)
 {
@@ -474,5 +521,6 @@ main (int    argc,
   g_test_add_func ("/render/layout/edge-shells", test_edge_shells);
   g_test_add_func ("/render/problem", test_problem);
   g_test_add_func ("/render/dark", test_dark);
+  g_test_add_func ("/render/sheet-reads-new-wall", test_sheet_reads_new_wall);
   return g_test_run ();
 }
