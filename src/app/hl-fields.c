@@ -15,29 +15,6 @@
 #include <math.h>
 #include <string.h>
 
-/* names the field table does not hold */
-static const struct
-{
-  const char *field;
-  const char *label;
-} others[] = {
-  { "id", N_("Id") },
-  { "size", N_("Size") },
-};
-
-const char *
-hl_field_label (const char *field)
-{
-  const HlField *row = hl_field_lookup (field);
-
-  if (row != NULL && row->label != NULL)
-    return _(row->label);
-  for (guint i = 0; i < G_N_ELEMENTS (others); i++)
-    if (g_strcmp0 (others[i].field, field) == 0)
-      return _(others[i].label);
-  return field;
-}
-
 gboolean
 hl_locale_decimal_comma (void)
 {

@@ -10,10 +10,9 @@
 
 #include <gtk/gtk.h>
 
-G_BEGIN_DECLS
+#include "hl-field-label.h"
 
-/* Translated label of @field, or @field itself when unknown. */
-const char *hl_field_label  (const char *field);
+G_BEGIN_DECLS
 
 /* TRUE when the user's locale writes numbers with a decimal comma. */
 gboolean    hl_locale_decimal_comma (void);

@@ -1,7 +1,10 @@
 /* hl-document.h — the open project: file, modified flag, undo, selection
  *
  * Every edit goes through here so that undo, the modified mark and the
- * one solve per change stay in step.  Views listen to "changed".
+ * one solve per change stay in step.  GLib only (src/doc): tested
+ * without a display in tests/doc.  Views listen to "changed", or bind to
+ * the read-only properties (title, file, modified, selected, solution,
+ * can-undo, can-redo), which notify only when their value changes.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */

@@ -6,7 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-document.h"
-#include "hl-fields.h"
+#include "hl-field-label.h"
 #include "hl-history.h"
 #include "hl-limits.h"
 #include "hl-project-file.h"
@@ -30,12 +30,32 @@ struct _HlDocument
   HlSolution *solution;
   GPtrArray  *problems;
   char       *problem_text;
+
+  /* what the properties last said, so each notifies only on a change */
+  char       *seen_title;
+  GFile      *seen_file;
+  guint       seen_selected;
+  gboolean    seen_modified, seen_can_undo, seen_can_redo;
 };
 
 G_DEFINE_FINAL_TYPE (HlDocument, hl_document, G_TYPE_OBJECT)
 
 enum { CHANGED, N_SIGNALS };
 static guint signals[N_SIGNALS];
+
+enum
+{
+  PROP_0,
+  PROP_TITLE,
+  PROP_FILE,
+  PROP_MODIFIED,
+  PROP_SELECTED,
+  PROP_SOLUTION,
+  PROP_CAN_UNDO,
+  PROP_CAN_REDO,
+  N_PROPS
+};
+static GParamSpec *props[N_PROPS];
 
 static void
 append_problem_line (GString    *text,
@@ -96,11 +116,63 @@ update (HlDocument *self)
     self->problem_text = g_strdup (text->str);
 }
 
+/* Every change passes here, so the properties are compared in one
+ * place: a view bound to "modified" hears of it only when it flips. */
+static void
+notify_properties (HlDocument *self)
+{
+  const char *title = hl_document_get_title (self);
+  gboolean modified = hl_document_get_modified (self);
+  gboolean can_undo = hl_document_can_undo (self);
+  gboolean can_redo = hl_document_can_redo (self);
+  GObject *object = G_OBJECT (self);
+
+  g_object_freeze_notify (object);
+  if (g_strcmp0 (title, self->seen_title) != 0)
+    {
+      g_free (self->seen_title);
+      self->seen_title = g_strdup (title);
+      g_object_notify_by_pspec (object, props[PROP_TITLE]);
+    }
+  if (self->file != self->seen_file
+      && (self->file == NULL || self->seen_file == NULL || !g_file_equal (self->file, self->seen_file)))
+    {
+      g_set_object (&self->seen_file, self->file);
+      g_object_notify_by_pspec (object, props[PROP_FILE]);
+    }
+  else
+    g_set_object (&self->seen_file, self->file);
+  if (modified != self->seen_modified)
+    {
+      self->seen_modified = modified;
+      g_object_notify_by_pspec (object, props[PROP_MODIFIED]);
+    }
+  if (self->selected != self->seen_selected)
+    {
+      self->seen_selected = self->selected;
+      g_object_notify_by_pspec (object, props[PROP_SELECTED]);
+    }
+  if (can_undo != self->seen_can_undo)
+    {
+      self->seen_can_undo = can_undo;
+      g_object_notify_by_pspec (object, props[PROP_CAN_UNDO]);
+    }
+  if (can_redo != self->seen_can_redo)
+    {
+      self->seen_can_redo = can_redo;
+      g_object_notify_by_pspec (object, props[PROP_CAN_REDO]);
+    }
+  /* solved anew on every change: a new solution each time */
+  g_object_notify_by_pspec (object, props[PROP_SOLUTION]);
+  g_object_thaw_notify (object);
+}
+
 static void
 emit_changed (HlDocument *self)
 {
   update (self);
   g_signal_emit (self, signals[CHANGED], 0);
+  notify_properties (self);
 }
 
 static void
@@ -130,7 +202,45 @@ hl_document_finalize (GObject *object)
   g_clear_pointer (&self->solution, hl_solution_free);
   g_clear_pointer (&self->problems, g_ptr_array_unref);
   g_clear_pointer (&self->problem_text, g_free);
+  g_clear_pointer (&self->seen_title, g_free);
+  g_clear_object (&self->seen_file);
   G_OBJECT_CLASS (hl_document_parent_class)->finalize (object);
+}
+
+static void
+hl_document_get_property (GObject    *object,
+                          guint       prop_id,
+                          GValue     *value,
+                          GParamSpec *pspec)
+{
+  HlDocument *self = HL_DOCUMENT (object);
+
+  switch (prop_id)
+    {
+    case PROP_TITLE:
+      g_value_set_string (value, hl_document_get_title (self));
+      break;
+    case PROP_FILE:
+      g_value_set_object (value, self->file);
+      break;
+    case PROP_MODIFIED:
+      g_value_set_boolean (value, hl_document_get_modified (self));
+      break;
+    case PROP_SELECTED:
+      g_value_set_uint (value, self->selected);
+      break;
+    case PROP_SOLUTION:
+      g_value_set_pointer (value, self->solution);
+      break;
+    case PROP_CAN_UNDO:
+      g_value_set_boolean (value, hl_document_can_undo (self));
+      break;
+    case PROP_CAN_REDO:
+      g_value_set_boolean (value, hl_document_can_redo (self));
+      break;
+    default:
+      G_OBJECT_WARN_INVALID_PROPERTY_ID (object, prop_id, pspec);
+    }
 }
 
 static void
@@ -139,6 +249,25 @@ hl_document_class_init (HlDocumentClass *klass)
   GObjectClass *object_class = G_OBJECT_CLASS (klass);
 
   object_class->finalize = hl_document_finalize;
+  object_class->get_property = hl_document_get_property;
+
+  /* read-only: every change goes through the edit functions, so undo,
+   * the modified flag and the one solve per change stay in step */
+  props[PROP_TITLE] = g_param_spec_string ("title", NULL, "the project title, or “Untitled project”", NULL,
+                                           G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  props[PROP_FILE] = g_param_spec_object ("file", NULL, "the file saves go to, or NULL", G_TYPE_FILE,
+                                          G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  props[PROP_MODIFIED] = g_param_spec_boolean ("modified", NULL, "differs from the file", FALSE,
+                                               G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  props[PROP_SELECTED] = g_param_spec_uint ("selected", NULL, "index of the selected shell", 0, G_MAXUINT, 0,
+                                            G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  props[PROP_SOLUTION] = g_param_spec_pointer ("solution", NULL, "the selected shell's HlSolution, or NULL",
+                                               G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  props[PROP_CAN_UNDO] = g_param_spec_boolean ("can-undo", NULL, "an edit can be undone", FALSE,
+                                               G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  props[PROP_CAN_REDO] = g_param_spec_boolean ("can-redo", NULL, "an undone edit can be redone", FALSE,
+                                               G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  g_object_class_install_properties (object_class, N_PROPS, props);
 
   /* Anything changed: project, selection, file, modified flag, problems. */
   signals[CHANGED] = g_signal_new ("changed", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST,

@@ -1,0 +1,235 @@
+/* test-document.c — the open document without a display
+ *
+ * The document is GLib only (src/doc), so its behaviour is checked here
+ * without GTK: properties that notify only on a change, undo and redo
+ * back to the exact project, the modified flag against the file, and one
+ * solve per change.  The one number checked is the thin-wall hoop stress
+ * p R / t on the mean radius of the corroded wall (membrane formula,
+ * common practice).
+ *
+ * SPDX-License-Identifier: GPL-3.0-or-later
+ */
+#define G_LOG_DOMAIN "test-document"
+
+#include "hl-document.h"
+#include "hl-project-file.h"
+
+#include <glib/gstdio.h>
+#include <string.h>
+
+typedef struct
+{
+  GHashTable *counts;   /* property name -> notifications */
+} Notes;
+
+static void
+on_notify_cb (GObject    *object,
+              GParamSpec *pspec,
+              Notes      *notes)
+{
+  const char *name = g_param_spec_get_name (pspec);
+  guint n = GPOINTER_TO_UINT (g_hash_table_lookup (notes->counts, name));
+
+  g_hash_table_insert (notes->counts, (gpointer) g_intern_string (name), GUINT_TO_POINTER (n + 1));
+}
+
+static guint
+count (Notes      *notes,
+       const char *name)
+{
+  return GPOINTER_TO_UINT (g_hash_table_lookup (notes->counts, g_intern_string (name)));
+}
+
+static void
+reset (Notes *notes)
+{
+  g_hash_table_remove_all (notes->counts);
+}
+
+static char *
+demo_path (void)
+{
+  const char *src = g_getenv ("HL_SOURCE_DIR");
+
+  g_assert_nonnull (src);
+  return g_build_filename (src, "data", "examples", "demo.hoop", NULL);
+}
+
+static HlDocument *
+open_demo (Notes *notes)
+{
+  g_autofree char *path = demo_path ();
+  g_autoptr(GFile) file = g_file_new_for_path (path);
+  g_autoptr(GError) error = NULL;
+  HlShellInputs first = hl_shell_inputs_default ();
+  HlDocument *doc = hl_document_new (&first, HL_UNIT_SYSTEM_SI);
+
+  notes->counts = g_hash_table_new (g_direct_hash, g_direct_equal);
+  g_assert_true (hl_document_load (doc, file, NULL, &error));
+  g_assert_no_error (error);
+  g_signal_connect (doc, "notify", G_CALLBACK (on_notify_cb), notes);
+  return doc;
+}
+
+static void
+close_demo (HlDocument *doc,
+            Notes      *notes)
+{
+  g_object_unref (doc);
+  g_hash_table_unref (notes->counts);
+}
+
+static HlShellInputs
+thicker (HlDocument *doc,
+         double      mm)
+{
+  HlShellInputs s = *hl_document_get_shell (doc);
+
+  s.wall_thickness = hl_quantity_make (mm, "mm");
+  return s;
+}
+
+static void
+test_properties_notify_on_change (void)
+{
+  Notes notes;
+  HlDocument *doc = open_demo (&notes);
+  HlShellInputs s = thicker (doc, 12);
+  gboolean modified = TRUE, can_undo = FALSE;
+  g_autofree char *title = NULL;
+
+  g_object_get (doc, "title", &title, "modified", &modified, "can-undo", &can_undo, NULL);
+  g_assert_cmpstr (title, ==, hl_document_get_project (doc)->title);
+  g_assert_false (modified);
+  g_assert_false (can_undo);
+
+  hl_document_edit_shell (doc, &s, NULL);
+  g_assert_cmpuint (count (&notes, "modified"), ==, 1);
+  g_assert_cmpuint (count (&notes, "can-undo"), ==, 1);
+  g_assert_cmpuint (count (&notes, "solution"), ==, 1);
+  g_assert_cmpuint (count (&notes, "title"), ==, 0);
+  g_assert_cmpuint (count (&notes, "selected"), ==, 0);
+  g_assert_cmpuint (count (&notes, "can-redo"), ==, 0);
+
+  /* a second edit changes neither flag: no word of them */
+  reset (&notes);
+  s = thicker (doc, 13);
+  hl_document_edit_shell (doc, &s, NULL);
+  g_assert_cmpuint (count (&notes, "modified"), ==, 0);
+  g_assert_cmpuint (count (&notes, "can-undo"), ==, 0);
+  g_assert_cmpuint (count (&notes, "solution"), ==, 1);
+
+  reset (&notes);
+  hl_document_set_selected (doc, 1);
+  g_assert_cmpuint (count (&notes, "selected"), ==, 1);
+  g_object_get (doc, "modified", &modified, NULL);
+  g_assert_true (modified);
+  close_demo (doc, &notes);
+}
+
+static void
+test_undo_redo_exact (void)
+{
+  Notes notes;
+  HlDocument *doc = open_demo (&notes);
+  g_autoptr(HlProject) before = hl_project_copy (hl_document_get_project (doc));
+  g_autoptr(HlProject) after = NULL;
+  HlShellInputs s = thicker (doc, 12);
+  gboolean can_redo = FALSE;
+
+  hl_document_edit_shell (doc, &s, NULL);
+  hl_document_add_shell (doc, hl_document_get_shell (doc));
+  g_assert_cmpuint (hl_project_n_shells (hl_document_get_project (doc)), ==, hl_project_n_shells (before) + 1);
+  after = hl_project_copy (hl_document_get_project (doc));
+
+  reset (&notes);
+  hl_document_undo (doc);
+  hl_document_undo (doc);
+  g_assert_true (hl_project_equal (hl_document_get_project (doc), before));
+  g_assert_false (hl_document_get_modified (doc));
+  g_assert_false (hl_document_can_undo (doc));
+  g_assert_cmpuint (count (&notes, "modified"), ==, 1);
+  g_assert_cmpuint (count (&notes, "can-redo"), ==, 1);
+  g_assert_cmpuint (count (&notes, "can-undo"), ==, 1);
+  g_object_get (doc, "can-redo", &can_redo, NULL);
+  g_assert_true (can_redo);
+
+  hl_document_redo (doc);
+  hl_document_redo (doc);
+  g_assert_true (hl_project_equal (hl_document_get_project (doc), after));
+  g_assert_false (hl_document_can_redo (doc));
+  close_demo (doc, &notes);
+}
+
+static void
+test_save_and_file (void)
+{
+  Notes notes;
+  HlDocument *doc = open_demo (&notes);
+  g_autofree char *dir = g_dir_make_tmp ("hl-doc-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "copy.hoop", NULL);
+  g_autoptr(GFile) target = g_file_new_for_path (path);
+  g_autoptr(GFile) file = NULL;
+  g_autoptr(GError) error = NULL;
+  g_autoptr(HlProject) back = NULL;
+  HlShellInputs s = thicker (doc, 14);
+
+  hl_document_edit_shell (doc, &s, NULL);
+  reset (&notes);
+  g_assert_true (hl_document_save (doc, target, &error));
+  g_assert_no_error (error);
+  g_assert_cmpuint (count (&notes, "file"), ==, 1);
+  g_assert_cmpuint (count (&notes, "modified"), ==, 1);
+  g_object_get (doc, "file", &file, NULL);
+  g_assert_true (g_file_equal (file, target));
+  back = hl_project_load (path, NULL, &error);
+  g_assert_no_error (error);
+  g_assert_true (hl_project_equal (back, hl_document_get_project (doc)));
+  g_unlink (path);
+  g_rmdir (dir);
+  close_demo (doc, &notes);
+}
+
+static void
+test_one_solution_per_change (void)
+{
+  Notes notes;
+  HlDocument *doc = open_demo (&notes);
+  HlShellInputs s = thicker (doc, 12);
+  const HlSolution *sol;
+  gpointer from_property = NULL;
+  double a, t, r_mean;
+
+  hl_document_set_selected (doc, 0);
+  s = thicker (doc, 12);
+  hl_document_edit_shell (doc, &s, NULL);
+  sol = hl_document_get_solution (doc);
+  g_assert_nonnull (sol);
+  g_object_get (doc, "solution", &from_property, NULL);
+  g_assert_true (from_property == sol);
+  /* demo receiver: inner diameter 1200 mm, allowance 1.5 mm, 11 bar:
+   * a = 600 + 1.5 mm, t = 12 - 1.5 mm */
+  a = 0.6015;
+  t = 0.0105;
+  r_mean = a + t / 2;
+  g_assert_cmpfloat_with_epsilon (sol->thin_hoop.value, 1.1e6 * r_mean / t, 1e-6 * 1.1e6 * r_mean / t);
+
+  /* a bad value: no solution, and a text that says what to fix */
+  s = thicker (doc, -3);
+  hl_document_edit_shell (doc, &s, NULL);
+  g_assert_null (hl_document_get_solution (doc));
+  g_assert_nonnull (hl_document_get_problem_text (doc));
+  close_demo (doc, &notes);
+}
+
+int
+main (int   argc,
+      char *argv[])
+{
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/document/properties-notify-on-change", test_properties_notify_on_change);
+  g_test_add_func ("/document/undo-redo-exact", test_undo_redo_exact);
+  g_test_add_func ("/document/save-and-file", test_save_and_file);
+  g_test_add_func ("/document/one-solution-per-change", test_one_solution_per_change);
+  return g_test_run ();
+}
