@@ -10,6 +10,7 @@
 
 #include "hl-config.h"
 #include "hl-canvas.h"
+#include "hl-document-follower.h"
 #include "hl-figure.h"
 
 #include <adwaita.h>
@@ -21,6 +22,7 @@ struct _HlCanvas
   GtkDrawingArea parent_instance;
 
   HlDocument    *document;
+  GSignalGroup  *follower;      /* calls on_document_changed_cb */
   guint          n_draws;
 };
 
@@ -121,8 +123,7 @@ hl_canvas_dispose (GObject *object)
 {
   HlCanvas *self = HL_CANVAS (object);
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->follower);
   g_clear_object (&self->document);
   G_OBJECT_CLASS (hl_canvas_parent_class)->dispose (object);
 }
@@ -146,6 +147,7 @@ hl_canvas_init (HlCanvas *self)
   gtk_widget_set_hexpand (GTK_WIDGET (self), TRUE);
   gtk_widget_set_vexpand (GTK_WIDGET (self), TRUE);
   gtk_widget_set_size_request (GTK_WIDGET (self), 360, 240);
+  self->follower = hl_document_follower_new ((HlDocumentRefresh) on_document_changed_cb, self);
 }
 
 void
@@ -154,14 +156,8 @@ hl_canvas_set_document (HlCanvas   *self,
 {
   g_return_if_fail (HL_IS_CANVAS (self));
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
   g_set_object (&self->document, document);
-  if (document != NULL)
-    {
-      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
-      on_document_changed_cb (document, self);
-    }
+  g_signal_group_set_target (self->follower, document);
 }
 
 guint

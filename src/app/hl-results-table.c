@@ -9,6 +9,7 @@
 
 #include "hl-config.h"
 #include "hl-results-table.h"
+#include "hl-document-follower.h"
 #include "hl-result-rows.h"
 
 #include <glib/gi18n.h>
@@ -26,6 +27,7 @@ struct _HlResultsTable
   GtkWidget  *empty_label;
 
   HlDocument *document;
+  GSignalGroup  *follower;      /* calls on_document_changed_cb */
   GString    *text;
   GPtrArray  *names;      /* GtkLabel *, one per row, owned by the grid */
   GPtrArray  *values;
@@ -176,8 +178,7 @@ hl_results_table_dispose (GObject *object)
 {
   HlResultsTable *self = HL_RESULTS_TABLE (object);
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->follower);
   g_clear_object (&self->document);
   g_clear_pointer (&self->scroller, gtk_widget_unparent);
   g_clear_pointer (&self->empty_label, gtk_widget_unparent);
@@ -238,6 +239,7 @@ hl_results_table_init (HlResultsTable *self)
   gtk_widget_set_parent (self->empty_label, GTK_WIDGET (self));
   gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_LABEL,
                                   _("Results"), -1);
+  self->follower = hl_document_follower_new ((HlDocumentRefresh) on_document_changed_cb, self);
 }
 
 void
@@ -246,14 +248,8 @@ hl_results_table_set_document (HlResultsTable *self,
 {
   g_return_if_fail (HL_IS_RESULTS_TABLE (self));
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
   g_set_object (&self->document, document);
-  if (document != NULL)
-    {
-      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
-      rebuild (self);
-    }
+  g_signal_group_set_target (self->follower, document);
 }
 
 char *

@@ -10,6 +10,7 @@
 
 #include "hl-config.h"
 #include "hl-shell-editor.h"
+#include "hl-document-follower.h"
 #include "hl-fields.h"
 #include "hl-field-table.h"
 #include "hl-limits.h"
@@ -49,6 +50,7 @@ struct _HlShellEditor
   GtkDropDown   *criterion_dropdown;
 
   HlDocument    *document;
+  GSignalGroup  *follower;      /* calls on_document_changed_cb */
   HlShellInputs  shown;       /* what the fields show; equal means no reload */
   gboolean       has_shown;
   GPtrArray     *material_ids; /* char *, parallel to the material dropdown */
@@ -575,8 +577,7 @@ hl_shell_editor_dispose (GObject *object)
 {
   HlShellEditor *self = HL_SHELL_EDITOR (object);
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->follower);
   g_clear_object (&self->document);
   gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_SHELL_EDITOR);
   G_OBJECT_CLASS (hl_shell_editor_parent_class)->dispose (object);
@@ -691,6 +692,7 @@ hl_shell_editor_init (HlShellEditor *self)
   g_signal_connect (factory, "setup", G_CALLBACK (on_material_item_setup_cb), NULL);
   g_signal_connect (factory, "bind", G_CALLBACK (on_material_item_bind_cb), NULL);
   gtk_drop_down_set_factory (self->material_dropdown, factory);
+  self->follower = hl_document_follower_new ((HlDocumentRefresh) on_document_changed_cb, self);
 }
 
 void
@@ -699,15 +701,9 @@ hl_shell_editor_set_document (HlShellEditor *self,
 {
   g_return_if_fail (HL_IS_SHELL_EDITOR (self));
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
   g_set_object (&self->document, document);
   self->has_shown = FALSE;
-  if (document != NULL)
-    {
-      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
-      on_document_changed_cb (document, self);
-    }
+  g_signal_group_set_target (self->follower, document);
 }
 
 void

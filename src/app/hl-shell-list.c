@@ -6,6 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-shell-list.h"
+#include "hl-document-follower.h"
 
 #include <glib/gi18n.h>
 
@@ -16,6 +17,7 @@ struct _HlShellList
   GtkListBox *list_box;
 
   HlDocument *document;
+  GSignalGroup  *follower;      /* calls on_document_changed_cb */
   char       *shown;      /* names, forms and selection last listed */
   guint       updating;
 };
@@ -109,8 +111,7 @@ hl_shell_list_dispose (GObject *object)
 {
   HlShellList *self = HL_SHELL_LIST (object);
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
+  g_clear_object (&self->follower);
   g_clear_object (&self->document);
   g_clear_pointer (&self->shown, g_free);
   gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_SHELL_LIST);
@@ -133,6 +134,7 @@ static void
 hl_shell_list_init (HlShellList *self)
 {
   gtk_widget_init_template (GTK_WIDGET (self));
+  self->follower = hl_document_follower_new ((HlDocumentRefresh) on_document_changed_cb, self);
 }
 
 void
@@ -141,13 +143,7 @@ hl_shell_list_set_document (HlShellList *self,
 {
   g_return_if_fail (HL_IS_SHELL_LIST (self));
 
-  if (self->document != NULL)
-    g_signal_handlers_disconnect_by_data (self->document, self);
   g_set_object (&self->document, document);
-  if (document != NULL)
-    {
-      g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
-      g_clear_pointer (&self->shown, g_free);
-      on_document_changed_cb (document, self);
-    }
+  g_clear_pointer (&self->shown, g_free);
+  g_signal_group_set_target (self->follower, document);
 }
