@@ -7,6 +7,7 @@
 #include "hl-config.h"
 #include "hl-shell-list.h"
 #include "hl-document-follower.h"
+#include "hl-shell-item.h"
 
 #include <glib/gi18n.h>
 
@@ -18,18 +19,30 @@ struct _HlShellList
 
   HlDocument *document;
   GSignalGroup  *follower;      /* calls on_document_changed_cb */
-  char       *shown;      /* names, forms and selection last listed */
-  guint       updating;
 };
 
 G_DEFINE_FINAL_TYPE (HlShellList, hl_shell_list, GTK_TYPE_BOX)
 
-static GtkWidget *
-make_row (const HlShellInputs *shell)
+static gboolean
+form_to_text (GBinding     *binding,
+              const GValue *from,
+              GValue       *to,
+              gpointer      user_data)
 {
+  g_value_set_string (to, g_value_get_uint (from) == HL_FORM_SPHERE ? _("Sphere") : _("Cylinder"));
+  return TRUE;
+}
+
+/* A row shows its item's name and form through bindings, so an edited
+ * name updates its own label and nothing else is rebuilt. */
+static GtkWidget *
+create_row_cb (gpointer item,
+               gpointer user_data)
+{
+  GtkWidget *row = gtk_list_box_row_new ();
   GtkWidget *box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
-  GtkWidget *name = gtk_label_new (shell->name[0] != '\0' ? shell->name : shell->id);
-  GtkWidget *detail = gtk_label_new (shell->form == HL_FORM_SPHERE ? _("Sphere") : _("Cylinder"));
+  GtkWidget *name = gtk_label_new (NULL);
+  GtkWidget *detail = gtk_label_new (NULL);
 
   gtk_label_set_xalign (GTK_LABEL (name), 0);
   gtk_label_set_ellipsize (GTK_LABEL (name), PANGO_ELLIPSIZE_END);
@@ -39,61 +52,23 @@ make_row (const HlShellInputs *shell)
   gtk_box_append (GTK_BOX (box), name);
   gtk_box_append (GTK_BOX (box), detail);
   gtk_widget_add_css_class (box, "hl-shell-row");
-  return box;
+  g_object_bind_property (item, "name", name, "label", G_BINDING_SYNC_CREATE);
+  g_object_bind_property_full (item, "form", detail, "label", G_BINDING_SYNC_CREATE, form_to_text, NULL, NULL, NULL);
+  gtk_list_box_row_set_child (GTK_LIST_BOX_ROW (row), box);
+  gtk_accessible_update_property (GTK_ACCESSIBLE (row), GTK_ACCESSIBLE_PROPERTY_LABEL,
+                                  hl_shell_item_get_name (item), -1);
+  return row;
 }
 
-static void
-rebuild (HlShellList *self)
-{
-  const HlProject *project = hl_document_get_project (self->document);
-  guint selected = hl_document_get_selected (self->document);
-  GtkWidget *child;
-
-  self->updating++;
-  while ((child = gtk_widget_get_first_child (GTK_WIDGET (self->list_box))) != NULL)
-    gtk_list_box_remove (self->list_box, child);
-  for (guint i = 0; i < hl_project_n_shells (project); i++)
-    {
-      const HlShellInputs *shell = hl_project_shell (project, i);
-      GtkWidget *row = gtk_list_box_row_new ();
-
-      gtk_list_box_row_set_child (GTK_LIST_BOX_ROW (row), make_row (shell));
-      gtk_accessible_update_property (GTK_ACCESSIBLE (row), GTK_ACCESSIBLE_PROPERTY_LABEL,
-                                      shell->name, -1);
-      gtk_list_box_append (self->list_box, row);
-    }
-  gtk_list_box_select_row (self->list_box, gtk_list_box_get_row_at_index (self->list_box, (int) selected));
-  self->updating--;
-}
-
-static char *
-signature (HlDocument *document)
-{
-  const HlProject *project = hl_document_get_project (document);
-  GString *s = g_string_new (NULL);
-
-  g_string_append_printf (s, "%u", hl_document_get_selected (document));
-  for (guint i = 0; i < hl_project_n_shells (project); i++)
-    {
-      const HlShellInputs *shell = hl_project_shell (project, i);
-
-      g_string_append_printf (s, "\n%d %s", shell->form, shell->name);
-    }
-  return g_string_free (s, FALSE);
-}
-
+/* the rows follow the document's list model; only the selection is ours */
 static void
 on_document_changed_cb (HlDocument  *document,
                         HlShellList *self)
 {
-  g_autofree char *now = signature (document);
+  GtkListBoxRow *row = gtk_list_box_get_row_at_index (self->list_box, (int) hl_document_get_selected (document));
 
-  /* typing a value changes nothing listed here */
-  if (g_strcmp0 (now, self->shown) == 0)
-    return;
-  g_free (self->shown);
-  self->shown = g_steal_pointer (&now);
-  rebuild (self);
+  if (row != NULL && gtk_list_box_get_selected_row (self->list_box) != row)
+    gtk_list_box_select_row (self->list_box, row);
 }
 
 static void
@@ -101,7 +76,8 @@ on_list_box_row_selected_cb (GtkListBox    *list_box,
                              GtkListBoxRow *row,
                              HlShellList   *self)
 {
-  if (self->updating > 0 || row == NULL || self->document == NULL)
+  /* selecting the document's own row again changes nothing there */
+  if (row == NULL || self->document == NULL)
     return;
   hl_document_set_selected (self->document, (guint) gtk_list_box_row_get_index (row));
 }
@@ -113,7 +89,6 @@ hl_shell_list_dispose (GObject *object)
 
   g_clear_object (&self->follower);
   g_clear_object (&self->document);
-  g_clear_pointer (&self->shown, g_free);
   gtk_widget_dispose_template (GTK_WIDGET (self), HL_TYPE_SHELL_LIST);
   G_OBJECT_CLASS (hl_shell_list_parent_class)->dispose (object);
 }
@@ -144,6 +119,7 @@ hl_shell_list_set_document (HlShellList *self,
   g_return_if_fail (HL_IS_SHELL_LIST (self));
 
   g_set_object (&self->document, document);
-  g_clear_pointer (&self->shown, g_free);
+  gtk_list_box_bind_model (self->list_box, document != NULL ? hl_document_get_shells (document) : NULL,
+                           create_row_cb, NULL, NULL);
   g_signal_group_set_target (self->follower, document);
 }

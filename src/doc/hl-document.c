@@ -8,6 +8,7 @@
 #include "hl-document.h"
 #include "hl-field-label.h"
 #include "hl-history.h"
+#include "hl-shell-item.h"
 #include "hl-limits.h"
 #include "hl-project-file.h"
 #include "hl-shell-check.h"
@@ -36,6 +37,9 @@ struct _HlDocument
   GFile      *seen_file;
   guint       seen_selected;
   gboolean    seen_modified, seen_can_undo, seen_can_redo;
+  gboolean    primed;         /* the seen_ values hold the first state */
+
+  GListStore *shells;         /* HlShellItem, in step with the project */
 };
 
 G_DEFINE_FINAL_TYPE (HlDocument, hl_document, G_TYPE_OBJECT)
@@ -68,6 +72,54 @@ append_problem_line (GString    *text,
   g_string_append_printf (text, _("%s: %s"), hl_field_label (field), message);
 }
 
+static gboolean
+same_id (GListModel      *items,
+         guint            position,
+         const HlProject *project,
+         guint            index)
+{
+  g_autoptr(HlShellItem) item = g_list_model_get_item (items, position);
+
+  return strcmp (hl_shell_item_get_id (item), hl_project_shell (project, index)->id) == 0;
+}
+
+/* The list of shells follows the project with the least change: items
+ * whose shell stays keep their identity (and notify a new name or form),
+ * and one splice replaces the run that was added, removed or moved, so a
+ * list view rebuilds only what changed and typing a value touches none. */
+static void
+sync_shells (HlDocument *self)
+{
+  GListModel *items = G_LIST_MODEL (self->shells);
+  guint n_old = g_list_model_get_n_items (items);
+  guint n_new = hl_project_n_shells (self->project);
+  guint start = 0, end_old = n_old, end_new = n_new;
+  g_autoptr(GPtrArray) added = g_ptr_array_new_with_free_func (g_object_unref);
+
+  while (start < n_old && start < n_new && same_id (items, start, self->project, start))
+    start++;
+  while (end_old > start && end_new > start && same_id (items, end_old - 1, self->project, end_new - 1))
+    end_old--, end_new--;
+  for (guint i = 0; i < start; i++)
+    {
+      g_autoptr(HlShellItem) item = g_list_model_get_item (items, i);
+
+      hl_shell_item_update (item, hl_project_shell (self->project, i));
+    }
+  for (guint i = end_old; i < n_old; i++)
+    {
+      g_autoptr(HlShellItem) item = g_list_model_get_item (items, i);
+
+      hl_shell_item_update (item, hl_project_shell (self->project, i - end_old + end_new));
+    }
+  for (guint i = start; i < end_new; i++)
+    g_ptr_array_add (added, hl_shell_item_new (hl_project_shell (self->project, i)));
+  if (end_old > start || added->len > 0)
+    g_list_store_splice (self->shells, start, end_old - start, added->pdata, added->len);
+}
+
+static void remember_properties (HlDocument *self);
+
 /* Solves once per change, so every view reads the same solution. */
 static void
 update (HlDocument *self)
@@ -80,6 +132,9 @@ update (HlDocument *self)
   g_clear_pointer (&self->solution, hl_solution_free);
   g_clear_pointer (&self->problems, g_ptr_array_unref);
   g_clear_pointer (&self->problem_text, g_free);
+  sync_shells (self);
+  if (!self->primed)
+    remember_properties (self);
 
   if (hl_project_n_shells (self->project) == 0)
     {
@@ -114,6 +169,19 @@ update (HlDocument *self)
     }
   if (text->len > 0)
     self->problem_text = g_strdup (text->str);
+}
+
+static void
+remember_properties (HlDocument *self)
+{
+  self->primed = TRUE;
+  g_free (self->seen_title);
+  self->seen_title = g_strdup (hl_document_get_title (self));
+  g_set_object (&self->seen_file, self->file);
+  self->seen_selected = self->selected;
+  self->seen_modified = hl_document_get_modified (self);
+  self->seen_can_undo = hl_document_can_undo (self);
+  self->seen_can_redo = hl_document_can_redo (self);
 }
 
 /* Every change passes here, so the properties are compared in one
@@ -204,6 +272,7 @@ hl_document_finalize (GObject *object)
   g_clear_pointer (&self->problem_text, g_free);
   g_clear_pointer (&self->seen_title, g_free);
   g_clear_object (&self->seen_file);
+  g_clear_object (&self->shells);
   G_OBJECT_CLASS (hl_document_parent_class)->finalize (object);
 }
 
@@ -279,6 +348,14 @@ hl_document_init (HlDocument *self)
 {
   self->history = hl_history_new ();
   self->input_errors = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
+  self->shells = g_list_store_new (HL_TYPE_SHELL_ITEM);
+}
+
+GListModel *
+hl_document_get_shells (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return G_LIST_MODEL (self->shells);
 }
 
 HlDocument *

@@ -52,6 +52,10 @@ guint                hl_document_get_selected    (HlDocument *self);
 void                 hl_document_set_selected    (HlDocument *self,
                                                   guint       index);
 const HlShellInputs *hl_document_get_shell       (HlDocument *self);
+/* The shells as a list model of HlShellItem (owned by the document):
+ * items-changed only where shells were added, removed or moved; an edited
+ * shell's item stays and notifies "name"/"form" when those change. */
+GListModel          *hl_document_get_shells      (HlDocument *self);
 
 /* The solution of the selected shell, or NULL while any value is bad;
  * then the problem text says what to fix. */

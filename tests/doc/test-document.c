@@ -13,6 +13,7 @@
 
 #include "hl-document.h"
 #include "hl-project-file.h"
+#include "hl-shell-item.h"
 
 #include <glib/gstdio.h>
 #include <string.h>
@@ -222,6 +223,95 @@ test_one_solution_per_change (void)
   close_demo (doc, &notes);
 }
 
+typedef struct
+{
+  guint calls, position, removed, added;
+} Splice;
+
+static void
+on_items_changed_cb (GListModel *model,
+                     guint       position,
+                     guint       removed,
+                     guint       added,
+                     Splice     *sp)
+{
+  sp->calls++;
+  sp->position = position;
+  sp->removed = removed;
+  sp->added = added;
+}
+
+static void
+on_item_notify_cb (GObject    *item,
+                   GParamSpec *pspec,
+                   guint      *count)
+{
+  (*count)++;
+}
+
+/* The list of shells changes only where shells were added, removed or
+ * moved: typing a value touches no item, a new name notifies its item. */
+static void
+test_shell_list_model (void)
+{
+  Notes notes;
+  HlDocument *doc = open_demo (&notes);
+  GListModel *shells = hl_document_get_shells (doc);
+  guint n = hl_project_n_shells (hl_document_get_project (doc));
+  g_autoptr(HlShellItem) first = NULL;
+  g_autoptr(HlShellItem) again = NULL;
+  Splice sp = { 0 };
+  guint name_notes = 0;
+  HlShellInputs s;
+
+  g_assert_cmpuint (g_list_model_get_n_items (shells), ==, n);
+  first = g_list_model_get_item (shells, 0);
+  g_assert_cmpstr (hl_shell_item_get_id (first), ==, hl_project_shell (hl_document_get_project (doc), 0)->id);
+  g_signal_connect (shells, "items-changed", G_CALLBACK (on_items_changed_cb), &sp);
+  g_signal_connect (first, "notify::name", G_CALLBACK (on_item_notify_cb), &name_notes);
+
+  /* a value: nothing listed changes */
+  s = thicker (doc, 12);
+  hl_document_edit_shell (doc, &s, NULL);
+  g_assert_cmpuint (sp.calls, ==, 0);
+  g_assert_cmpuint (name_notes, ==, 0);
+
+  /* a name: the same item, told of it */
+  g_strlcpy (s.name, "Receiver R-9", sizeof s.name);
+  hl_document_edit_shell (doc, &s, NULL);
+  g_assert_cmpuint (sp.calls, ==, 0);
+  g_assert_cmpuint (name_notes, ==, 1);
+  g_assert_cmpstr (hl_shell_item_get_name (first), ==, "Receiver R-9");
+
+  /* add after the selected shell (the first): one item in at 1 */
+  hl_document_add_shell (doc, hl_document_get_shell (doc));
+  g_assert_cmpuint (g_list_model_get_n_items (shells), ==, n + 1);
+  g_assert_cmpuint (sp.calls, ==, 1);
+  g_assert_cmpuint (sp.removed, ==, 0);
+  g_assert_cmpuint (sp.added, ==, 1);
+
+  /* undo the add: that item out again, the others kept */
+  sp.calls = 0;
+  hl_document_undo (doc);
+  g_assert_cmpuint (g_list_model_get_n_items (shells), ==, n);
+  g_assert_cmpuint (sp.calls, ==, 1);
+  g_assert_cmpuint (sp.removed, ==, 1);
+  g_assert_cmpuint (sp.added, ==, 0);
+  again = g_list_model_get_item (shells, 0);
+  g_assert_true (again == first);
+
+  /* every item stands for its shell, in order */
+  for (guint i = 0; i < g_list_model_get_n_items (shells); i++)
+    {
+      g_autoptr(HlShellItem) item = g_list_model_get_item (shells, i);
+
+      g_assert_cmpstr (hl_shell_item_get_id (item), ==, hl_project_shell (hl_document_get_project (doc), i)->id);
+    }
+  g_signal_handlers_disconnect_by_data (shells, &sp);
+  g_signal_handlers_disconnect_by_data (first, &name_notes);
+  close_demo (doc, &notes);
+}
+
 int
 main (int   argc,
       char *argv[])
@@ -231,5 +321,6 @@ main (int   argc,
   g_test_add_func ("/document/undo-redo-exact", test_undo_redo_exact);
   g_test_add_func ("/document/save-and-file", test_save_and_file);
   g_test_add_func ("/document/one-solution-per-change", test_one_solution_per_change);
+  g_test_add_func ("/document/shell-list-model", test_shell_list_model);
   return g_test_run ();
 }
