@@ -61,7 +61,8 @@ hl_canvas_build_context (HlCanvas        *self,
   g_return_if_fail (HL_IS_CANVAS (self) && self->document != NULL);
 
   hl_figure_context_init (ctx, hl_document_get_project (self->document), hl_document_get_shell (self->document),
-                          hl_document_get_solution (self->document), NULL,
+                          hl_document_get_solution (self->document),
+                          hl_document_get_new_wall_solution (self->document),
                           hl_document_get_problem_text (self->document), HL_FIGURE_TARGET_SCREEN);
   ctx->style = hl_canvas_get_dark (self) ? HL_FIGURE_STYLE_DARK : HL_FIGURE_STYLE_LIGHT;
 }

@@ -20,7 +20,6 @@ typedef struct
   HlDocument *document;
   char        date[11];
   guint       sheet_pages;
-  HlSolution *new_wall;   /* solved once for every page of the sheet */
 } PrintJob;
 
 static void
@@ -29,7 +28,6 @@ print_job_free (gpointer data)
   PrintJob *job = data;
 
   g_clear_object (&job->document);
-  g_clear_pointer (&job->new_wall, hl_solution_free);
   g_free (job);
 }
 
@@ -38,7 +36,7 @@ fill_context (PrintJob        *job,
               HlFigureContext *ctx)
 {
   hl_figure_context_init (ctx, hl_document_get_project (job->document), hl_document_get_shell (job->document),
-                          hl_document_get_solution (job->document), job->new_wall,
+                          hl_document_get_solution (job->document), hl_document_get_new_wall_solution (job->document),
                           hl_document_get_problem_text (job->document), HL_FIGURE_TARGET_PAPER);
   ctx->export_date = job->date;
 }
@@ -52,11 +50,6 @@ on_begin_print_cb (GtkPrintOperation *operation,
   HlFigureContext ctx = { 0 };
   double w = gtk_print_context_get_width (context);
   double h = gtk_print_context_get_height (context);
-  const HlSolution *sol = hl_document_get_solution (job->document);
-
-  g_clear_pointer (&job->new_wall, hl_solution_free);
-  if (sol != NULL)
-    job->new_wall = hl_solve (&sol->inputs, HL_DEFAULT_POINTS, FALSE, NULL);
   fill_context (job, &ctx);
   job->sheet_pages = hl_sheet_page_count (MIN (w, h), MAX (w, h), &ctx);
   gtk_print_operation_set_n_pages (operation, 1 + (int) job->sheet_pages);

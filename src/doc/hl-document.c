@@ -28,7 +28,8 @@ struct _HlDocument
   HlHistory  *history;        /* undo and redo, by what each edit changed */
 
   GHashTable *input_errors;   /* field -> message */
-  HlSolution *solution;
+  HlSolution *solution;       /* the corroded wall, what every check uses */
+  HlSolution *new_wall;       /* the wall as built, beside it in the sheet */
   GPtrArray  *problems;
   char       *problem_text;
 
@@ -130,6 +131,7 @@ update (HlDocument *self)
   gpointer key, value;
 
   g_clear_pointer (&self->solution, hl_solution_free);
+  g_clear_pointer (&self->new_wall, hl_solution_free);
   g_clear_pointer (&self->problems, g_ptr_array_unref);
   g_clear_pointer (&self->problem_text, g_free);
   sync_shells (self);
@@ -166,6 +168,8 @@ update (HlDocument *self)
       self->solution = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &error);
       if (self->solution == NULL)
         g_string_append (text, error->message);
+      else
+        self->new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
     }
   if (text->len > 0)
     self->problem_text = g_strdup (text->str);
@@ -268,6 +272,7 @@ hl_document_finalize (GObject *object)
   g_clear_pointer (&self->history, hl_history_free);
   g_clear_pointer (&self->input_errors, g_hash_table_unref);
   g_clear_pointer (&self->solution, hl_solution_free);
+  g_clear_pointer (&self->new_wall, hl_solution_free);
   g_clear_pointer (&self->problems, g_ptr_array_unref);
   g_clear_pointer (&self->problem_text, g_free);
   g_clear_pointer (&self->seen_title, g_free);
@@ -558,6 +563,13 @@ hl_document_get_solution (HlDocument *self)
 {
   g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
   return self->solution;
+}
+
+const HlSolution *
+hl_document_get_new_wall_solution (HlDocument *self)
+{
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
+  return self->new_wall;
 }
 
 const char *

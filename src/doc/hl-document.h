@@ -61,6 +61,9 @@ GListModel          *hl_document_get_shells      (HlDocument *self);
  * then the problem text says what to fix. */
 const HlSolution    *hl_document_get_solution    (HlDocument *self);
 const char          *hl_document_get_problem_text (HlDocument *self);
+/* The same shell's wall as built (no corrosion), solved in the same
+ * change; NULL whenever hl_document_get_solution() is. */
+const HlSolution    *hl_document_get_new_wall_solution (HlDocument *self);
 /* problems of the selected shell's stored values (HlProblem *) */
 GPtrArray           *hl_document_get_problems    (HlDocument *self);
 

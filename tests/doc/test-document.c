@@ -214,11 +214,19 @@ test_one_solution_per_change (void)
   t = 0.0105;
   r_mean = a + t / 2;
   g_assert_cmpfloat_with_epsilon (sol->thin_hoop.value, 1.1e6 * r_mean / t, 1e-6 * 1.1e6 * r_mean / t);
+  /* and the wall as built, solved in the same change: a = 600 mm,
+   * t = 12 mm */
+  g_assert_nonnull (hl_document_get_new_wall_solution (doc));
+  g_assert_false (hl_document_get_new_wall_solution (doc)->corroded);
+  r_mean = 0.600 + 0.012 / 2;
+  g_assert_cmpfloat_with_epsilon (hl_document_get_new_wall_solution (doc)->thin_hoop.value, 1.1e6 * r_mean / 0.012,
+                                  1e-6 * 1.1e6 * r_mean / 0.012);
 
   /* a bad value: no solution, and a text that says what to fix */
   s = thicker (doc, -3);
   hl_document_edit_shell (doc, &s, NULL);
   g_assert_null (hl_document_get_solution (doc));
+  g_assert_null (hl_document_get_new_wall_solution (doc));
   g_assert_nonnull (hl_document_get_problem_text (doc));
   close_demo (doc, &notes);
 }
