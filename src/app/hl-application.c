@@ -8,6 +8,7 @@
 #include "hl-application.h"
 #include "hl-app-resources.h"
 #include "hl-canvas.h"
+#include "hl-startup-trace.h"
 #include "hl-preferences.h"
 #include "hl-recovery.h"
 #include "hl-report.h"
@@ -146,7 +147,7 @@ hl_application_startup (GApplication *application)
   };
 
   G_APPLICATION_CLASS (hl_application_parent_class)->startup (application);
-  hl_canvas_trace ("toolkit started");
+  hl_startup_trace ("toolkit started");
 
   g_action_map_add_action_entries (G_ACTION_MAP (self), app_entries, G_N_ELEMENTS (app_entries), self);
   self->signal_sources[0] = g_unix_signal_add (SIGTERM, on_quit_signal_cb, self);
@@ -213,10 +214,10 @@ hl_application_open (GApplication  *application,
             target = active;
           else
             target = GTK_WINDOW (hl_window_new (GTK_APPLICATION (application)));
-          hl_canvas_trace ("window built");
+          hl_startup_trace ("window built");
           if (hl_window_load_file (HL_WINDOW (target), files[i]))
             apply_test_edit (target);
-          hl_canvas_trace ("project loaded");
+          hl_startup_trace ("project loaded");
         }
       gtk_window_present (target);
     }
@@ -331,7 +332,7 @@ hl_application_main (int    argc,
 {
   g_autoptr(HlApplication) app = NULL;
 
-  hl_canvas_mark_start ();
+  hl_startup_trace_mark ();
   app = hl_application_new (G_APPLICATION_DEFAULT_FLAGS);
   return g_application_run (G_APPLICATION (app), argc, argv);
 }

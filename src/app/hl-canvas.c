@@ -11,11 +11,11 @@
 #include "hl-config.h"
 #include "hl-canvas.h"
 #include "hl-document-follower.h"
+#include "hl-startup-trace.h"
 #include "hl-figure.h"
 
 #include <adwaita.h>
 #include <stdio.h>
-#include <time.h>
 
 struct _HlCanvas
 {
@@ -27,23 +27,6 @@ struct _HlCanvas
 };
 
 G_DEFINE_FINAL_TYPE (HlCanvas, hl_canvas, GTK_TYPE_DRAWING_AREA)
-
-static gint64 start_time;
-
-void
-hl_canvas_mark_start (void)
-{
-  if (start_time == 0)
-    start_time = g_get_monotonic_time ();
-}
-
-void
-hl_canvas_trace (const char *stage)
-{
-  if (start_time != 0 && g_getenv ("HL_TRACE_STARTUP") != NULL)
-    fprintf (stderr, "hoopline: %s %.1f ms after start\n", stage,
-             (g_get_monotonic_time () - start_time) / 1000.0);
-}
 
 gboolean
 hl_canvas_get_dark (HlCanvas *self)
@@ -83,11 +66,8 @@ draw_cb (GtkDrawingArea *area,
   hl_canvas_build_context (self, &ctx);
   hl_figure_draw (cr, width, height, &ctx);
 
-  /* the real-time stamp lets a script measure from before exec() */
-  if (self->n_draws++ == 0 && g_getenv ("HL_TRACE_STARTUP") != NULL && start_time != 0)
-    fprintf (stderr, "hoopline: first frame drawn %.1f ms after start, %.1f ms CPU, at %" G_GINT64_FORMAT " us\n",
-             (g_get_monotonic_time () - start_time) / 1000.0, clock () * 1000.0 / CLOCKS_PER_SEC,
-             g_get_real_time ());
+  if (self->n_draws++ == 0)
+    hl_startup_trace_first_frame ();
   if (g_getenv ("HL_TRACE_DRAW") != NULL)
     fprintf (stderr, "hoopline: figure drawn in %.2f ms (%d x %d)\n",
              (g_get_monotonic_time () - before) / 1000.0, width, height);

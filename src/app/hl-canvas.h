@@ -23,9 +23,4 @@ gboolean hl_canvas_get_dark     (HlCanvas   *self);
 void     hl_canvas_build_context (HlCanvas        *self,
                                   HlFigureContext *ctx);
 
-/* Time origin for the HL_TRACE_STARTUP report, set once at start. */
-void     hl_canvas_mark_start   (void);
-/* With HL_TRACE_STARTUP set, prints how long after the start @stage came. */
-void     hl_canvas_trace        (const char *stage);
-
 G_END_DECLS
