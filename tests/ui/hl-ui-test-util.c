@@ -54,6 +54,21 @@ hl_ui_open_window (HlApplication *app,
   return window;
 }
 
+HlWindow *
+hl_ui_open_demo (HlApplication *app)
+{
+  g_autofree char *path = hl_ui_demo_path ();
+
+  return hl_ui_open_window (app, path);
+}
+
+void
+hl_ui_discard_window (HlWindow *window)
+{
+  gtk_window_destroy (GTK_WINDOW (window));
+  hl_ui_iterate ();
+}
+
 void
 hl_ui_answer (GtkWidget  *question,
               const char *response)

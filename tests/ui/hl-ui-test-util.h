@@ -20,6 +20,10 @@ char          *hl_ui_demo_path       (void);
 /* a new window of @app showing the project at @path, presented */
 HlWindow      *hl_ui_open_window     (HlApplication *app,
                                       const char    *path);
+/* the demo project in a new window of @app */
+HlWindow      *hl_ui_open_demo       (HlApplication *app);
+/* closes @window without the unsaved-changes question */
+void           hl_ui_discard_window  (HlWindow      *window);
 /* answers the AdwMessageDialog @question with @response, which it must
  * offer, as a click on that button would */
 void           hl_ui_answer          (GtkWidget     *question,

@@ -25,20 +25,8 @@
 
 static HlApplication *app;
 
-static HlWindow *
-open_demo (void)
-{
-  g_autofree char *path = hl_ui_demo_path ();
-
-  return hl_ui_open_window (app, path);
-}
-
-static void
-discard_window (HlWindow *window)
-{
-  gtk_window_destroy (GTK_WINDOW (window));
-  hl_ui_iterate ();
-}
+#define open_demo() hl_ui_open_demo (app)
+#define discard_window hl_ui_discard_window
 
 static HlDocument *
 document (HlWindow *window)
