@@ -61,6 +61,8 @@ hl_reader_fail (HlReader     *rd,
       ...)
 {
   g_autofree char *msg = NULL;
+  g_autofree char *whole = NULL;
+  g_autofree char *valid = NULL;
   va_list args;
 
   if (rd->error != NULL)
@@ -69,9 +71,12 @@ hl_reader_fail (HlReader     *rd,
   msg = shorten_quotes (g_strdup_vprintf (format, args));
   va_end (args);
   if (element != NULL)
-    g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s: %s", rd->name, MAX (line, 1), element, msg);
+    whole = g_strdup_printf ("%s:%ld: %s: %s", rd->name, MAX (line, 1), element, msg);
   else
-    g_set_error (&rd->error, HL_PROJECT_FILE_ERROR, code, "%s:%ld: %s", rd->name, MAX (line, 1), msg);
+    whole = g_strdup_printf ("%s:%ld: %s", rd->name, MAX (line, 1), msg);
+  /* libxml2 copies bytes of a broken file into its messages (an encoding
+   * name, a cut character); the message goes to a window and a terminal */
+  g_set_error_literal (&rd->error, HL_PROJECT_FILE_ERROR, code, valid = g_utf8_make_valid (whole, -1));
 }
 
 /* ---- libxml2 error capture ---------------------------------------- */
@@ -741,7 +746,8 @@ hl_project_load (const char  *path,
   g_autoptr(GFileInfo) info = NULL;
   g_autoptr(GError) local = NULL;
   g_autofree char *data = NULL;
-  g_autofree char *name = g_strdup (path);
+  /* the name starts every message, which must be UTF-8 whatever the path */
+  g_autofree char *name = g_filename_display_name (path);
   gsize length = 0;
 
   g_return_val_if_fail (path != NULL, NULL);
