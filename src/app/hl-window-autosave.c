@@ -11,7 +11,6 @@
 
 #include "hl-config.h"
 #include "hl-window-private.h"
-#include "hl-shell-check.h"
 
 #define DEFAULT_DELAY_SECONDS 3
 
@@ -36,19 +35,6 @@ sync_original (HlWindow *self)
   hl_autosave_set_original (self->autosave, file != NULL ? g_file_peek_path (file) : NULL);
 }
 
-static gboolean
-project_loadable (const HlProject *project)
-{
-  for (guint i = 0; i < hl_project_n_shells (project); i++)
-    {
-      g_autoptr(GPtrArray) problems = hl_shell_inputs_check (hl_project_shell (project, i));
-
-      if (problems->len > 0)
-        return FALSE;
-    }
-  return TRUE;
-}
-
 void
 hl_window_autosave_now (HlWindow *self)
 {
@@ -62,7 +48,7 @@ hl_window_autosave_now (HlWindow *self)
   sync_original (self);
   /* a copy the loader would refuse cannot be recovered: while a value is
    * bad, the last good copy stays (the bad value is one to fix anyway) */
-  if (!project_loadable (hl_document_get_project (self->document)))
+  if (!hl_document_check_writable (self->document, NULL))
     return;
   /* the copy is a safety net: a failure is logged, never put in the
    * user's way while they work */

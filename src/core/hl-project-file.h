@@ -50,6 +50,12 @@ char      *hl_project_to_checked_xml (const HlProject *project,
                                       gsize           *length,
                                       GError         **error);
 
+/* The writer's rule for "can this project be written", without writing:
+ * every field within the reader's limits and every shell's values valid.
+ * The message names the field to fix. */
+gboolean   hl_project_check_writable (const HlProject *project,
+                                      GError         **error);
+
 /* Atomic: writes a temporary file beside @path and renames it over, so a
  * failed save leaves the old file as it was.  Only checked bytes
  * (hl_project_to_checked_xml) are written. */

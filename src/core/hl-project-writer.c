@@ -341,6 +341,14 @@ check_fields (const HlProject *project,
   return TRUE;
 }
 
+gboolean
+hl_project_check_writable (const HlProject *project,
+                           GError         **error)
+{
+  g_return_val_if_fail (project != NULL, FALSE);
+  return check_fields (project, error);
+}
+
 char *
 hl_project_to_checked_xml (const HlProject *project,
                            gsize           *length,

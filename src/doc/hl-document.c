@@ -1,13 +1,16 @@
 /* hl-document.c — the open project: file, modified flag, undo, selection
  *
+ * The edit cycle (begin, change through the history, end: solve once,
+ * emit, notify), loading and saving; the shells, materials and property
+ * bookkeeping have their own files (hl-document-private.h lists them).
+ *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
 #define G_LOG_DOMAIN "hl-document"
 
 #include "hl-config.h"
-#include "hl-document.h"
+#include "hl-document-private.h"
 #include "hl-field-label.h"
-#include "hl-history.h"
 #include "hl-shell-item.h"
 #include "hl-limits.h"
 #include "hl-project-file.h"
@@ -16,51 +19,12 @@
 #include <glib/gi18n.h>
 #include <string.h>
 
-struct _HlDocument
-{
-  GObject     parent_instance;
-
-  HlProject  *project;
-  HlProject  *saved;          /* as on disk, for the modified flag */
-  GFile      *file;
-  guint       selected;
-
-  HlHistory  *history;        /* undo and redo, by what each edit changed */
-
-  GHashTable *input_errors;   /* field -> message */
-  HlSolution *solution;       /* the corroded wall, what every check uses */
-  HlSolution *new_wall;       /* the wall as built, beside it in the sheet */
-  GPtrArray  *problems;
-  char       *problem_text;
-
-  /* what the properties last said, so each notifies only on a change */
-  char       *seen_title;
-  GFile      *seen_file;
-  guint       seen_selected;
-  gboolean    seen_modified, seen_can_undo, seen_can_redo;
-  gboolean    primed;         /* the seen_ values hold the first state */
-
-  GListStore *shells;         /* HlShellItem, in step with the project */
-};
-
 G_DEFINE_FINAL_TYPE (HlDocument, hl_document, G_TYPE_OBJECT)
+
+GParamSpec *hl_document_props[N_PROPS];
 
 enum { CHANGED, N_SIGNALS };
 static guint signals[N_SIGNALS];
-
-enum
-{
-  PROP_0,
-  PROP_TITLE,
-  PROP_FILE,
-  PROP_MODIFIED,
-  PROP_SELECTED,
-  PROP_SOLUTION,
-  PROP_CAN_UNDO,
-  PROP_CAN_REDO,
-  N_PROPS
-};
-static GParamSpec *props[N_PROPS];
 
 static void
 append_problem_line (GString    *text,
@@ -72,54 +36,6 @@ append_problem_line (GString    *text,
   /* TRANSLATORS: a field label and what is wrong with its value */
   g_string_append_printf (text, _("%s: %s"), hl_field_label (field), message);
 }
-
-static gboolean
-same_id (GListModel      *items,
-         guint            position,
-         const HlProject *project,
-         guint            index)
-{
-  g_autoptr(HlShellItem) item = g_list_model_get_item (items, position);
-
-  return strcmp (hl_shell_item_get_id (item), hl_project_shell (project, index)->id) == 0;
-}
-
-/* The list of shells follows the project with the least change: items
- * whose shell stays keep their identity (and notify a new name or form),
- * and one splice replaces the run that was added, removed or moved, so a
- * list view rebuilds only what changed and typing a value touches none. */
-static void
-sync_shells (HlDocument *self)
-{
-  GListModel *items = G_LIST_MODEL (self->shells);
-  guint n_old = g_list_model_get_n_items (items);
-  guint n_new = hl_project_n_shells (self->project);
-  guint start = 0, end_old = n_old, end_new = n_new;
-  g_autoptr(GPtrArray) added = g_ptr_array_new_with_free_func (g_object_unref);
-
-  while (start < n_old && start < n_new && same_id (items, start, self->project, start))
-    start++;
-  while (end_old > start && end_new > start && same_id (items, end_old - 1, self->project, end_new - 1))
-    end_old--, end_new--;
-  for (guint i = 0; i < start; i++)
-    {
-      g_autoptr(HlShellItem) item = g_list_model_get_item (items, i);
-
-      hl_shell_item_update (item, hl_project_shell (self->project, i));
-    }
-  for (guint i = end_old; i < n_old; i++)
-    {
-      g_autoptr(HlShellItem) item = g_list_model_get_item (items, i);
-
-      hl_shell_item_update (item, hl_project_shell (self->project, i - end_old + end_new));
-    }
-  for (guint i = start; i < end_new; i++)
-    g_ptr_array_add (added, hl_shell_item_new (hl_project_shell (self->project, i)));
-  if (end_old > start || added->len > 0)
-    g_list_store_splice (self->shells, start, end_old - start, added->pdata, added->len);
-}
-
-static void remember_properties (HlDocument *self);
 
 /* Solves once per change, so every view reads the same solution. */
 static void
@@ -134,9 +50,9 @@ update (HlDocument *self)
   g_clear_pointer (&self->new_wall, hl_solution_free);
   g_clear_pointer (&self->problems, g_ptr_array_unref);
   g_clear_pointer (&self->problem_text, g_free);
-  sync_shells (self);
+  hl_document_sync_shells (self);
   if (!self->primed)
-    remember_properties (self);
+    hl_document_remember_properties (self);
 
   if (hl_project_n_shells (self->project) == 0)
     {
@@ -175,90 +91,26 @@ update (HlDocument *self)
     self->problem_text = g_strdup (text->str);
 }
 
-static void
-remember_properties (HlDocument *self)
-{
-  self->primed = TRUE;
-  g_free (self->seen_title);
-  self->seen_title = g_strdup (hl_document_get_title (self));
-  g_set_object (&self->seen_file, self->file);
-  self->seen_selected = self->selected;
-  self->seen_modified = hl_document_get_modified (self);
-  self->seen_can_undo = hl_document_can_undo (self);
-  self->seen_can_redo = hl_document_can_redo (self);
-}
-
-/* Every change passes here, so the properties are compared in one
- * place: a view bound to "modified" hears of it only when it flips. */
-static void
-notify_properties (HlDocument *self)
-{
-  const char *title = hl_document_get_title (self);
-  gboolean modified = hl_document_get_modified (self);
-  gboolean can_undo = hl_document_can_undo (self);
-  gboolean can_redo = hl_document_can_redo (self);
-  GObject *object = G_OBJECT (self);
-
-  g_object_freeze_notify (object);
-  if (g_strcmp0 (title, self->seen_title) != 0)
-    {
-      g_free (self->seen_title);
-      self->seen_title = g_strdup (title);
-      g_object_notify_by_pspec (object, props[PROP_TITLE]);
-    }
-  if (self->file != self->seen_file
-      && (self->file == NULL || self->seen_file == NULL || !g_file_equal (self->file, self->seen_file)))
-    {
-      g_set_object (&self->seen_file, self->file);
-      g_object_notify_by_pspec (object, props[PROP_FILE]);
-    }
-  else
-    g_set_object (&self->seen_file, self->file);
-  if (modified != self->seen_modified)
-    {
-      self->seen_modified = modified;
-      g_object_notify_by_pspec (object, props[PROP_MODIFIED]);
-    }
-  if (self->selected != self->seen_selected)
-    {
-      self->seen_selected = self->selected;
-      g_object_notify_by_pspec (object, props[PROP_SELECTED]);
-    }
-  if (can_undo != self->seen_can_undo)
-    {
-      self->seen_can_undo = can_undo;
-      g_object_notify_by_pspec (object, props[PROP_CAN_UNDO]);
-    }
-  if (can_redo != self->seen_can_redo)
-    {
-      self->seen_can_redo = can_redo;
-      g_object_notify_by_pspec (object, props[PROP_CAN_REDO]);
-    }
-  /* solved anew on every change: a new solution each time */
-  g_object_notify_by_pspec (object, props[PROP_SOLUTION]);
-  g_object_thaw_notify (object);
-}
-
-static void
-emit_changed (HlDocument *self)
+void
+hl_document_emit_changed (HlDocument *self)
 {
   update (self);
   g_signal_emit (self, signals[CHANGED], 0);
-  notify_properties (self);
+  hl_document_notify_properties (self);
 }
 
-static void
-begin_edit (HlDocument *self,
+void
+hl_document_begin_edit (HlDocument *self,
             const char *merge_key)
 {
   hl_history_begin (self->history, merge_key, self->selected);
 }
 
-static void
-end_edit (HlDocument *self)
+void
+hl_document_end_edit (HlDocument *self)
 {
   hl_history_end (self->history, self->selected);
-  emit_changed (self);
+  hl_document_emit_changed (self);
 }
 
 static void
@@ -327,21 +179,21 @@ hl_document_class_init (HlDocumentClass *klass)
 
   /* read-only: every change goes through the edit functions, so undo,
    * the modified flag and the one solve per change stay in step */
-  props[PROP_TITLE] = g_param_spec_string ("title", NULL, "the project title, or “Untitled project”", NULL,
+  hl_document_props[PROP_TITLE] = g_param_spec_string ("title", NULL, "the project title, or “Untitled project”", NULL,
                                            G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  props[PROP_FILE] = g_param_spec_object ("file", NULL, "the file saves go to, or NULL", G_TYPE_FILE,
+  hl_document_props[PROP_FILE] = g_param_spec_object ("file", NULL, "the file saves go to, or NULL", G_TYPE_FILE,
                                           G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  props[PROP_MODIFIED] = g_param_spec_boolean ("modified", NULL, "differs from the file", FALSE,
+  hl_document_props[PROP_MODIFIED] = g_param_spec_boolean ("modified", NULL, "differs from the file", FALSE,
                                                G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  props[PROP_SELECTED] = g_param_spec_uint ("selected", NULL, "index of the selected shell", 0, G_MAXUINT, 0,
+  hl_document_props[PROP_SELECTED] = g_param_spec_uint ("selected", NULL, "index of the selected shell", 0, G_MAXUINT, 0,
                                             G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  props[PROP_SOLUTION] = g_param_spec_pointer ("solution", NULL, "the selected shell's HlSolution, or NULL",
+  hl_document_props[PROP_SOLUTION] = g_param_spec_pointer ("solution", NULL, "the selected shell's HlSolution, or NULL",
                                                G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  props[PROP_CAN_UNDO] = g_param_spec_boolean ("can-undo", NULL, "an edit can be undone", FALSE,
+  hl_document_props[PROP_CAN_UNDO] = g_param_spec_boolean ("can-undo", NULL, "an edit can be undone", FALSE,
                                                G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  props[PROP_CAN_REDO] = g_param_spec_boolean ("can-redo", NULL, "an undone edit can be redone", FALSE,
+  hl_document_props[PROP_CAN_REDO] = g_param_spec_boolean ("can-redo", NULL, "an undone edit can be redone", FALSE,
                                                G_PARAM_READABLE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
-  g_object_class_install_properties (object_class, N_PROPS, props);
+  g_object_class_install_properties (object_class, N_PROPS, hl_document_props);
 
   /* Anything changed: project, selection, file, modified flag, problems. */
   signals[CHANGED] = g_signal_new ("changed", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST,
@@ -354,13 +206,6 @@ hl_document_init (HlDocument *self)
   self->history = hl_history_new ();
   self->input_errors = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
   self->shells = g_list_store_new (HL_TYPE_SHELL_ITEM);
-}
-
-GListModel *
-hl_document_get_shells (HlDocument *self)
-{
-  g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
-  return G_LIST_MODEL (self->shells);
 }
 
 HlDocument *
@@ -431,16 +276,19 @@ hl_document_load (HlDocument  *self,
   self->selected = 0;
   hl_history_clear (self->history);
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  hl_document_emit_changed (self);
   return TRUE;
 }
 
 /* A file the loader would refuse is no safe copy of the work, so a
- * project with bad values is not written. */
-static gboolean
-check_savable (HlDocument *self,
-               GError    **error)
+ * project with bad values is not written; the shell's own words come
+ * first, the writer's field limits after. */
+gboolean
+hl_document_check_writable (HlDocument *self,
+                            GError    **error)
 {
+  g_return_val_if_fail (HL_IS_DOCUMENT (self), FALSE);
+
   for (guint i = 0; i < hl_project_n_shells (self->project); i++)
     {
       const HlShellInputs *shell = hl_project_shell (self->project, i);
@@ -463,7 +311,7 @@ check_savable (HlDocument *self,
                            _("Some values cannot be read. Fix the marked values, then save again."));
       return FALSE;
     }
-  return TRUE;
+  return hl_project_check_writable (self->project, error);
 }
 
 gboolean
@@ -479,7 +327,7 @@ hl_document_save (HlDocument *self,
     file = self->file;
   g_return_val_if_fail (G_IS_FILE (file), FALSE);
 
-  if (!check_savable (self, error))
+  if (!hl_document_check_writable (self, error))
     return FALSE;
   path = g_file_get_path (file);
   if (path == NULL)
@@ -495,7 +343,7 @@ hl_document_save (HlDocument *self,
   self->saved = hl_project_copy (self->project);
   g_set_object (&self->file, file);
   hl_history_break_merge (self->history);
-  emit_changed (self);
+  hl_document_emit_changed (self);
   return TRUE;
 }
 
@@ -546,7 +394,7 @@ hl_document_set_selected (HlDocument *self,
     return;
   self->selected = index;
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  hl_document_emit_changed (self);
 }
 
 const HlShellInputs *
@@ -603,7 +451,7 @@ hl_document_set_input_error (HlDocument *self,
     g_hash_table_remove (self->input_errors, field);
   else
     g_hash_table_insert (self->input_errors, g_strdup (field), g_strdup (message));
-  emit_changed (self);
+  hl_document_emit_changed (self);
 }
 
 void
@@ -614,7 +462,7 @@ hl_document_clear_input_errors (HlDocument *self)
   if (g_hash_table_size (self->input_errors) == 0)
     return;
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  hl_document_emit_changed (self);
 }
 
 const char *
@@ -623,154 +471,6 @@ hl_document_get_input_error (HlDocument *self,
 {
   g_return_val_if_fail (HL_IS_DOCUMENT (self), NULL);
   return g_hash_table_lookup (self->input_errors, field);
-}
-
-void
-hl_document_edit_shell (HlDocument          *self,
-                        const HlShellInputs *shell,
-                        const char          *merge_key)
-{
-  const HlShellInputs *slot;
-
-  g_return_if_fail (HL_IS_DOCUMENT (self));
-  g_return_if_fail (shell != NULL);
-
-  slot = hl_document_get_shell (self);
-  g_return_if_fail (slot != NULL);
-  if (hl_shell_inputs_equal (slot, shell))
-    return;
-  begin_edit (self, merge_key);
-  hl_history_set_shell (self->history, self->project, self->selected, shell);
-  end_edit (self);
-}
-
-static guint
-number_in_id (const char *id)
-{
-  const char *dash = strrchr (id, '-');
-
-  return dash != NULL ? (guint) g_ascii_strtoull (dash + 1, NULL, 10) : 0;
-}
-
-void
-hl_document_add_shell (HlDocument          *self,
-                       const HlShellInputs *template_shell)
-{
-  HlShellInputs shell;
-  g_autofree char *id = NULL;
-  g_autofree char *name = NULL;
-
-  g_return_if_fail (HL_IS_DOCUMENT (self));
-  g_return_if_fail (template_shell != NULL);
-
-  shell = *template_shell;
-  id = hl_project_unique_shell_id (self->project, "shell");
-  /* TRANSLATORS: name of a new shell; %u is its number */
-  name = g_strdup_printf (_("Shell %u"), number_in_id (id));
-  hl_utf8_copy (shell.id, id, sizeof shell.id);
-  hl_utf8_copy (shell.name, name, sizeof shell.name);
-
-  begin_edit (self, NULL);
-  hl_history_insert_shell (self->history, self->project, hl_project_n_shells (self->project), &shell);
-  self->selected = hl_project_n_shells (self->project) - 1;
-  g_hash_table_remove_all (self->input_errors);
-  end_edit (self);
-}
-
-void
-hl_document_duplicate_shell (HlDocument *self)
-{
-  const HlShellInputs *current;
-  HlShellInputs shell;
-  g_autofree char *id = NULL;
-  g_autofree char *name = NULL;
-
-  g_return_if_fail (HL_IS_DOCUMENT (self));
-
-  current = hl_document_get_shell (self);
-  if (current == NULL)
-    return;
-  shell = *current;
-  id = hl_project_unique_shell_id (self->project, current->id);
-  /* TRANSLATORS: name of a duplicated shell; %s is the original's name */
-  name = g_strdup_printf (_("%s (copy)"), current->name);
-  /* a name near the limit loses its end, never half a character, and
-   * no space is left at the end (the file would not keep it) */
-  hl_utf8_copy (shell.id, id, sizeof shell.id);
-  hl_utf8_copy (shell.name, name, sizeof shell.name);
-  g_strchomp (shell.name);
-
-  begin_edit (self, NULL);
-  hl_history_insert_shell (self->history, self->project, self->selected + 1, &shell);
-  self->selected++;
-  g_hash_table_remove_all (self->input_errors);
-  end_edit (self);
-}
-
-void
-hl_document_remove_shell (HlDocument *self)
-{
-  g_return_if_fail (HL_IS_DOCUMENT (self));
-
-  if (self->selected >= hl_project_n_shells (self->project))
-    return;
-  begin_edit (self, NULL);
-  hl_history_remove_shell (self->history, self->project, self->selected);
-  if (self->selected > 0 && self->selected >= hl_project_n_shells (self->project))
-    self->selected--;
-  g_hash_table_remove_all (self->input_errors);
-  end_edit (self);
-}
-
-void
-hl_document_move_shell (HlDocument *self,
-                        int         delta)
-{
-  guint n, to;
-  HlShellInputs moved;
-
-  g_return_if_fail (HL_IS_DOCUMENT (self));
-
-  n = hl_project_n_shells (self->project);
-  if (self->selected >= n || (delta < 0 && self->selected == 0)
-      || (delta > 0 && self->selected + 1 >= n) || delta == 0)
-    return;
-  to = delta < 0 ? self->selected - 1 : self->selected + 1;
-  begin_edit (self, NULL);
-  moved = *hl_project_shell (self->project, self->selected);
-  hl_history_remove_shell (self->history, self->project, self->selected);
-  hl_history_insert_shell (self->history, self->project, to, &moved);
-  self->selected = to;
-  end_edit (self);
-}
-
-void
-hl_document_put_material (HlDocument       *self,
-                          const HlMaterial *material,
-                          const char       *merge_key)
-{
-  HlShellInputs *shell;
-  const HlMaterial *old;
-
-  g_return_if_fail (HL_IS_DOCUMENT (self));
-  g_return_if_fail (material != NULL);
-
-  shell = (HlShellInputs *) hl_document_get_shell (self);
-  old = hl_project_find_material (self->project, material->id);
-  if (old != NULL && hl_material_equal (old, material) && shell != NULL
-      && g_strcmp0 (shell->material_ref, material->id) == 0)
-    return;
-  begin_edit (self, merge_key);
-  hl_history_put_material (self->history, self->project, material);
-  if (shell != NULL)
-    {
-      HlShellInputs changed = *shell;
-
-      hl_utf8_copy (changed.material_ref, material->id, sizeof changed.material_ref);
-      changed.material = *material;
-      hl_history_set_shell (self->history, self->project, self->selected, &changed);
-    }
-  end_edit (self);
 }
 
 void
@@ -788,9 +488,9 @@ hl_document_set_info (HlDocument  *self,
   if (g_strcmp0 (p->title, title) == 0 && g_strcmp0 (p->engineer, engineer) == 0
       && g_strcmp0 (p->description, description) == 0 && p->display_units == units)
     return;
-  begin_edit (self, "project-info");
+  hl_document_begin_edit (self, "project-info");
   hl_history_set_info (self->history, p, title, engineer, description, units);
-  end_edit (self);
+  hl_document_end_edit (self);
 }
 
 gboolean
@@ -812,9 +512,9 @@ hl_document_add_revision (HlDocument *self,
       || g_utf8_strlen (author != NULL ? author : "", -1) > HL_LIMIT_SHORT_TEXT_CHARS
       || g_utf8_strlen (text != NULL ? text : "", -1) > HL_LIMIT_LONG_TEXT_CHARS)
     return FALSE;
-  begin_edit (self, NULL);
+  hl_document_begin_edit (self, NULL);
   hl_history_add_revision (self->history, self->project, number, date, author, text);
-  end_edit (self);
+  hl_document_end_edit (self);
   return TRUE;
 }
 
@@ -838,7 +538,7 @@ after_restore (HlDocument *self,
 {
   self->selected = selected;
   g_hash_table_remove_all (self->input_errors);
-  emit_changed (self);
+  hl_document_emit_changed (self);
 }
 
 void
@@ -868,16 +568,3 @@ hl_document_get_history_bytes (HlDocument *self)
   return hl_history_bytes (self->history);
 }
 
-guint
-hl_document_count_material_users (HlDocument *self,
-                                  const char *material_id)
-{
-  guint n = 0;
-
-  g_return_val_if_fail (HL_IS_DOCUMENT (self), 0);
-
-  for (guint i = 0; i < hl_project_n_shells (self->project); i++)
-    if (g_strcmp0 (hl_project_shell (self->project, i)->material_ref, material_id) == 0)
-      n++;
-  return n;
-}

@@ -36,6 +36,11 @@ gboolean             hl_document_load            (HlDocument  *self,
                                                   GFile       *file,
                                                   GPtrArray  **warnings,
                                                   GError     **error);
+/* The one rule for "can this project be written now" (save, save as,
+ * the crash-recovery copy): no field whose text cannot be read, every
+ * shell's values valid, every field within the file's limits. */
+gboolean             hl_document_check_writable  (HlDocument  *self,
+                                                  GError     **error);
 /* Saves to @file, or to the current file when @file is NULL.  On failure
  * the document stays modified and keeps its file. */
 gboolean             hl_document_save            (HlDocument  *self,
@@ -90,6 +95,21 @@ void                 hl_document_move_shell      (HlDocument *self,
 void                 hl_document_put_material    (HlDocument       *self,
                                                   const HlMaterial *material,
                                                   const char       *merge_key);
+typedef enum
+{
+  HL_MATERIAL_SCOPE_ALL_USERS,   /* every shell using the material */
+  HL_MATERIAL_SCOPE_THIS_SHELL,  /* a copy for the selected shell */
+} HlMaterialScope;
+
+/* An edit of the selected shell's material, @field the element edited.
+ * A built-in material is never changed: the edit makes a project
+ * material ("NAME, edited").  A project material several shells use is
+ * copied ("NAME (copy)") when @scope is this shell.  A typed name stays
+ * as typed.  Returns the id the shell now uses (owned by the document). */
+const char          *hl_document_edit_material   (HlDocument       *self,
+                                                  const HlMaterial *material,
+                                                  HlMaterialScope   scope,
+                                                  const char       *field);
 void                 hl_document_set_info        (HlDocument  *self,
                                                   const char  *title,
                                                   const char  *engineer,
