@@ -109,16 +109,18 @@ ensure_cells (HlResultsTable *self,
   gtk_grid_attach (self->grid, cell ("", 0.0f, NULL), 2, 0, 1, 1);
 }
 
-/* setting an equal text or tooltip still costs a relayout */
+/* GtkLabel skips a text equal to its own, a tooltip it does not: the
+ * row's source is a fixed text of the core, so the one it shows is
+ * known by its address, and the reason of an n/a changes only with it */
 static void
-set_label (GtkLabel   *label,
-           const char *text,
-           const char *tooltip)
+set_tooltip (GtkWidget  *label,
+             const char *key,
+             const char *tooltip)
 {
-  if (g_strcmp0 (gtk_label_get_text (label), text) != 0)
-    gtk_label_set_text (label, text);
-  if (g_strcmp0 (gtk_widget_get_tooltip_text (GTK_WIDGET (label)), tooltip) != 0)
-    gtk_widget_set_tooltip_text (GTK_WIDGET (label), tooltip);
+  if (g_object_get_data (G_OBJECT (label), "hl-tooltip") == key)
+    return;
+  g_object_set_data (G_OBJECT (label), "hl-tooltip", (gpointer) key);
+  gtk_widget_set_tooltip_text (label, tooltip);
 }
 
 static void
@@ -159,8 +161,13 @@ rebuild (HlResultsTable *self)
         shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
       name = g_ptr_array_index (self->names, n);
       value = g_ptr_array_index (self->values, n);
-      set_label (name, _(row->label), row->source);
-      set_label (value, shown, strcmp (shown, number) != 0 ? number : NULL);
+      gtk_label_set_text (name, _(row->label));
+      set_tooltip (GTK_WIDGET (name), row->source, row->source);
+      gtk_label_set_text (value, shown);
+      if (strcmp (shown, number) != 0)
+        set_tooltip (GTK_WIDGET (value), row->result.reason != NULL ? row->result.reason : "", number);
+      else
+        set_tooltip (GTK_WIDGET (value), NULL, NULL);
       g_string_append_printf (self->text, "%s\t%s\t%s\n", _(row->label), number, unit);
       n++;
     }
