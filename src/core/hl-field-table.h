@@ -23,6 +23,7 @@ typedef enum
   HL_FIELD_PERCENT,  /* a quantity in %, unit optional in the file */
   HL_FIELD_CHOICE,   /* an enum, one of the row's words */
   HL_FIELD_TEXT,     /* char[] */
+  HL_FIELD_TEMPERATURE, /* a quantity in °C, K or °F (SI kelvin) */
 } HlFieldKind;
 
 typedef enum { HL_FIELD_OF_SHELL, HL_FIELD_OF_MATERIAL } HlFieldOwner;

@@ -68,6 +68,10 @@ input_line (GString        *out,
       converted = hl_format_significant (si * 100, 8);
       unit = "%";
       break;
+    case HL_KIND_TEMPERATURE:
+      converted = hl_format_significant (si - 273.15, 8);
+      unit = "\xc2\xb0""C";
+      break;
     default:
       converted = hl_format_significant (si / 1e6, 8);
       unit = "MPa";
