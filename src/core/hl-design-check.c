@@ -109,7 +109,10 @@ check_method (const HlDesignCheckInputs *in,
   /* out of range is not extended: no PASS without both values */
   if (!isfinite (out->required) || !isfinite (out->mawp))
     {
+      /* neither half of an out-of-range formula is shown as a check */
       out->result = HL_CHECK_NOT_APPLICABLE;
+      out->required = out->mawp = NAN;
+      out->utilisation_pressure = out->utilisation_thickness = NAN;
       g_strlcpy (out->reason, mi->required_reason != NULL ? mi->required_reason
                               : mi->mawp_reason != NULL ? mi->mawp_reason : "not computable for this shell",
                  sizeof out->reason);

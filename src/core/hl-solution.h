@@ -72,6 +72,8 @@ typedef struct
   HlResult barlow_pressure;
   const char *ug27_clause;      /* which formula governs, for the labels */
   const char *en13445_clause;
+  char ug27_source[160];        /* clause, edition and the pressure taken */
+  char en13445_source[160];
   HlDesignCheck check;          /* PASS / FAIL, read by every output */
 
   GPtrArray *warnings;          /* char * */

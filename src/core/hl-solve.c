@@ -129,7 +129,12 @@ solve_membrane_and_lame (HlSolution *s)
   double err_hoop, err_eq, chosen;
 
   s->thin_hoop = ok (hoop);
-  s->thin_axial = ok (hl_thin_axial (in->form, in->ends, s->lame.nu, hoop));
+  /* a sphere has no axis: neither the thin nor the Lamé axial stress
+   * exists (both tangential stresses are the hoop stress) */
+  if (in->form == HL_FORM_SPHERE)
+    s->thin_axial = na (N_("a sphere has two equal tangential stresses: see the hoop stress"));
+  else
+    s->thin_axial = ok (hl_thin_axial (in->form, in->ends, s->lame.nu, hoop));
   s->lame_hoop_inner = ok (inner.hoop);
   s->lame_hoop_outer = ok (outer.hoop);
   s->lame_radial_inner = ok (inner.radial);
@@ -225,6 +230,21 @@ solve_yield_and_collapse (HlSolution *s)
     s->plastic_collapse_tresca = ok (s->po + s->yield * log (s->k));
 }
 
+/* the clause with the edition the user names, and the pressure the
+ * formula took, for the labels of every output */
+static void
+code_source (const HlSolution *s,
+             char             *buf,
+             gsize             size,
+             const char       *clause)
+{
+  const char *edition = s->inputs.code_edition;
+
+  g_snprintf (buf, size, "%s%s%s%s; %s", clause, edition[0] ? " (" : "", edition, edition[0] ? ")" : "",
+              s->code_coincident ? "P = internal - external (external always coincident)"
+                                 : "P = internal design pressure alone");
+}
+
 static void
 solve_allowables (HlSolution *s)
 {
@@ -287,6 +307,8 @@ solve_allowables (HlSolution *s)
     s->treq_en13445 = net_external ? na (BUCKLING_GOVERNS) : en.treq_reason ? na (en.treq_reason) : ok (en.treq);
     s->mawp_en13445 = en.mawp_reason ? na (en.mawp_reason) : ok (en.mawp + held);
     s->en13445_clause = en.clause;
+    code_source (s, s->ug27_source, sizeof s->ug27_source, ug.clause);
+    code_source (s, s->en13445_source, sizeof s->en13445_source, en.clause);
     if (ug.out_of_range)
       warn (s, N_("this wall is outside the range of the UG-27 formulas: use the code's thick-shell rules"));
     if (en.out_of_range)
@@ -345,6 +367,10 @@ collect_warnings (HlSolution *s)
   double peak = hl_lame_peak_equivalent (&s->lame, in->sizing_criterion);
   gboolean tresca = in->sizing_criterion == HL_CRITERION_TRESCA;
 
+  /* a failed check is never without a warning beside it */
+  if (s->check.verdict != HL_CHECK_PASS)
+    warn (s, "the design check fails (%s): %s", hl_design_basis_name (s->check.basis),
+          g_str_has_prefix (s->check.verdict_text, "FAIL: ") ? s->check.verdict_text + 6 : s->check.verdict_text);
   if (s->pi == 0.0 && s->po == 0.0)
     warn (s, N_("no pressure is applied: every stress is zero"));
   if (s->po > 0.0)
