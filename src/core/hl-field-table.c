@@ -145,7 +145,7 @@ static const HlField fields[] = {
   { .element = "external-pressure-coincident", .kind = HL_FIELD_CHOICE, SHELL (external_coincident),
     .default_value = FALSE, .label = "External pressure always coincident",
     .tooltip = "Yes only when the outside pressure can never be lost while the inside one acts",
-    .report = "External pressure always coincident", .sheet = "External pressure always coincident",
+    .report = "External pressure always acts", .sheet = "External pressure always acts",
     .choices = yes_no_choices },
   /* recorded, not used: the allowable is entered at this temperature.
    * Liquid helium service starts near 4 K; above 1 500 °C steel melts
@@ -154,7 +154,7 @@ static const HlField fields[] = {
     .min_si = 1.0, .max_si = 1773.15, .min_text = "1 K", .max_text = "1500 °C",
     .why_min = "absolute zero is 0 K (-273.15 °C)", .default_value = 20, .default_unit = "\xc2\xb0""C",
     .label = "Design temperature", .tooltip = "The allowable stress is the one at this temperature",
-    .report = "Design temperature", .sheet = "Design temperature" },
+    .report = "Design temperature" },
   /* the material's rows; their defaults are those of hl_material_default() */
   { .element = "name", .kind = HL_FIELD_TEXT, MATERIAL (name), TEXT_SIZE (HlMaterial, name), .label = N_("Name"), .report = "Material",
     .sheet = N_("Material") },
@@ -193,12 +193,15 @@ static const HlField fields[] = {
                         "(weld joint efficiencies tabulate from 0.45 to 1)"),
     .default_value = 1.0, .label = N_("Joint efficiency"), .report = "Joint efficiency E",
     .sheet = N_("Weld joint efficiency") },
+  /* the texts and the temperature have no sheet label yet: the sheet
+   * lists a text row as a material's name and a quantity in its own
+   * units, which a temperature is not */
   { .element = "material-specification", .kind = HL_FIELD_TEXT, SHELL (material_spec),
     TEXT_SIZE (HlShellInputs, material_spec), .label = "Material specification",
-    .report = "Material specification", .sheet = "Material specification" },
+    .report = "Material specification" },
   { .element = "allowable-stress-source", .kind = HL_FIELD_TEXT, SHELL (allowable_source),
     TEXT_SIZE (HlShellInputs, allowable_source), .label = "Source of the allowable stress",
-    .report = "Source of the allowable stress", .sheet = "Source of the allowable stress" },
+    .report = "Source of the allowable stress" },
   { .element = "thin-radius-basis", .kind = HL_FIELD_CHOICE, SHELL (thin_basis), .default_value = HL_BASIS_MEAN,
     .report = "Thin-wall radius basis", .sheet = N_("Thin-wall radius basis"), .choices = basis_choices },
   /* the thin-wall error is computed to about 1e-12 relative; below
@@ -218,7 +221,7 @@ static const HlField fields[] = {
     .label = "Design basis", .report = "Design basis", .sheet = "Design basis", .choices = design_basis_choices },
   { .element = "code-edition", .kind = HL_FIELD_TEXT, SHELL (code_edition), TEXT_SIZE (HlShellInputs, code_edition),
     .label = "Code edition", .tooltip = "Shown on every clause, e.g. the year of the edition",
-    .report = "Code edition", .sheet = "Code edition" },
+    .report = "Code edition" },
 };
 
 guint

@@ -96,7 +96,13 @@ input_field (GString             *out,
 
   if (f->report == NULL || (f->is_size && f->size_kind != in->size_kind))
     return;
-  if (f->kind == HL_FIELD_TEXT)
+  if (f->kind == HL_FIELD_TEXT && f->owner == HL_FIELD_OF_SHELL)
+    {
+      g_autofree char *text = hl_report_escape_line (slot);
+
+      g_string_append_printf (out, "  %-35s%s\n", f->report, text[0] ? text : "(not given)");
+    }
+  else if (f->kind == HL_FIELD_TEXT)
     {
       /* a material row: its name, with its id */
       g_autofree char *text = hl_report_escape_line (slot);

@@ -228,6 +228,12 @@ test_text_report (void)
   g_assert_null (strstr (text, "ADEQUATE"));
   g_assert_nonnull (strstr (text, "new wall, with no corrosion allowance"));
   g_assert_nonnull (strstr (text, "Required thickness, ASME VIII-1 (incl. corrosion allowance)"));
+  g_assert_nonnull (strstr (text, "Pressure in the code formulas: internal design pressure alone"));
+  /* the default design temperature, 20 °C, as entered and in °C (not
+   * as a stress) */
+  g_assert_nonnull (strstr (text, "Design temperature"));
+  g_assert_nonnull (strstr (text, "= " "            20 \xc2\xb0" "C\n"));
+  g_assert_nonnull (strstr (text, "Material specification             (not given)\n"));
 }
 
 int
