@@ -191,7 +191,7 @@ static const HlField fields[] = {
     .min_si = 0.1, .max_si = 1.0,
     .range_message = N_("must be greater than 0 and at most 1, and at least 0.1 "
                         "(weld joint efficiencies tabulate from 0.45 to 1)"),
-    .default_value = 1.0, .label = N_("Joint efficiency"), .report = "Joint efficiency E",
+    .default_value = 1.0, .label = N_("Joint efficiency"), .report = "Joint efficiency Ej",
     .sheet = N_("Weld joint efficiency") },
   /* the texts and the temperature have no sheet label yet: the sheet
    * lists a text row as a material's name and a quantity in its own
