@@ -117,12 +117,13 @@ static const HlField fields[] = {
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-9, .max_si = MAX_LENGTH_M, .min_text = "1 nm",
     .max_text = "100 km", .why_min = "a few atoms are no tolerance; 0 means none", .default_value = 0,
     .default_unit = "mm", .label = "Mill undertolerance", .report = "Mill undertolerance (length)",
-    .sheet = "Mill undertolerance (length)" },
+    .sheet = "Mill undertolerance (length)", .since_minor = 2 },
   { .element = "mill-undertolerance-percent", .kind = HL_FIELD_PERCENT, SHELL (mill_tolerance_percent),
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-5, .max_si = 0.5, .max_exclusive = TRUE,
     .min_text = "0.001 %", .max_text = "50 %", .why_min = "a smaller tolerance than the inputs' own precision; 0 means none",
     .default_value = 0, .default_unit = "%", .label = "Mill undertolerance (% of nominal)",
-    .report = "Mill undertolerance (% of nominal)", .sheet = "Mill undertolerance (% of nominal)" },
+    .report = "Mill undertolerance (% of nominal)", .sheet = "Mill undertolerance (% of nominal)",
+    .since_minor = 2 },
   /* the results are linear in the pressure, so a small one loses nothing
    * until the stresses near the subnormal doubles; 1 µPa is far below any
    * gauge and far above them.  10 GPa is above the yield strength of any
@@ -146,7 +147,7 @@ static const HlField fields[] = {
     .default_value = FALSE, .label = "External pressure always coincident",
     .tooltip = "Yes only when the outside pressure can never be lost while the inside one acts",
     .report = "External pressure always acts", .sheet = "External pressure always acts",
-    .choices = yes_no_choices },
+    .choices = yes_no_choices, .since_minor = 2 },
   /* recorded, not used: the allowable is entered at this temperature.
    * Liquid helium service starts near 4 K; above 1 500 °C steel melts
    * (from memory); between them lie all metal shells. */
@@ -154,7 +155,7 @@ static const HlField fields[] = {
     .min_si = 1.0, .max_si = 1773.15, .min_text = "1 K", .max_text = "1500 °C",
     .why_min = "absolute zero is 0 K (-273.15 °C)", .default_value = 20, .default_unit = "\xc2\xb0""C",
     .label = "Design temperature", .tooltip = "The allowable stress is the one at this temperature",
-    .report = "Design temperature" },
+    .report = "Design temperature", .since_minor = 2 },
   /* the material's rows; their defaults are those of hl_material_default() */
   { .element = "name", .kind = HL_FIELD_TEXT, MATERIAL (name), TEXT_SIZE (HlMaterial, name), .label = N_("Name"), .report = "Material",
     .sheet = N_("Material") },
@@ -198,10 +199,10 @@ static const HlField fields[] = {
    * units, which a temperature is not */
   { .element = "material-specification", .kind = HL_FIELD_TEXT, SHELL (material_spec),
     TEXT_SIZE (HlShellInputs, material_spec), .label = "Material specification",
-    .report = "Material specification" },
+    .report = "Material specification", .since_minor = 2 },
   { .element = "allowable-stress-source", .kind = HL_FIELD_TEXT, SHELL (allowable_source),
     TEXT_SIZE (HlShellInputs, allowable_source), .label = "Source of the allowable stress",
-    .report = "Source of the allowable stress" },
+    .report = "Source of the allowable stress", .since_minor = 2 },
   { .element = "thin-radius-basis", .kind = HL_FIELD_CHOICE, SHELL (thin_basis), .default_value = HL_BASIS_MEAN,
     .report = "Thin-wall radius basis", .sheet = N_("Thin-wall radius basis"), .choices = basis_choices },
   /* the thin-wall error is computed to about 1e-12 relative; below
@@ -218,10 +219,11 @@ static const HlField fields[] = {
     .default_value = HL_CRITERION_VON_MISES, .report = "Sizing criterion (Lame-based)",
     .sheet = N_("Sizing criterion"), .choices = criterion_choices },
   { .element = "design-basis", .kind = HL_FIELD_CHOICE, SHELL (design_basis), .default_value = HL_DESIGN_BASIS_UG27,
-    .label = "Design basis", .report = "Design basis", .sheet = "Design basis", .choices = design_basis_choices },
+    .label = "Design basis", .report = "Design basis", .sheet = "Design basis", .choices = design_basis_choices,
+    .since_minor = 2 },
   { .element = "code-edition", .kind = HL_FIELD_TEXT, SHELL (code_edition), TEXT_SIZE (HlShellInputs, code_edition),
     .label = "Code edition", .tooltip = "Shown on every clause, e.g. the year of the edition",
-    .report = "Code edition" },
+    .report = "Code edition", .since_minor = 2 },
 };
 
 guint

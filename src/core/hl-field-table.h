@@ -66,6 +66,7 @@ typedef struct
   const char          *report;       /* the text report's label (English) */
   const char          *sheet;        /* the sheet's label, N_() */
   const HlFieldChoice *choices;      /* ends with a NULL word */
+  guint                since_minor;  /* the minor format version that added it (0: 1.0) */
 } HlField;
 
 guint           hl_field_count         (void);

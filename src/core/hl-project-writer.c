@@ -188,29 +188,26 @@ put_built_in_copies (GString         *out,
   return any;
 }
 
-/* The design-check inputs are format 1.2; a file that gives none of
- * them (all at the reader's default) is still readable as 1.0 or 1.1.
- * The verdict measure a file leaves out is "both" from 1.2 on, also in
- * older files: the hoop measure they implied called thick barrels thin
- * (issue 10), so they open with the stricter verdict. */
+/* A row of the field table added in format 1.2 (the design check's
+ * inputs) that differs from the reader's default needs 1.2; without
+ * one the file is still readable as 1.0 or 1.1.  The verdict measure a
+ * file leaves out is "both" from 1.2 on, also in older files: the hoop
+ * measure they implied called thick barrels thin (issue 10), so they
+ * open with the stricter verdict. */
 static gboolean
 uses_format_1_2 (const HlProject *project)
 {
-  static const char *const elements[] = {
-    "design-basis", "design-temperature", "material-specification", "allowable-stress-source",
-    "mill-undertolerance", "mill-undertolerance-percent", "code-edition", "external-pressure-coincident",
-  };
-
   for (guint i = 0; i < project->shells->len; i++)
     {
       const HlShellInputs *s = &g_array_index (project->shells, HlShellInputs, i);
       HlShellInputs d = hl_reader_shell_default (s->id);
 
-      for (guint k = 0; k < G_N_ELEMENTS (elements); k++)
+      for (guint k = 0; k < hl_field_count (); k++)
         {
-          const HlField *f = hl_field_find (HL_FIELD_OF_SHELL, elements[k]);
+          const HlField *f = hl_field_nth (k);
 
-          if (!hl_field_equal (f, hl_field_cslot (f, s), hl_field_cslot (f, &d)))
+          if (f->owner == HL_FIELD_OF_SHELL && f->since_minor >= 2
+              && !hl_field_equal (f, hl_field_cslot (f, s), hl_field_cslot (f, &d)))
             return TRUE;
         }
     }
