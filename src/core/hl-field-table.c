@@ -47,6 +47,9 @@ static const HlFieldChoice measure_choices[] = {
   { "hoop", HL_MEASURE_HOOP, N_("Hoop stress"), "hoop stress", N_("hoop stress"), NULL },
   { "equivalent", HL_MEASURE_EQUIVALENT, N_("Equivalent stress"), "equivalent (von Mises)",
     N_("von Mises stress"), NULL },
+  /* format 1.2: each error within the tolerance */
+  { "both", HL_MEASURE_BOTH, "Hoop and von Mises stress", "hoop and von Mises, each", "hoop and von Mises stress",
+    NULL },
   { NULL, 0, NULL, NULL, NULL, NULL },
 };
 
@@ -54,6 +57,24 @@ static const HlFieldChoice measure_choices[] = {
 static const HlFieldChoice criterion_choices[] = {
   { "von-mises", HL_CRITERION_VON_MISES, N_("von Mises"), "von Mises", NULL, NULL },
   { "tresca", HL_CRITERION_TRESCA, N_("Tresca"), "Tresca", NULL, NULL },
+  { NULL, 0, NULL, NULL, NULL, NULL },
+};
+
+/* names of published rules, not translated */
+static const HlFieldChoice design_basis_choices[] = {
+  { "asme-ug27", HL_DESIGN_BASIS_UG27, "ASME VIII-1 UG-27 and Appendix 1-1", "ASME VIII-1 UG-27 + App. 1-1",
+    "ASME VIII-1 UG-27 + App. 1-1", NULL },
+  { "en13445", HL_DESIGN_BASIS_EN13445, "EN 13445-3 7.4", "EN 13445-3 7.4", "EN 13445-3 7.4", NULL },
+  { "lame", HL_DESIGN_BASIS_LAME, "Lamé, elastic, sizing criterion", "Lame elastic (sizing criterion)",
+    "Lamé elastic (sizing criterion)", NULL },
+  { "thin-wall", HL_DESIGN_BASIS_THIN, "Thin wall (membrane)", "thin wall (membrane)", "thin wall (membrane)",
+    NULL },
+  { NULL, 0, NULL, NULL, NULL, NULL },
+};
+
+static const HlFieldChoice yes_no_choices[] = {
+  { "no", FALSE, "No", "no", "no", NULL },
+  { "yes", TRUE, "Yes", "yes", "yes", NULL },
   { NULL, 0, NULL, NULL, NULL, NULL },
 };
 
@@ -87,6 +108,22 @@ static const HlField fields[] = {
     .max_text = "100 km", .why_min = N_("a few atoms are no allowance; 0 means none"), .default_value = 0,
     .default_unit = "mm", .label = N_("Corrosion allowance"), .report = N_("Corrosion allowance"),
     .sheet = N_("Corrosion allowance") },
+  /* Mill undertolerance, format 1.2: as a length or as a percentage of
+   * the nominal wall (12.5 % for seamless pipe, common practice), or
+   * both when a product standard says "whichever is greater"; the
+   * larger takes.  The bounds are the allowance's; half the wall is
+   * far beyond any product standard (common practice) and a slip. */
+  { .element = "mill-undertolerance", .kind = HL_FIELD_LENGTH, SHELL (mill_tolerance),
+    .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-9, .max_si = MAX_LENGTH_M, .min_text = "1 nm",
+    .max_text = "100 km", .why_min = "a few atoms are no tolerance; 0 means none", .default_value = 0,
+    .default_unit = "mm", .label = "Mill undertolerance", .report = "Mill undertolerance (length)",
+    .sheet = "Mill undertolerance (length)", .since_minor = 2 },
+  { .element = "mill-undertolerance-percent", .kind = HL_FIELD_PERCENT, SHELL (mill_tolerance_percent),
+    .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-5, .max_si = 0.5, .max_exclusive = TRUE,
+    .min_text = "0.001 %", .max_text = "50 %", .why_min = "a smaller tolerance than the inputs' own precision; 0 means none",
+    .default_value = 0, .default_unit = "%", .label = "Mill undertolerance (% of nominal)",
+    .report = "Mill undertolerance (% of nominal)", .sheet = "Mill undertolerance (% of nominal)",
+    .since_minor = 2 },
   /* the results are linear in the pressure, so a small one loses nothing
    * until the stresses near the subnormal doubles; 1 µPa is far below any
    * gauge and far above them.  10 GPa is above the yield strength of any
@@ -104,6 +141,21 @@ static const HlField fields[] = {
     .max_text = "10 GPa", .why_min = N_("no gauge reads less; 0 means none"), .default_value = 0,
     .default_unit = "bar", .label = N_("External pressure"), .report = N_("External pressure (gauge)"),
     .sheet = N_("External pressure (gauge)") },
+  /* format 1.2: whether the code formulas may count on the external
+   * pressure; off, they take the internal design pressure alone */
+  { .element = "external-pressure-coincident", .kind = HL_FIELD_CHOICE, SHELL (external_coincident),
+    .default_value = FALSE, .label = "External pressure always coincident",
+    .tooltip = "Yes only when the outside pressure can never be lost while the inside one acts",
+    .report = "External pressure always acts", .sheet = "External pressure always acts",
+    .choices = yes_no_choices, .since_minor = 2 },
+  /* recorded, not used: the allowable is entered at this temperature.
+   * Liquid helium service starts near 4 K; above 1 500 °C steel melts
+   * (from memory); between them lie all metal shells. */
+  { .element = "design-temperature", .kind = HL_FIELD_TEMPERATURE, SHELL (design_temperature), .bounded = TRUE,
+    .min_si = 1.0, .max_si = 1773.15, .min_text = "1 K", .max_text = "1500 °C",
+    .why_min = "absolute zero is 0 K (-273.15 °C)", .default_value = 20, .default_unit = "\xc2\xb0""C",
+    .label = "Design temperature", .tooltip = "The allowable stress is the one at this temperature",
+    .report = "Design temperature", .since_minor = 2 },
   /* the material's rows; their defaults are those of hl_material_default() */
   { .element = "name", .kind = HL_FIELD_TEXT, MATERIAL (name), TEXT_SIZE (HlMaterial, name), .label = N_("Name"), .report = "Material",
     .sheet = N_("Material") },
@@ -140,8 +192,17 @@ static const HlField fields[] = {
     .min_si = 0.1, .max_si = 1.0,
     .range_message = N_("must be greater than 0 and at most 1, and at least 0.1 "
                         "(weld joint efficiencies tabulate from 0.45 to 1)"),
-    .default_value = 1.0, .label = N_("Joint efficiency"), .report = "Joint efficiency E",
+    .default_value = 1.0, .label = N_("Joint efficiency"), .report = "Joint efficiency Ej",
     .sheet = N_("Weld joint efficiency") },
+  /* the texts and the temperature have no sheet label yet: the sheet
+   * lists a text row as a material's name and a quantity in its own
+   * units, which a temperature is not */
+  { .element = "material-specification", .kind = HL_FIELD_TEXT, SHELL (material_spec),
+    TEXT_SIZE (HlShellInputs, material_spec), .label = "Material specification",
+    .report = "Material specification", .since_minor = 2 },
+  { .element = "allowable-stress-source", .kind = HL_FIELD_TEXT, SHELL (allowable_source),
+    TEXT_SIZE (HlShellInputs, allowable_source), .label = "Source of the allowable stress",
+    .report = "Source of the allowable stress", .since_minor = 2 },
   { .element = "thin-radius-basis", .kind = HL_FIELD_CHOICE, SHELL (thin_basis), .default_value = HL_BASIS_MEAN,
     .report = "Thin-wall radius basis", .sheet = N_("Thin-wall radius basis"), .choices = basis_choices },
   /* the thin-wall error is computed to about 1e-12 relative; below
@@ -152,11 +213,17 @@ static const HlField fields[] = {
     .default_unit = "%", .label = N_("Tolerance"), .report = "Thin-wall tolerance",
     .sheet = N_("Thin-wall tolerance") },
   { .element = "verdict-measure", .kind = HL_FIELD_CHOICE, SHELL (verdict_measure),
-    .default_value = HL_MEASURE_HOOP, .report = "Verdict measure", .sheet = N_("Verdict measure"),
+    .default_value = HL_MEASURE_BOTH, .report = "Verdict measure", .sheet = N_("Verdict measure"),
     .choices = measure_choices },
   { .element = "sizing-criterion", .kind = HL_FIELD_CHOICE, SHELL (sizing_criterion),
     .default_value = HL_CRITERION_VON_MISES, .report = "Sizing criterion (Lame-based)",
     .sheet = N_("Sizing criterion"), .choices = criterion_choices },
+  { .element = "design-basis", .kind = HL_FIELD_CHOICE, SHELL (design_basis), .default_value = HL_DESIGN_BASIS_UG27,
+    .label = "Design basis", .report = "Design basis", .sheet = "Design basis", .choices = design_basis_choices,
+    .since_minor = 2 },
+  { .element = "code-edition", .kind = HL_FIELD_TEXT, SHELL (code_edition), TEXT_SIZE (HlShellInputs, code_edition),
+    .label = "Code edition", .tooltip = "Shown on every clause, e.g. the year of the edition",
+    .report = "Code edition", .since_minor = 2 },
 };
 
 guint
@@ -227,6 +294,8 @@ hl_field_quantity_kind (const HlField *field)
       return HL_KIND_MODULUS;
     case HL_FIELD_PERCENT:
       return HL_KIND_PERCENT;
+    case HL_FIELD_TEMPERATURE:
+      return HL_KIND_TEMPERATURE;
     case HL_FIELD_RATIO:
     case HL_FIELD_CHOICE:
     case HL_FIELD_TEXT:

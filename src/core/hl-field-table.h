@@ -23,6 +23,7 @@ typedef enum
   HL_FIELD_PERCENT,  /* a quantity in %, unit optional in the file */
   HL_FIELD_CHOICE,   /* an enum, one of the row's words */
   HL_FIELD_TEXT,     /* char[] */
+  HL_FIELD_TEMPERATURE, /* a quantity in °C, K or °F (SI kelvin) */
 } HlFieldKind;
 
 typedef enum { HL_FIELD_OF_SHELL, HL_FIELD_OF_MATERIAL } HlFieldOwner;
@@ -65,6 +66,7 @@ typedef struct
   const char          *report;       /* the text report's label (English) */
   const char          *sheet;        /* the sheet's label, N_() */
   const HlFieldChoice *choices;      /* ends with a NULL word */
+  guint                since_minor;  /* the minor format version that added it (0: 1.0) */
 } HlField;
 
 guint           hl_field_count         (void);

@@ -479,6 +479,17 @@ read_shell (HlReader    *rd,
     hl_form_from_string (form, &s.form);
   if (ends != NULL)
     hl_ends_from_string (ends, &s.ends);
+  /* files before format 1.2 wrote ends="closed" on every sphere; a
+   * sphere has none, so the attribute is dropped, with a word when it
+   * said something else */
+  if (s.form == HL_FORM_SPHERE && s.ends != HL_ENDS_CLOSED)
+    {
+      if (rd->warnings != NULL)
+        g_ptr_array_add (rd->warnings,
+                         g_strdup_printf ("%s:%ld: shell “%s”: ends=\"%s\" ignored: a sphere has no ends",
+                                          rd->name, xmlGetLineNo (n), id, ends));
+      s.ends = HL_ENDS_CLOSED;
+    }
 
   material = reader_material (rd, project, s.material_ref);
   if (material == NULL)

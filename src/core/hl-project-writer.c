@@ -140,8 +140,12 @@ put_shell (GString             *out,
   g_autofree char *id = escape (s->id, TRUE);
   HlShellInputs d = hl_reader_shell_default (s->id);
 
-  g_string_append_printf (out, "  <shell id=\"%s\" form=\"%s\" ends=\"%s\">\n", id,
-                          hl_form_to_string (s->form), hl_ends_to_string (s->ends));
+  /* a sphere has no ends (format 1.2 leaves the attribute out) */
+  if (s->form == HL_FORM_SPHERE)
+    g_string_append_printf (out, "  <shell id=\"%s\" form=\"%s\">\n", id, hl_form_to_string (s->form));
+  else
+    g_string_append_printf (out, "  <shell id=\"%s\" form=\"%s\" ends=\"%s\">\n", id,
+                            hl_form_to_string (s->form), hl_ends_to_string (s->ends));
   for (guint i = 0; i < hl_field_count (); i++)
     {
       const HlField *f = hl_field_nth (i);
@@ -184,6 +188,32 @@ put_built_in_copies (GString         *out,
   return any;
 }
 
+/* A row of the field table added in format 1.2 (the design check's
+ * inputs) that differs from the reader's default needs 1.2; without
+ * one the file is still readable as 1.0 or 1.1.  The verdict measure a
+ * file leaves out is "both" from 1.2 on, also in older files: the hoop
+ * measure they implied called thick barrels thin (issue 10), so they
+ * open with the stricter verdict. */
+static gboolean
+uses_format_1_2 (const HlProject *project)
+{
+  for (guint i = 0; i < project->shells->len; i++)
+    {
+      const HlShellInputs *s = &g_array_index (project->shells, HlShellInputs, i);
+      HlShellInputs d = hl_reader_shell_default (s->id);
+
+      for (guint k = 0; k < hl_field_count (); k++)
+        {
+          const HlField *f = hl_field_nth (k);
+
+          if (f->owner == HL_FIELD_OF_SHELL && f->since_minor >= 2
+              && !hl_field_equal (f, hl_field_cslot (f, s), hl_field_cslot (f, &d)))
+            return TRUE;
+        }
+    }
+  return FALSE;
+}
+
 char *
 hl_project_to_xml (const HlProject *project)
 {
@@ -220,7 +250,9 @@ hl_project_to_xml (const HlProject *project)
     }
   g_string_append (out, "</hoopline-project>\n");
   /* the lowest version that holds what was written */
-  if (copies)
+  if (uses_format_1_2 (project))
+    g_string_insert (out, format_at, ".2");
+  else if (copies)
     g_string_insert (out, format_at, ".1");
   return g_string_free (out, FALSE);
 }

@@ -123,7 +123,8 @@ shell_difference (const HlShellInputs *a,
     return g_strdup ("name");
   if (a->form != b->form)
     return g_strdup ("form");
-  if (a->ends != b->ends)
+  /* a sphere has no ends: the member is not saved for it */
+  if (a->form != HL_FORM_SPHERE && a->ends != b->ends)
     return g_strdup ("ends");
   if (a->size_kind != b->size_kind || !hl_quantity_equal (a->size, b->size))
     return g_strdup (hl_size_kind_to_element (a->size_kind));

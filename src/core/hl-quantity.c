@@ -25,7 +25,7 @@ hl_quantity_si (HlQuantity     q,
 {
   double factor = hl_unit_factor (kind, q.unit);
 
-  return factor > 0.0 ? q.value * factor : NAN;
+  return factor > 0.0 ? q.value * factor + hl_unit_offset (kind, q.unit) : NAN;
 }
 
 HlQuantity
@@ -37,7 +37,8 @@ hl_quantity_convert (HlQuantity      q,
 
   if (to <= 0.0)
     return q;
-  return hl_quantity_make (hl_quantity_si (q, kind) / to, hl_unit_canonical (kind, unit));
+  return hl_quantity_make ((hl_quantity_si (q, kind) - hl_unit_offset (kind, unit)) / to,
+                           hl_unit_canonical (kind, unit));
 }
 
 gboolean

@@ -7,6 +7,7 @@
 #include "hl-report.h"
 #include "hl-field-table.h"
 #include "hl-result-rows.h"
+#include "hl-design-check.h"
 
 #include <math.h>
 
@@ -68,6 +69,10 @@ input_line (GString        *out,
       converted = hl_format_significant (si * 100, 8);
       unit = "%";
       break;
+    case HL_KIND_TEMPERATURE:
+      converted = hl_format_significant (si - 273.15, 8);
+      unit = "\xc2\xb0""C";
+      break;
     default:
       converted = hl_format_significant (si / 1e6, 8);
       unit = "MPa";
@@ -91,7 +96,13 @@ input_field (GString             *out,
 
   if (f->report == NULL || (f->is_size && f->size_kind != in->size_kind))
     return;
-  if (f->kind == HL_FIELD_TEXT)
+  if (f->kind == HL_FIELD_TEXT && f->owner == HL_FIELD_OF_SHELL)
+    {
+      g_autofree char *text = hl_report_escape_line (slot);
+
+      g_string_append_printf (out, "  %-35s%s\n", f->report, text[0] ? text : "(not given)");
+    }
+  else if (f->kind == HL_FIELD_TEXT)
     {
       /* a material row: its name, with its id */
       g_autofree char *text = hl_report_escape_line (slot);
@@ -141,11 +152,20 @@ put_methods (GString *out)
     "  First yield: proportional loading to the yield strength at the peak.\n"
     "  Plastic collapse: Hill (1950), perfectly plastic, von Mises: cylinder\n"
     "    (closed ends) 2/sqrt(3) sy ln k, sphere 2 sy ln k.\n"
-    "  Allowable pressure and required thickness: thin-wall hoop = S E; Lamé peak\n"
-    "    equivalent stress = S E (root found to 1e-12 relative); ASME BPVC VIII-1\n"
-    "    UG-27(c)(1), (c)(2), (d) and Appendix 1-1; EN 13445-3 7.4.2, 7.4.3;\n"
-    "    Barlow P = 2 S t / D.  Code formulas are used inside their ranges only.\n"
-    "  The analysis wall has the corrosion allowance removed from the inside.\n");
+    "  Allowable pressure and required thickness: thin-wall hoop = S Ej; Lamé peak\n"
+    "    equivalent stress = S Ej (root found to 1e-12 relative); ASME BPVC VIII-1\n"
+    "    UG-27(c)(1), (c)(2), (d) and Appendix 1-1; EN 13445-3 7.4.2, 7.4.3 (f z);\n"
+    "    Barlow P = 2 S Ej t / D.  Code formulas are used inside their ranges only.\n"
+    "  Ej is the weld joint efficiency (z, the joint coefficient, in EN words);\n"
+    "    E alone is the elastic modulus.\n"
+    "  First yield, plastic collapse and the allowable pressures: the internal\n"
+    "    pressure raised, the external held at its value.\n"
+    "  Code formulas take the internal design pressure alone unless the external\n"
+    "    pressure is stated to be always coincident; under net external pressure\n"
+    "    no internal-pressure sizing applies (buckling governs, not checked here).\n"
+    "  The analysis wall has the corrosion allowance and the mill undertolerance\n"
+    "    removed from the inside; the allowable stress is the one at the design\n"
+    "    temperature, as entered.\n");
 }
 
 static char *
@@ -166,7 +186,7 @@ put_results (GString          *out,
   g_autoptr(GArray) rows_new = hl_result_rows (new_wall);
   g_autoptr(GArray) rows_cor = hl_result_rows (corroded);
 
-  rule (out, "Results (new wall | corroded wall)");
+  rule (out, "Results (new wall, with no corrosion allowance | corroded wall)");
   for (guint i = 0; i < rows_cor->len; i++)
     {
       const HlResultRow *rn = &g_array_index (rows_new, HlResultRow, i);
@@ -195,11 +215,90 @@ put_results (GString          *out,
 }
 
 static void
+put_design_check (GString          *out,
+                  const HlSolution *s,
+                  HlUnitSystem      system)
+{
+  const HlDesignCheck *c = &s->check;
+  gboolean us = system == HL_UNIT_SYSTEM_US;
+  const char *lu = us ? "in" : "mm", *pu = us ? "psi" : "MPa";
+  double lf = us ? 0.0254 : 1e-3, pf = us ? 6894.757293168 : 1e6;
+  g_autofree char *nom = hl_format_significant (c->nominal / lf, 6);
+  g_autofree char *ca = hl_format_significant (c->corrosion / lf, 6);
+  g_autofree char *mill = hl_report_escape_line (c->mill_text);
+  g_autofree char *av = hl_format_significant (c->available / lf, 6);
+  g_autofree char *verdict = hl_report_escape_line (c->verdict_text);
+  g_autofree char *governing = hl_report_escape_line (c->governing);
+  g_autofree char *edition = hl_report_escape_line (s->inputs.code_edition);
+
+  rule (out, "Design check (corroded wall)");
+  g_string_append_printf (out, "  Verdict: %s\n", hl_check_result_word (c->verdict));
+  g_string_append_printf (out, "  %s\n", verdict);
+  g_string_append_printf (out, "  Design basis: %s%s%s%s; governing: %s\n", hl_design_basis_name (c->basis),
+                          edition[0] ? " (edition " : "", edition, edition[0] ? ")" : "", governing);
+  if (isfinite (c->utilisation))
+    {
+      g_autofree char *u = hl_format_significant (100 * c->utilisation, 4);
+
+      g_string_append_printf (out, "  Utilisation: %s %%\n", u);
+    }
+  else
+    g_string_append (out, "  Utilisation: n/a\n");
+  g_string_append_printf (out, "  Available thickness = nominal %s - corrosion %s - mill %s = %s %s\n", nom, ca,
+                          mill, av, lu);
+  g_string_append_printf (out, "  Pressure in the code formulas: %s\n",
+                          s->code_coincident ? "internal - external (external always coincident)"
+                                             : "internal design pressure alone");
+  g_string_append (out, "  ");
+  put_padded (out, "Method", 20);
+  g_string_append_printf (out, "%12s %12s %12s %12s %8s  %s\n", "req. t", "avail. t", "MAWP", "design P", "util.",
+                          "result");
+  for (int m = 0; m < HL_N_METHODS; m++)
+    {
+      const HlMethodCheck *mc = &c->methods[m];
+      double u = isfinite (mc->utilisation_pressure) ? mc->utilisation_pressure : mc->utilisation_thickness;
+      g_autofree char *rq = isfinite (mc->required) ? hl_format_significant (mc->required / lf, 5) : g_strdup ("n/a");
+      g_autofree char *at = hl_format_significant (mc->available / lf, 5);
+      g_autofree char *mw = isfinite (mc->mawp) ? hl_format_significant (mc->mawp / pf, 5) : g_strdup ("n/a");
+      g_autofree char *dp = hl_format_significant (mc->design_pressure / pf, 5);
+      g_autofree char *ut = isfinite (u) ? g_strdup_printf ("%.1f %%", 100 * u) : g_strdup ("n/a");
+      g_autofree char *reason = hl_report_escape_line (mc->reason);
+      g_autofree char *clause = hl_report_escape_line (mc->clause);
+
+      g_string_append (out, "  ");
+      put_padded (out, mc->name, 20);
+      g_string_append_printf (out, "%12s %12s %12s %12s %8s  %s", rq, at, mw, dp, ut, hl_check_result_word (mc->result));
+      if (reason[0] != '\0')
+        g_string_append_printf (out, ": %s", reason);
+      g_string_append_printf (out, "   [%s]\n", clause);
+    }
+  g_string_append_printf (out, "  (lengths in %s, pressures in %s; required t is nominal, allowances included)\n", lu,
+                          pu);
+  if (c->bursts || c->yields)
+    g_string_append_printf (out, "  DANGER: %s\n", c->bursts ? "the wall would burst" : "the wall yields at the bore");
+}
+
+static const char *
+measure_word (HlVerdictMeasure m)
+{
+  switch (m)
+    {
+    case HL_MEASURE_EQUIVALENT:
+      return "von Mises";
+    case HL_MEASURE_BOTH:
+      return "hoop and von Mises, each";
+    case HL_MEASURE_HOOP:
+    default:
+      return "hoop";
+    }
+}
+
+static void
 put_verdict (GString          *out,
              const HlSolution *s,
              HlUnitSystem      system)
 {
-  gboolean eq = s->inputs.verdict_measure == HL_MEASURE_EQUIVALENT;
+  gboolean eq = s->thin_governing == HL_MEASURE_EQUIVALENT;
   HlResult err = eq ? s->thin_wall_error_equivalent : s->thin_wall_error;
   g_autofree char *mr = hl_format_significant (s->mean_ratio, 4);
   g_autofree char *tol = hl_format_significant (s->tolerance, 3);
@@ -214,19 +313,23 @@ put_verdict (GString          *out,
     }
   {
     g_autofree char *e = hl_format_significant (err.value, 3);
-    g_autofree char *e_abs = hl_format_significant (fabs (err.value), 3);
+
+    /* "ADEQUATE" says the formulas describe the stress, never that the
+     * wall holds: beside a failed design check the word is not used */
+    gboolean fails = s->check.verdict != HL_CHECK_PASS;
 
     g_string_append_printf (out,
-                            "  The thin-wall %s stress (%s radius basis) differs from the Lamé peak\n"
-                            "  by %s %%. The tolerance is %s %%, so the thin-wall formulas are %s\n"
-                            "  for this wall%s\n",
+                            "  Measure: %s (governing: %s).  The thin-wall %s stress (%s radius basis)\n"
+                            "  differs from the Lamé peak by %s %%. The tolerance is %s %%, so the wall is %s\n"
+                            "  and the thin-wall formulas %s%s\n",
+                            measure_word (s->inputs.verdict_measure), eq ? "von Mises" : "hoop",
                             eq ? "von Mises" : "hoop", hl_basis_to_string (s->inputs.thin_basis), e, tol,
-                            s->is_thin ? "ADEQUATE" : "NOT ADEQUATE",
+                            s->is_thin ? "THIN" : "THICK",
+                            s->is_thin ? (fails ? "describe its stresses, but the wall FAILS the design check"
+                                                : "are ADEQUATE for its stresses")
+                                       : "are NOT ADEQUATE",
                             s->is_thin ? "." : ": use the Lamé (thick-wall) results.");
-    if (err.value < 0)
-      g_string_append_printf (out, "  The thin-wall value is %s %% below the exact peak (unconservative).\n", e_abs);
-    else if (err.value > 0)
-      g_string_append_printf (out, "  The thin-wall value is %s %% above the exact peak (conservative).\n", e_abs);
+    g_string_append_printf (out, "  The thin-wall value %s.\n", s->thin_words);
   }
   g_string_append_printf (out, "  Mean radius / thickness = %s: the common rule of thumb (>= 10) is %s.\n", mr,
                           s->rule_of_thumb ? "met" : "not met");
@@ -273,6 +376,7 @@ hl_report_text (const HlProject  *project,
 
   put_inputs (out, &corroded->inputs);
   put_methods (out);
+  put_design_check (out, corroded, system);
   put_results (out, new_wall, corroded, system);
   put_verdict (out, corroded, system);
 

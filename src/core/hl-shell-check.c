@@ -171,8 +171,10 @@ check_quantity (const char     *field,
     }
   if (!isfinite (q.value))
     return say (N_("is not a finite number"));
-  si = kind == HL_KIND_RATIO ? q.value : q.value * factor;
-  if (si < 0.0)
+  /* a temperature in °C or °F has an offset; its lower bound is near
+   * absolute zero, so negative values are the bound's to judge */
+  si = kind == HL_KIND_RATIO ? q.value : hl_quantity_si (q, kind);
+  if (si < 0.0 && kind != HL_KIND_TEMPERATURE)
     return say (N_("must not be negative"));
   if (si == 0.0 && !zero_allowed)
     return say (N_("must be greater than zero"));
@@ -180,7 +182,7 @@ check_quantity (const char     *field,
     return check_kind_limits (si, kind, zero_allowed);
   if (si > bound->max_si)
     return say (N_("is unrealistically large (over %s)"), bound->max_text);
-  if (si > 0.0 && si < bound->min_si)
+  if ((si > 0.0 || kind == HL_KIND_TEMPERATURE) && si < bound->min_si)
     return say_reason (zero_allowed ? N_("is unrealistically small (under %s, other than 0: %s)")
                                     : N_("is unrealistically small (under %s: %s)"),
                        bound->min_text, bound->why_min);
@@ -242,6 +244,25 @@ check_radii (GPtrArray           *problems,
   else if (b_new / a_new > HL_MAX_RADIUS_RATIO)
     add (problems, "wall-thickness",
          say (N_("makes the outer radius more than 1000 times the bore radius (new wall): not a shell")));
+}
+
+/* What the design check needs besides each value in its bounds: a
+ * wall left after corrosion and mill undertolerance.  (A sphere's ends
+ * are not refused here: the member means nothing for a sphere, the
+ * writer leaves it out and the reader drops it with a warning.) */
+static void
+check_design_wall (GPtrArray           *problems,
+                   const HlShellInputs *in)
+{
+  double t = hl_quantity_si (in->wall_thickness, HL_KIND_LENGTH);
+  double c = hl_quantity_si (in->corrosion_allowance, HL_KIND_LENGTH);
+  double ml = hl_quantity_si (in->mill_tolerance, HL_KIND_LENGTH);
+  double mp = hl_quantity_si (in->mill_tolerance_percent, HL_KIND_PERCENT) * t;
+  double m = MAX (ml, mp);
+
+  if (m > 0.0 && t - c - m < HL_MIN_WALL_M)
+    add (problems, mp > ml ? "mill-undertolerance-percent" : "mill-undertolerance",
+         say ("with the corrosion allowance leaves less than 0.01 mm of wall"));
 }
 
 /* A name is one line: a line break in it could forge a line of the
@@ -329,6 +350,10 @@ hl_shell_inputs_check (const HlShellInputs *in)
         {
           if (strcmp (f->element, "name") == 0)
             check_name (problems, hl_field_cslot (f, in), f->owner == HL_FIELD_OF_MATERIAL);
+          else if (f->owner == HL_FIELD_OF_SHELL && strcmp (f->element, "material-ref") != 0
+                   && hl_text_has_control (hl_field_cslot (f, in), FALSE))
+            add (problems, f->element,
+                 say ("holds a control character (a line break, tab or the like): it is one line of text"));
           continue;
         }
       msg = field_check (f, hl_field_cslot (f, in));
@@ -336,6 +361,8 @@ hl_shell_inputs_check (const HlShellInputs *in)
         lengths_ok = FALSE;
       add (problems, f->element, msg);
     }
+  if (problems->len == 0)
+    check_design_wall (problems, in);
   return problems;
 }
 

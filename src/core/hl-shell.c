@@ -30,7 +30,9 @@ gboolean
 hl_shell_inputs_equal (const HlShellInputs *a,
                        const HlShellInputs *b)
 {
-  if (strcmp (a->id, b->id) != 0 || a->form != b->form || a->ends != b->ends || a->size_kind != b->size_kind
+  /* a sphere has no ends: the member is not part of its inputs */
+  if (strcmp (a->id, b->id) != 0 || a->form != b->form
+      || (a->form != HL_FORM_SPHERE && a->ends != b->ends) || a->size_kind != b->size_kind
       || !hl_material_equal (&a->material, &b->material))
     return FALSE;
   for (guint i = 0; i < hl_field_count (); i++)
@@ -156,6 +158,7 @@ HL_DEFINE_WORDS (hl_ends, HlEnds, name_of, value_of, ends_names)
 HL_DEFINE_WORDS (hl_basis, HlRadiusBasis, choice_word, choice_value, "thin-radius-basis")
 HL_DEFINE_WORDS (hl_measure, HlVerdictMeasure, choice_word, choice_value, "verdict-measure")
 HL_DEFINE_WORDS (hl_criterion, HlCriterion, choice_word, choice_value, "sizing-criterion")
+HL_DEFINE_WORDS (hl_design_basis, HlDesignBasis, choice_word, choice_value, "design-basis")
 
 /* the four size elements are rows of the field table */
 const char *

@@ -32,7 +32,18 @@ typedef enum
   HL_BASIS_OUTER,
 } HlRadiusBasis;
 
-typedef enum { HL_MEASURE_HOOP, HL_MEASURE_EQUIVALENT } HlVerdictMeasure;
+/* BOTH: thin when the hoop and the von Mises errors are each within the
+ * tolerance */
+typedef enum { HL_MEASURE_HOOP, HL_MEASURE_EQUIVALENT, HL_MEASURE_BOTH } HlVerdictMeasure;
+
+/* The rule that decides PASS or FAIL (hl-design-check.h) */
+typedef enum
+{
+  HL_DESIGN_BASIS_UG27,      /* ASME VIII-1 UG-27 with Appendix 1-1 */
+  HL_DESIGN_BASIS_EN13445,   /* EN 13445-3 7.4 */
+  HL_DESIGN_BASIS_LAME,      /* Lamé peak equivalent stress = S Ej */
+  HL_DESIGN_BASIS_THIN,      /* thin-wall membrane stress = S Ej */
+} HlDesignBasis;
 
 typedef enum { HL_CRITERION_VON_MISES, HL_CRITERION_TRESCA } HlCriterion;
 
@@ -58,6 +69,16 @@ typedef struct
   HlQuantity       thin_tolerance;      /* percent */
   HlVerdictMeasure verdict_measure;
   HlCriterion      sizing_criterion;
+  /* the design check (format 1.2) */
+  HlDesignBasis    design_basis;
+  HlQuantity       design_temperature;  /* recorded: S is entered at it */
+  char             material_spec[HL_NAME_MAX];
+  char             allowable_source[HL_NAME_MAX];
+  /* mill undertolerance as typed, either or both: the larger governs */
+  HlQuantity       mill_tolerance;          /* a length */
+  HlQuantity       mill_tolerance_percent;  /* of the nominal wall */
+  char             code_edition[HL_NAME_MAX];
+  gboolean         external_coincident; /* external pressure always acts with the internal */
 } HlShellInputs;
 
 /* Defaults of DESIGN.md §3: closed cylinder, no corrosion, no external
@@ -86,5 +107,7 @@ const char   *hl_measure_to_string    (HlVerdictMeasure m);
 gboolean      hl_measure_from_string  (const char *s, HlVerdictMeasure *out);
 const char   *hl_criterion_to_string  (HlCriterion c);
 gboolean      hl_criterion_from_string (const char *s, HlCriterion *out);
+const char   *hl_design_basis_to_string (HlDesignBasis b);
+gboolean      hl_design_basis_from_string (const char *s, HlDesignBasis *out);
 
 G_END_DECLS

@@ -49,6 +49,10 @@ error_excess (double   m,
 
   l = *sp->base;
   hl_lame_init (&l, l.form, l.ends, 1.0, b, l.pi, l.po, l.E, l.nu);
+  /* "both": the larger of the two errors must be within the tolerance */
+  if (sp->measure == HL_MEASURE_BOTH)
+    return MAX (fabs (hl_thin_wall_error (&l, sp->basis, HL_MEASURE_HOOP)),
+                fabs (hl_thin_wall_error (&l, sp->basis, HL_MEASURE_EQUIVALENT))) - sp->tolerance;
   return fabs (hl_thin_wall_error (&l, sp->basis, sp->measure)) - sp->tolerance;
 }
 

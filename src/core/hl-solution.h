@@ -5,6 +5,7 @@
 #pragma once
 
 #include "hl-lame.h"
+#include "hl-design-check.h"
 
 G_BEGIN_DECLS
 
@@ -36,6 +37,9 @@ typedef struct
   double a, b, t, k;
   double mean_ratio;            /* mean radius / thickness */
   double pi, po;
+  double mill;                  /* undertolerance removed with the allowance (m) */
+  double code_pressure;         /* what the code formulas took: pi, or pi - po */
+  gboolean code_coincident;     /* ... pi - po: the external pressure always acts */
   double allowable;             /* S Ej */
   double yield;
   double tolerance;             /* percent */
@@ -50,6 +54,8 @@ typedef struct
   HlResult lame_axial;
   HlResult thin_wall_error, thin_wall_error_equivalent;
   gboolean is_thin;             /* verdict of the chosen measure */
+  HlVerdictMeasure thin_governing; /* HOOP or EQUIVALENT: the error that decides */
+  char thin_words[120];         /* "underestimates the peak by 30.6 % (unconservative)" */
   gboolean rule_of_thumb;       /* mean radius / t >= 10 */
   HlResult ratio_for_tolerance;
   HlResult von_mises_max, tresca_max;
@@ -66,6 +72,9 @@ typedef struct
   HlResult barlow_pressure;
   const char *ug27_clause;      /* which formula governs, for the labels */
   const char *en13445_clause;
+  char ug27_source[160];        /* clause, edition and the pressure taken */
+  char en13445_source[160];
+  HlDesignCheck check;          /* PASS / FAIL, read by every output */
 
   GPtrArray *warnings;          /* char * */
 } HlSolution;

@@ -12,11 +12,15 @@
 #include "hl-shell-check.h"
 #include "hl-sizing.h"
 #include "hl-design-codes.h"
+#include "hl-number-format.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
 
 #define RULE_OF_THUMB_RATIO 10.0   /* common practice: R/t >= 10 is thin */
+/* until the external-pressure checks exist, no internal-pressure sizing
+ * stands in for them */
+#define BUCKLING_GOVERNS "buckling governs; see the external-pressure check"
 
 G_DEFINE_QUARK (hl-solve-error-quark, hl_solve_error)
 
@@ -89,6 +93,31 @@ fill_points (HlSolution *s)
     }
 }
 
+/* The thin-wall value against the Lamé peak in words, by magnitude:
+ * error e = 100 (thin - exact) / |exact|, so thin / exact is 1 + e/100
+ * for a positive peak and 1 - e/100 for a negative one (compression),
+ * where a positive error means a smaller magnitude. */
+static void
+thin_wording (char   *buf,
+              gsize   size,
+              double  error,
+              double  exact)
+{
+  double r = exact < 0 ? 1 - error / 100 : 1 + error / 100;
+  g_autofree char *by = hl_format_significant (100 * fabs (1 - r), 3);
+
+  if (!isfinite (error) || exact == 0.0)
+    g_strlcpy (buf, "cannot be compared with the Lamé peak", size);
+  else if (r < 0)
+    g_strlcpy (buf, "has the opposite sign of the Lamé peak (unconservative)", size);
+  else if (r < 1)
+    g_snprintf (buf, size, "underestimates the peak by %s %% (unconservative)", by);
+  else if (r > 1)
+    g_snprintf (buf, size, "overestimates the peak by %s %% (conservative)", by);
+  else
+    g_strlcpy (buf, "equals the peak", size);
+}
+
 static void
 solve_membrane_and_lame (HlSolution *s)
 {
@@ -100,7 +129,12 @@ solve_membrane_and_lame (HlSolution *s)
   double err_hoop, err_eq, chosen;
 
   s->thin_hoop = ok (hoop);
-  s->thin_axial = ok (hl_thin_axial (in->form, in->ends, s->lame.nu, hoop));
+  /* a sphere has no axis: neither the thin nor the Lamé axial stress
+   * exists (both tangential stresses are the hoop stress) */
+  if (in->form == HL_FORM_SPHERE)
+    s->thin_axial = na (N_("a sphere has two equal tangential stresses: see the hoop stress"));
+  else
+    s->thin_axial = ok (hl_thin_axial (in->form, in->ends, s->lame.nu, hoop));
   s->lame_hoop_inner = ok (inner.hoop);
   s->lame_hoop_outer = ok (outer.hoop);
   s->lame_radial_inner = ok (inner.radial);
@@ -114,8 +148,18 @@ solve_membrane_and_lame (HlSolution *s)
   err_eq = hl_thin_wall_error (&s->lame, in->thin_basis, HL_MEASURE_EQUIVALENT);
   s->thin_wall_error = isfinite (err_hoop) ? ok (err_hoop) : na (N_("no hoop stress under this load"));
   s->thin_wall_error_equivalent = isfinite (err_eq) ? ok (err_eq) : na (N_("no equivalent stress under this load"));
-  chosen = in->verdict_measure == HL_MEASURE_EQUIVALENT ? err_eq : err_hoop;
-  s->is_thin = isfinite (chosen) && fabs (chosen) <= s->tolerance;
+  /* "both": the larger error decides, and a missing one leaves the wall
+   * not shown to be thin */
+  if (in->verdict_measure == HL_MEASURE_EQUIVALENT
+      || (in->verdict_measure == HL_MEASURE_BOTH && !(fabs (err_hoop) >= fabs (err_eq))))
+    s->thin_governing = HL_MEASURE_EQUIVALENT;
+  else
+    s->thin_governing = HL_MEASURE_HOOP;
+  chosen = s->thin_governing == HL_MEASURE_EQUIVALENT ? err_eq : err_hoop;
+  s->is_thin = isfinite (chosen) && fabs (chosen) <= s->tolerance
+               && (in->verdict_measure != HL_MEASURE_BOTH || (isfinite (err_hoop) && isfinite (err_eq)));
+  thin_wording (s->thin_words, sizeof s->thin_words, chosen,
+                s->thin_governing == HL_MEASURE_HOOP ? hl_lame_peak_hoop (&s->lame) : 1.0);
   s->rule_of_thumb = s->mean_ratio >= RULE_OF_THUMB_RATIO;
 
   {
@@ -150,19 +194,23 @@ static void
 solve_yield_and_collapse (HlSolution *s)
 {
   const HlShellInputs *in = &s->inputs;
-  HlLame unit = s->lame;
-  gboolean internal = s->pi > 0.0 || s->po == 0.0;
-  double load, vm, tr;
+  double value;
+  const char *reason = NULL;
 
-  /* proportional loading: stresses scale with the load factor, so the
-   * first-yield factor is yield / peak.  With no load, internal alone. */
-  if (s->pi == 0.0 && s->po == 0.0)
-    hl_lame_init (&unit, in->form, in->ends, s->a, s->b, 1.0, 0.0, unit.E, unit.nu);
-  load = internal ? unit.pi : unit.po;
-  vm = hl_lame_peak_equivalent (&unit, HL_CRITERION_VON_MISES);
-  tr = hl_lame_peak_equivalent (&unit, HL_CRITERION_TRESCA);
-  s->first_yield_von_mises = vm > 0 ? ok (load * s->yield / vm) : na (N_("no stress under this load"));
-  s->first_yield_tresca = tr > 0 ? ok (load * s->yield / tr) : na (N_("no stress under this load"));
+  /* one load path for first yield, collapse and the allowable pressure:
+   * the internal pressure raised, the external held at its value */
+  if (s->pi == s->po && s->pi > 0.0)
+    {
+      s->first_yield_von_mises = na ("no deviatoric stress: the internal and external pressures are equal");
+      s->first_yield_tresca = s->first_yield_von_mises;
+    }
+  else
+    {
+      s->first_yield_von_mises = hl_lame_max_pressure (&s->lame, HL_CRITERION_VON_MISES, s->yield, &value, &reason)
+                                   ? ok (value) : na (reason);
+      s->first_yield_tresca = hl_lame_max_pressure (&s->lame, HL_CRITERION_TRESCA, s->yield, &value, &reason)
+                                ? ok (value) : na (reason);
+    }
 
   /* Hill (1950): perfectly plastic wall, internal pressure over the
    * external one */
@@ -182,6 +230,21 @@ solve_yield_and_collapse (HlSolution *s)
     s->plastic_collapse_tresca = ok (s->po + s->yield * log (s->k));
 }
 
+/* the clause with the edition the user names, and the pressure the
+ * formula took, for the labels of every output */
+static void
+code_source (const HlSolution *s,
+             char             *buf,
+             gsize             size,
+             const char       *clause)
+{
+  const char *edition = s->inputs.code_edition;
+
+  g_snprintf (buf, size, "%s%s%s%s; %s", clause, edition[0] ? " (" : "", edition, edition[0] ? ")" : "",
+              s->code_coincident ? "P = internal - external (external always coincident)"
+                                 : "P = internal design pressure alone");
+}
+
 static void
 solve_allowables (HlSolution *s)
 {
@@ -189,12 +252,16 @@ solve_allowables (HlSolution *s)
   gboolean outer_fixed = in->size_kind == HL_SIZE_OUTER_DIAMETER || in->size_kind == HL_SIZE_OUTER_RADIUS;
   double c = hl_quantity_si (in->corrosion_allowance, HL_KIND_LENGTH);
   double allow = s->allowable, net = s->pi - s->po;
+  gboolean net_external = s->po > s->pi;
   /* membrane capacity per unit radius-over-thickness: sigma = p R / (f t) */
   double f = in->form == HL_FORM_SPHERE ? 2.0 : 1.0;
   double alpha = in->thin_basis == HL_BASIS_INNER ? 0.0 : in->thin_basis == HL_BASIS_MEAN ? 0.5 : 1.0;
   double value;
   const char *reason = NULL;
 
+  /* the required thicknesses hold the corrosion allowance; the design
+   * check adds the mill undertolerance (a share of the nominal wall it
+   * finds) */
   if (!s->corroded)
     c = 0.0;
   s->mawp_thin = ok (s->po + f * allow * s->t / hl_thin_radius (in->thin_basis, s->a, s->b));
@@ -202,7 +269,9 @@ solve_allowables (HlSolution *s)
   /* thin required thickness with the entered radius fixed and the basis
    * radius moving with t: inner fixed Rb = a + alpha t, outer fixed
    * Rb = b - (1 - alpha) t */
-  if (!(net > 0))
+  if (net_external)
+    s->treq_thin = na (BUCKLING_GOVERNS);
+  else if (!(net > 0))
     s->treq_thin = na (N_("no net internal pressure (external-pressure rules apply, not checked)"));
   else if (outer_fixed)
     s->treq_thin = ok (net * s->b / (f * allow + (1 - alpha) * net) + c);
@@ -215,22 +284,31 @@ solve_allowables (HlSolution *s)
     s->mawp_lame = ok (value);
   else
     s->mawp_lame = na (reason);
-  if (hl_lame_required_wall (&s->lame, outer_fixed, in->sizing_criterion, allow, &value, &reason))
+  if (net_external)
+    s->treq_lame = na (BUCKLING_GOVERNS);
+  else if (hl_lame_required_wall (&s->lame, outer_fixed, in->sizing_criterion, allow, &value, &reason))
     s->treq_lame = ok (value + c);
   else
     s->treq_lame = na (reason);
 
   {
-    HlCodeWall wall = { in->form, in->ends, outer_fixed, s->a, s->b, c, net, allow };
+    /* the code formulas take the internal design pressure alone: an
+     * external pressure that can be lost must not thin the wall.  Only
+     * when it always acts do they see the difference, and then the
+     * allowable pressure counts it back. */
+    double held = s->code_coincident ? s->po : 0.0;
+    HlCodeWall wall = { in->form, in->ends, outer_fixed, s->a, s->b, c, s->code_pressure, allow };
     HlCodeResult ug = hl_code_ug27 (&wall);
     HlCodeResult en = hl_code_en13445 (&wall);
 
-    s->treq_ug27 = ug.treq_reason ? na (ug.treq_reason) : ok (ug.treq);
-    s->mawp_ug27 = ug.mawp_reason ? na (ug.mawp_reason) : ok (ug.mawp + s->po);
+    s->treq_ug27 = net_external ? na (BUCKLING_GOVERNS) : ug.treq_reason ? na (ug.treq_reason) : ok (ug.treq);
+    s->mawp_ug27 = ug.mawp_reason ? na (ug.mawp_reason) : ok (ug.mawp + held);
     s->ug27_clause = ug.clause;
-    s->treq_en13445 = en.treq_reason ? na (en.treq_reason) : ok (en.treq);
-    s->mawp_en13445 = en.mawp_reason ? na (en.mawp_reason) : ok (en.mawp + s->po);
+    s->treq_en13445 = net_external ? na (BUCKLING_GOVERNS) : en.treq_reason ? na (en.treq_reason) : ok (en.treq);
+    s->mawp_en13445 = en.mawp_reason ? na (en.mawp_reason) : ok (en.mawp + held);
     s->en13445_clause = en.clause;
+    code_source (s, s->ug27_source, sizeof s->ug27_source, ug.clause);
+    code_source (s, s->en13445_source, sizeof s->en13445_source, en.clause);
     if (ug.out_of_range)
       warn (s, N_("this wall is outside the range of the UG-27 formulas: use the code's thick-shell rules"));
     if (en.out_of_range)
@@ -243,12 +321,56 @@ solve_allowables (HlSolution *s)
 }
 
 static void
+method_input (HlMethodInput *m,
+              HlResult       required,
+              HlResult       mawp,
+              const char    *clause)
+{
+  m->required = required.value;
+  m->required_reason = hl_result_ok (required) ? NULL : required.reason != NULL ? required.reason
+                                                                                 : "not computable for this shell";
+  m->mawp = mawp.value;
+  m->mawp_reason = hl_result_ok (mawp) ? NULL : mawp.reason != NULL ? mawp.reason : "not computable for this shell";
+  m->clause = clause;
+}
+
+static void
+solve_design_check (HlSolution *s)
+{
+  const HlShellInputs *in = &s->inputs;
+  HlDesignCheckInputs d = { 0 };
+
+  d.basis = in->design_basis;
+  d.nominal = hl_quantity_si (in->wall_thickness, HL_KIND_LENGTH);
+  d.corrosion = s->corroded ? hl_quantity_si (in->corrosion_allowance, HL_KIND_LENGTH) : 0.0;
+  d.mill = s->mill;
+  d.mill_percent = s->corroded ? hl_quantity_si (in->mill_tolerance_percent, HL_KIND_PERCENT) : 0.0;
+  d.mill_length = s->corroded ? hl_quantity_si (in->mill_tolerance, HL_KIND_LENGTH) : 0.0;
+  d.design_pressure = s->pi;
+  method_input (&d.methods[HL_METHOD_UG27], s->treq_ug27, s->mawp_ug27, s->ug27_clause);
+  method_input (&d.methods[HL_METHOD_EN13445], s->treq_en13445, s->mawp_en13445, s->en13445_clause);
+  method_input (&d.methods[HL_METHOD_LAME], s->treq_lame, s->mawp_lame,
+                in->sizing_criterion == HL_CRITERION_TRESCA ? "Lamé, Tresca = S Ej" : "Lamé, von Mises = S Ej");
+  method_input (&d.methods[HL_METHOD_THIN], s->treq_thin, s->mawp_thin,
+                in->form == HL_FORM_SPHERE ? "thin wall, p R / 2t = S Ej" : "thin wall, p R / t = S Ej");
+  d.peak_equivalent = hl_lame_peak_equivalent (&s->lame, in->sizing_criterion);
+  d.yield = s->yield;
+  d.collapse = hl_result_ok (s->plastic_collapse) ? s->plastic_collapse.value
+               : hl_result_ok (s->plastic_collapse_tresca) ? s->plastic_collapse_tresca.value : NAN;
+  hl_design_check_run (&d, &s->check);
+}
+
+static void
 collect_warnings (HlSolution *s)
 {
   const HlShellInputs *in = &s->inputs;
   double peak = hl_lame_peak_equivalent (&s->lame, in->sizing_criterion);
   gboolean tresca = in->sizing_criterion == HL_CRITERION_TRESCA;
 
+  /* a failed check is never without a warning beside it */
+  if (s->check.verdict != HL_CHECK_PASS)
+    warn (s, "the design check fails (%s): %s", hl_design_basis_name (s->check.basis),
+          g_str_has_prefix (s->check.verdict_text, "FAIL: ") ? s->check.verdict_text + 6 : s->check.verdict_text);
   if (s->pi == 0.0 && s->po == 0.0)
     warn (s, N_("no pressure is applied: every stress is zero"));
   if (s->po > 0.0)
@@ -292,11 +414,23 @@ hl_solve (const HlShellInputs *in,
   s->inputs = *in;
   s->corroded = corroded;
   hl_shell_inputs_radii (in, corroded, &s->a, &s->b);
+  /* the mill undertolerance goes with the allowance: the design wall
+   * is the least the mill may deliver, corroded (new wall: as bought) */
+  {
+    double nominal = hl_quantity_si (in->wall_thickness, HL_KIND_LENGTH);
+
+    s->mill = corroded ? MAX (hl_quantity_si (in->mill_tolerance, HL_KIND_LENGTH),
+                              hl_quantity_si (in->mill_tolerance_percent, HL_KIND_PERCENT) * nominal)
+                       : 0.0;
+    s->a += s->mill;
+  }
   s->t = s->b - s->a;
   s->k = s->b / s->a;
   s->mean_ratio = (s->a + s->b) / 2 / s->t;
   s->pi = hl_quantity_si (in->internal_pressure, HL_KIND_STRESS);
   s->po = hl_quantity_si (in->external_pressure, HL_KIND_STRESS);
+  s->code_coincident = in->external_coincident;
+  s->code_pressure = in->external_coincident ? s->pi - s->po : s->pi;
   s->yield = hl_quantity_si (in->material.yield_strength, HL_KIND_STRESS);
   s->allowable = hl_quantity_si (in->material.allowable_stress, HL_KIND_STRESS) * in->joint_efficiency;
   s->tolerance = hl_quantity_si (in->thin_tolerance, HL_KIND_PERCENT) * 100.0;
@@ -311,6 +445,7 @@ hl_solve (const HlShellInputs *in,
   solve_membrane_and_lame (s);
   solve_yield_and_collapse (s);
   solve_allowables (s);
+  solve_design_check (s);
   collect_warnings (s);
   return s;
 }

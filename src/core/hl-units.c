@@ -34,6 +34,7 @@ typedef struct
   const char *spellings;  /* '|' separated, compared exactly */
   const char *words;      /* '|' separated unit names, any ASCII case */
   double      factor;
+  double      offset;     /* SI = value * factor + offset (temperatures) */
 } HlUnitRow;
 
 static const HlUnitRow length_units[] = {
@@ -62,6 +63,18 @@ static const HlUnitRow percent_units[] = {
   { NULL, NULL, NULL, 0 }
 };
 
+/* NIST SP 811 (2008) B.9: T/K = t/°C + 273.15; T/K = (t/°F + 459.67) / 1.8,
+ * so factor 5/9 and offset 459.67 * 5/9 K.  "C" and "F" alone are the
+ * coulomb and the farad, so the degree sign (or "deg") is part of the
+ * symbol. */
+static const HlUnitRow temperature_units[] = {
+  { "\xc2\xb0""C", "degC|\xe2\x84\x83", "celsius", 1.0, 273.15 },
+  { "K", "", "kelvin|kelvins", 1.0, 0.0 },
+  { "\xc2\xb0""F", "degF|\xe2\x84\x89", "fahrenheit", 5.0 / 9.0,
+    459.67 * 5.0 / 9.0 },
+  { NULL, NULL, NULL, 0, 0 }
+};
+
 static const HlUnitRow ratio_units[] = {
   { "", "", "", 1.0 },
   { NULL, NULL, NULL, 0 }
@@ -71,6 +84,7 @@ static const char * const length_names[] = { "mm", "cm", "m", "in", "ft", NULL }
 static const char * const stress_names[] = { "MPa", "bar", "kPa", "Pa", "GPa", "N/mm2", "psi", "ksi", NULL };
 static const char * const percent_names[] = { "%", NULL };
 static const char * const ratio_names[] = { "", NULL };
+static const char * const temperature_names[] = { "\xc2\xb0""C", "K", "\xc2\xb0""F", NULL };
 
 G_DEFINE_QUARK (hl-units-error-quark, hl_units_error)
 
@@ -86,6 +100,8 @@ table_for (HlQuantityKind kind)
       return stress_units;
     case HL_KIND_PERCENT:
       return percent_units;
+    case HL_KIND_TEMPERATURE:
+      return temperature_units;
     case HL_KIND_RATIO:
     default:
       return ratio_units;
@@ -146,6 +162,15 @@ hl_unit_factor (HlQuantityKind kind,
   return row != NULL ? row->factor : 0.0;
 }
 
+double
+hl_unit_offset (HlQuantityKind kind,
+                const char    *unit)
+{
+  const HlUnitRow *row = find_row (kind, unit);
+
+  return row != NULL ? row->offset : 0.0;
+}
+
 const char *
 hl_unit_canonical (HlQuantityKind kind,
                    const char    *unit)
@@ -167,6 +192,8 @@ hl_unit_names (HlQuantityKind kind)
       return stress_names;
     case HL_KIND_PERCENT:
       return percent_names;
+    case HL_KIND_TEMPERATURE:
+      return temperature_names;
     case HL_KIND_RATIO:
     default:
       return ratio_names;
@@ -189,6 +216,8 @@ hl_unit_default (HlQuantityKind kind,
       return us ? "ksi" : "GPa";
     case HL_KIND_PERCENT:
       return "%";
+    case HL_KIND_TEMPERATURE:
+      return us ? "\xc2\xb0""F" : "\xc2\xb0""C";
     case HL_KIND_RATIO:
     default:
       return "";

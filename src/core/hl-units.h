@@ -18,6 +18,7 @@ typedef enum
   HL_KIND_PERCENT,
   HL_KIND_RATIO,    /* dimensionless, no unit accepted */
   HL_KIND_MODULUS,  /* same units as stress; kept apart for defaults */
+  HL_KIND_TEMPERATURE, /* SI kelvin; °C and °F carry an offset */
 } HlQuantityKind;
 
 typedef enum
@@ -44,6 +45,12 @@ GQuark        hl_units_error_quark      (void);
  * "N/mm²", "PSI", "\"" for inch); unit names are words and match in any
  * case ("inch", "Metre"). */
 double        hl_unit_factor            (HlQuantityKind kind,
+                                         const char    *unit);
+
+/* Offset to SI of @unit for @kind: SI = value * factor + offset.  Zero
+ * for every kind but temperature (NIST SP 811 B.9: T/K = t/°C + 273.15,
+ * T/K = (t/°F + 459.67) / 1.8). */
+double        hl_unit_offset            (HlQuantityKind kind,
                                          const char    *unit);
 
 /* Canonical symbol of @unit ("N/mm^2" -> "N/mm2", "Inch" -> "in"), or

@@ -239,7 +239,8 @@ test_control_characters (void)
 }
 
 /* DESIGN.md §3: closed ends, mean radius basis, 5 % tolerance, Ej = 1,
- * hoop measure, von Mises sizing, no corrosion, no external pressure. */
+ * "both" verdict measure (issue 10), von Mises sizing, no corrosion, no
+ * external pressure. */
 static void
 test_defaults (void)
 {
@@ -263,7 +264,9 @@ test_defaults (void)
   g_assert_cmpfloat (s->thin_tolerance.value, ==, 5);
   g_assert_cmpstr (s->thin_tolerance.unit, ==, "%");
   g_assert_cmpfloat (s->joint_efficiency, ==, 1);
-  g_assert_cmpint (s->verdict_measure, ==, HL_MEASURE_HOOP);
+  /* format 1.2: "both" (hoop and von Mises error each within the
+   * tolerance) replaced the hoop-only default, also for older files */
+  g_assert_cmpint (s->verdict_measure, ==, HL_MEASURE_BOTH);
   g_assert_cmpint (s->sizing_criterion, ==, HL_CRITERION_VON_MISES);
   g_assert_cmpfloat (hl_quantity_si (s->corrosion_allowance, HL_KIND_LENGTH), ==, 0);
   g_assert_cmpfloat (hl_quantity_si (s->external_pressure, HL_KIND_STRESS), ==, 0);

@@ -33,6 +33,10 @@ hlt_shell (HlForm     form,
   in.material.yield_strength = hl_quantity_make (HLT_YIELD, "Pa");
   in.material.allowable_stress = hl_quantity_make (HLT_ALLOW, "Pa");
   in.joint_efficiency = 1.0;
+  /* the tests of the thin-wall error and its ratio check the hoop
+   * measure by name; "both", the default since format 1.2, is checked
+   * in tests/core/test-design-check.c */
+  in.verdict_measure = HL_MEASURE_HOOP;
   return in;
 }
 

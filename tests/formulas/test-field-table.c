@@ -169,15 +169,19 @@ change (const HlField *f,
       *(double *) slot = f->min_exclusive ? f->max_si - 0.05 : f->max_si - 0.1;
       break;
     case HL_FIELD_CHOICE:
-      /* the last choice: never the default of these rows */
-      hl_field_choice_set (f, slot, f->choices[hl_field_choice_count (f) - 1].value);
+      /* the last choice, or the first when the last is the default
+       * ("both" of the verdict measure) */
+      hl_field_choice_set (f, slot, f->choices[hl_field_choice_count (f) - 1].value != (int) f->default_value
+                                      ? f->choices[hl_field_choice_count (f) - 1].value
+                                      : f->choices[0].value);
       break;
     default:
       *(HlQuantity *) slot = hl_quantity_make (f->kind == HL_FIELD_PERCENT ? 2.5 : 3.25,
                                                f->kind == HL_FIELD_PERCENT ? "%"
                                                : f->kind == HL_FIELD_LENGTH ? "mm"
                                                : f->kind == HL_FIELD_PRESSURE ? "bar"
-                                               : f->kind == HL_FIELD_MODULUS ? "GPa" : "ksi");
+                                               : f->kind == HL_FIELD_MODULUS ? "GPa"
+                                               : f->kind == HL_FIELD_TEMPERATURE ? "\xc2\xb0""C" : "ksi");
       break;
     }
 }
@@ -238,8 +242,10 @@ check_at (const HlField *f,
     {
       HlQuantityKind kind = hl_field_quantity_kind (f);
 
-      *(HlQuantity *) slot = hl_quantity_make (si / hl_unit_factor (kind, hl_unit_default (kind, HL_UNIT_SYSTEM_SI)),
-                                               hl_unit_default (kind, HL_UNIT_SYSTEM_SI));
+      const char *unit = hl_unit_default (kind, HL_UNIT_SYSTEM_SI);
+
+      /* a temperature in °C: T/K = t/°C + 273.15 (NIST SP 811 B.9) */
+      *(HlQuantity *) slot = hl_quantity_make ((si - hl_unit_offset (kind, unit)) / hl_unit_factor (kind, unit), unit);
     }
   return hl_field_check (f, slot);
 }

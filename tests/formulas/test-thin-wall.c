@@ -31,8 +31,13 @@ check_membrane (const HlSolution *s,
                 double            axial)
 {
   hlt_assert_result (s->thin_hoop, hoop, REL, 0);
-  /* open ends carry no axial membrane stress: compare with a floor */
-  hlt_assert_result (s->thin_axial, axial, REL, 1e-6);
+  /* open ends carry no axial membrane stress: compare with a floor.  A
+   * sphere has no axis: the result is absent (issue 10), the points
+   * keep the second tangential stress, equal to the hoop stress. */
+  if (s->inputs.form == HL_FORM_SPHERE)
+    hlt_assert_na (s->thin_axial);
+  else
+    hlt_assert_result (s->thin_axial, axial, REL, 1e-6);
   for (guint i = 0; i < s->n_points; i++)
     {
       /* the membrane stress is constant through the wall */

@@ -126,6 +126,15 @@ take_shell (Bytes *b)
   in.material.poisson_ratio = take_value (b, -3, 0);
   in.joint_efficiency = take_value (b, -3, 0);
   take_quantity (b, &in.thin_tolerance, HL_KIND_PERCENT, -6, 2);
+  /* the design check's inputs (format 1.2), taken last so that the
+   * corpus keeps its meaning for the fields above */
+  if (take_pick (b, 2) == 1)
+    in.verdict_measure = HL_MEASURE_BOTH;
+  in.design_basis = take_pick (b, 4);
+  in.external_coincident = take_pick (b, 2);
+  take_quantity (b, &in.mill_tolerance, HL_KIND_LENGTH, -12, 9);
+  take_quantity (b, &in.mill_tolerance_percent, HL_KIND_PERCENT, -6, 2);
+  take_quantity (b, &in.design_temperature, HL_KIND_TEMPERATURE, -3, 4);
   return in;
 }
 
