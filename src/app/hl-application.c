@@ -140,6 +140,8 @@ hl_application_startup (GApplication *application)
     { "win.undo", { "<Control>z", NULL } },
     { "win.redo", { "<Control><Shift>z", "<Control>y", NULL } },
     { "win.copy-results", { "<Control><Shift>c", NULL } },
+    { "win.show-page::figure", { "<Alt>1", NULL } },
+    { "win.show-page::results", { "<Alt>2", NULL } },
     { "win.properties", { "<Alt>Return", NULL } },
     { "win.shell-add", { "<Control><Shift>n", NULL } },
     { "win.shell-rename", { "F2", NULL } },

@@ -10,6 +10,8 @@
 #include "hl-config.h"
 #include "hl-results-table.h"
 #include "hl-document-follower.h"
+#include "hl-design-check.h"
+#include "hl-result-groups.h"
 #include "hl-result-rows.h"
 
 #include <glib/gi18n.h>
@@ -23,8 +25,13 @@ struct _HlResultsTable
   GtkWidget   parent_instance;
 
   GtkWidget  *scroller;
-  GtkGrid    *grid;
+  GtkWidget  *columns;            /* two columns of groups */
+  GtkWidget  *column[2];
+  GtkWidget  *groups[HL_N_GROUPS]; /* GtkExpander, or NULL while empty */
+  GtkGrid    *grids[HL_N_GROUPS];
+  guint       group_rows[HL_N_GROUPS];
   GtkWidget  *empty_label;
+  GPtrArray  *keys;               /* the row keys the cells were made for */
 
   HlDocument *document;
   GSignalGroup  *follower;      /* calls on_document_changed_cb */
@@ -35,11 +42,14 @@ struct _HlResultsTable
 
 G_DEFINE_FINAL_TYPE (HlResultsTable, hl_results_table, GTK_TYPE_WIDGET)
 
-/* the figure and the list above already name the shell */
+/* The figure and the list above already name the shell, and the checks
+ * table above shows each method's utilisation and result */
 static gboolean
 skip_row (const HlResultRow *row)
 {
-  return strcmp (row->key, "shell") == 0 || strcmp (row->key, "id") == 0;
+  return strcmp (row->key, "shell") == 0 || strcmp (row->key, "id") == 0
+         || ((g_str_has_prefix (row->key, "utilisation_") || g_str_has_prefix (row->key, "check_"))
+             && hl_result_group_of (row->key) == HL_GROUP_DESIGN);
 }
 
 static void
@@ -75,38 +85,111 @@ cell (const char *text,
   return label;
 }
 
-/* Labels are made once per number of rows and then only relabelled:
- * typing a value must not rebuild seventy widgets per key. */
+static gboolean
+same_keys (HlResultsTable *self,
+           GArray         *rows)
+{
+  guint n = 0;
+
+  for (guint i = 0; i < rows->len; i++)
+    {
+      const HlResultRow *row = &g_array_index (rows, HlResultRow, i);
+
+      if (skip_row (row))
+        continue;
+      if (n >= self->keys->len || strcmp (g_ptr_array_index (self->keys, n), row->key) != 0)
+        return FALSE;
+      n++;
+    }
+  return n == self->keys->len;
+}
+
+/* A group folds: its heading stays, with the number of rows it holds */
+static GtkWidget *
+make_group (HlResultsTable *self,
+            HlResultGroup   group)
+{
+  GtkWidget *expander = gtk_expander_new (NULL);
+  GtkWidget *title = gtk_label_new (_(hl_result_group_title (group)));
+  GtkWidget *grid = gtk_grid_new ();
+
+  gtk_widget_add_css_class (title, "heading");
+  /* a long title wraps, or it would set the width of all three columns */
+  gtk_label_set_wrap (GTK_LABEL (title), TRUE);
+  gtk_label_set_xalign (GTK_LABEL (title), 0);
+  gtk_expander_set_label_widget (GTK_EXPANDER (expander), title);
+  gtk_expander_set_expanded (GTK_EXPANDER (expander), TRUE);
+  gtk_grid_set_column_spacing (GTK_GRID (grid), 12);
+  gtk_grid_set_row_spacing (GTK_GRID (grid), 0);
+  gtk_widget_set_margin_start (grid, 18);
+  gtk_widget_set_margin_top (grid, 2);
+  gtk_expander_set_child (GTK_EXPANDER (expander), grid);
+  gtk_widget_set_valign (expander, GTK_ALIGN_START);
+  self->grids[group] = GTK_GRID (grid);
+  self->group_rows[group] = 0;
+  return expander;
+}
+
+/* Labels are made once per list of rows and then only relabelled:
+ * typing a value must not rebuild seventy widgets per key.  A group
+ * keeps whether the user folded it. */
 static void
 ensure_cells (HlResultsTable *self,
-              guint           n)
+              GArray         *rows)
 {
-  guint half = (n + 1) / 2;
+  gboolean expanded[HL_N_GROUPS];
   GtkWidget *child;
 
-  if (self->names->len == n)
+  if (same_keys (self, rows))
     return;
-  while ((child = gtk_widget_get_first_child (GTK_WIDGET (self->grid))) != NULL)
-    gtk_grid_remove (self->grid, child);
+  for (guint g = 0; g < HL_N_GROUPS; g++)
+    {
+      expanded[g] = self->groups[g] == NULL || gtk_expander_get_expanded (GTK_EXPANDER (self->groups[g]));
+      self->groups[g] = NULL;
+      self->grids[g] = NULL;
+    }
+  for (guint c = 0; c < 2; c++)
+    while ((child = gtk_widget_get_first_child (self->column[c])) != NULL)
+      gtk_box_remove (GTK_BOX (self->column[c]), child);
   g_ptr_array_set_size (self->names, 0);
   g_ptr_array_set_size (self->values, 0);
-  for (guint i = 0; i < n; i++)
+  g_ptr_array_set_size (self->keys, 0);
+  for (guint i = 0; i < rows->len; i++)
     {
-      /* two column pairs use the width the canvas leaves */
-      int column = i < half ? 0 : 3;
-      int line = (int) (i < half ? i : i - half);
-      GtkWidget *name = cell (NULL, 0.0f, NULL);
-      GtkWidget *value = cell (NULL, 1.0f, "numeric");
+      const HlResultRow *row = &g_array_index (rows, HlResultRow, i);
+      HlResultGroup g;
+      GtkWidget *name, *value;
 
+      if (skip_row (row))
+        continue;
+      g = hl_result_group_of (row->key);
+      if (self->groups[g] == NULL)
+        self->groups[g] = make_group (self, g);
+      name = cell (NULL, 0.0f, NULL);
+      /* long labels wrap rather than widen their column */
+      gtk_label_set_wrap (GTK_LABEL (name), TRUE);
+      gtk_label_set_max_width_chars (GTK_LABEL (name), 44);
+      gtk_widget_set_hexpand (name, TRUE);
+      value = cell (NULL, 1.0f, "numeric");
       gtk_label_set_ellipsize (GTK_LABEL (value), PANGO_ELLIPSIZE_END);
-      gtk_label_set_max_width_chars (GTK_LABEL (value), 28);
-      gtk_grid_attach (self->grid, name, column, line, 1, 1);
-      gtk_grid_attach (self->grid, value, column + 1, line, 1, 1);
+      gtk_label_set_max_width_chars (GTK_LABEL (value), 18);
+      gtk_widget_set_valign (value, GTK_ALIGN_START);
+      gtk_grid_attach (self->grids[g], name, 0, (int) self->group_rows[g], 1, 1);
+      gtk_grid_attach (self->grids[g], value, 1, (int) self->group_rows[g], 1, 1);
+      self->group_rows[g]++;
       g_ptr_array_add (self->names, name);
       g_ptr_array_add (self->values, value);
+      g_ptr_array_add (self->keys, g_strdup (row->key));
     }
-  /* a spacer column between the pairs */
-  gtk_grid_attach (self->grid, cell ("", 0.0f, NULL), 2, 0, 1, 1);
+  for (guint g = 0; g < HL_N_GROUPS; g++)
+    if (self->groups[g] != NULL)
+      {
+        /* the columns come out about as tall as each other */
+        gboolean right = g == HL_GROUP_STRESSES || g == HL_GROUP_SIZING;
+
+        gtk_expander_set_expanded (GTK_EXPANDER (self->groups[g]), expanded[g]);
+        gtk_box_append (GTK_BOX (self->column[right]), self->groups[g]);
+      }
 }
 
 /* GtkLabel skips a text equal to its own, a tooltip it does not: the
@@ -138,10 +221,7 @@ rebuild (HlResultsTable *self)
     return;
 
   rows = hl_result_rows (solution);
-  for (guint i = 0; i < rows->len; i++)
-    n += !skip_row (&g_array_index (rows, HlResultRow, i));
-  ensure_cells (self, n);
-  n = 0;
+  ensure_cells (self, rows);
   for (guint i = 0; i < rows->len; i++)
     {
       const HlResultRow *row = &g_array_index (rows, HlResultRow, i);
@@ -153,6 +233,17 @@ rebuild (HlResultsTable *self)
       if (skip_row (row))
         continue;
       row_value (row, units, &number, &unit);
+      /* the summary's stable words read better as the names they stand for */
+      if (strcmp (row->key, "design_basis") == 0)
+        {
+          g_free (number);
+          number = g_strdup (hl_design_basis_name (solution->check.basis));
+        }
+      else if (strcmp (row->key, "design_verdict") == 0)
+        {
+          g_free (number);
+          number = g_strdup (solution->check.verdict == HL_CHECK_PASS ? _("PASS") : _("FAIL"));
+        }
       /* a long "n/a (why)" would widen the whole column: a dash stands
        * for it, the reason goes to the tooltip and whole into the copy */
       if (row->kind != HL_ROW_WORD && !hl_result_ok (row->result))
@@ -200,6 +291,7 @@ hl_results_table_finalize (GObject *object)
   g_string_free (self->text, TRUE);
   g_ptr_array_unref (self->names);
   g_ptr_array_unref (self->values);
+  g_ptr_array_unref (self->keys);
   G_OBJECT_CLASS (hl_results_table_parent_class)->finalize (object);
 }
 
@@ -226,17 +318,22 @@ hl_results_table_init (HlResultsTable *self)
   self->names = g_ptr_array_new ();
   self->values = g_ptr_array_new ();
 
-  self->grid = GTK_GRID (gtk_grid_new ());
-  gtk_grid_set_column_spacing (self->grid, 12);
-  gtk_grid_set_row_spacing (self->grid, 2);
-  gtk_widget_set_margin_start (GTK_WIDGET (self->grid), 12);
-  gtk_widget_set_margin_end (GTK_WIDGET (self->grid), 12);
-  gtk_widget_set_margin_top (GTK_WIDGET (self->grid), 6);
-  gtk_widget_set_margin_bottom (GTK_WIDGET (self->grid), 6);
+  self->keys = g_ptr_array_new_with_free_func (g_free);
+  self->columns = gtk_box_new (GTK_ORIENTATION_HORIZONTAL, 24);
+  gtk_box_set_homogeneous (GTK_BOX (self->columns), TRUE);
+  for (guint c = 0; c < 2; c++)
+    {
+      self->column[c] = gtk_box_new (GTK_ORIENTATION_VERTICAL, 6);
+      gtk_box_append (GTK_BOX (self->columns), self->column[c]);
+    }
+  gtk_widget_set_margin_start (self->columns, 12);
+  gtk_widget_set_margin_end (self->columns, 12);
+  gtk_widget_set_margin_top (self->columns, 4);
+  gtk_widget_set_margin_bottom (self->columns, 4);
   self->scroller = gtk_scrolled_window_new ();
-  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (self->scroller), GTK_POLICY_AUTOMATIC,
+  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (self->scroller), GTK_POLICY_NEVER,
                                   GTK_POLICY_AUTOMATIC);
-  gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (self->scroller), GTK_WIDGET (self->grid));
+  gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (self->scroller), self->columns);
   gtk_widget_set_vexpand (self->scroller, TRUE);
   gtk_widget_set_parent (self->scroller, GTK_WIDGET (self));
 

@@ -8,6 +8,7 @@
 
 #include "hl-autosave.h"
 #include "hl-banner.h"
+#include "hl-checks-table.h"
 #include "hl-results-table.h"
 #include "hl-shell-editor.h"
 #include "hl-shell-list.h"
@@ -37,6 +38,9 @@ struct _HlWindow
   HlCanvas       *canvas;
   GtkLabel       *results_shell_label;
   HlResultsTable *results_table;
+  HlChecksTable  *figure_checks;   /* under the figure */
+  HlChecksTable  *results_checks;  /* above all the results */
+  AdwViewStack   *view_stack;
   GtkLabel       *caution_label;
 
   HlDocument     *document;

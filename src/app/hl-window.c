@@ -139,6 +139,8 @@ hl_window_set_document (HlWindow   *self,
   hl_shell_editor_set_document (self->shell_editor, document);
   hl_canvas_set_document (self->canvas, document);
   hl_results_table_set_document (self->results_table, document);
+  hl_checks_table_set_document (self->figure_checks, document);
+  hl_checks_table_set_document (self->results_checks, document);
   hl_window_hide_message (self);
   /* a recovered project may be bound for a file */
   hl_window_watch_file (self, NULL);
@@ -330,7 +332,17 @@ shell_down_activated (GSimpleAction *action,
   hl_document_move_shell (HL_WINDOW (user_data)->document, +1);
 }
 
+/* "figure" or "results": the page of the view switcher */
+static void
+show_page_activated (GSimpleAction *action,
+                     GVariant      *parameter,
+                     gpointer       user_data)
+{
+  adw_view_stack_set_visible_child_name (HL_WINDOW (user_data)->view_stack, g_variant_get_string (parameter, NULL));
+}
+
 static const GActionEntry win_entries[] = {
+  { "show-page", show_page_activated, "s" },
   { "export", export_activated },
   { "export-to", export_to_activated, "(ss)" },
   { "print", print_activated },
@@ -432,6 +444,7 @@ hl_window_class_init (HlWindowClass *klass)
   g_type_ensure (HL_TYPE_SHELL_EDITOR);
   g_type_ensure (HL_TYPE_CANVAS);
   g_type_ensure (HL_TYPE_RESULTS_TABLE);
+  g_type_ensure (HL_TYPE_CHECKS_TABLE);
   gtk_widget_class_set_template_from_resource (widget_class, "/org/hoopline/Hoopline/hl-window.ui");
 #define CHILD(name) gtk_widget_class_bind_template_child (widget_class, HlWindow, name)
   CHILD (title_label);
@@ -447,6 +460,9 @@ hl_window_class_init (HlWindowClass *klass)
   CHILD (canvas);
   CHILD (results_shell_label);
   CHILD (results_table);
+  CHILD (figure_checks);
+  CHILD (results_checks);
+  CHILD (view_stack);
   CHILD (caution_label);
 #undef CHILD
 }
@@ -531,6 +547,13 @@ hl_window_get_shell_editor (HlWindow *self)
 {
   g_return_val_if_fail (HL_IS_WINDOW (self), NULL);
   return self->shell_editor;
+}
+
+HlChecksTable *
+hl_window_get_checks_table (HlWindow *self)
+{
+  g_return_val_if_fail (HL_IS_WINDOW (self), NULL);
+  return self->figure_checks;
 }
 
 HlResultsTable *

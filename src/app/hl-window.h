@@ -8,6 +8,7 @@
 
 #include "hl-canvas.h"
 #include "hl-document.h"
+#include "hl-checks-table.h"
 #include "hl-results-table.h"
 #include "hl-shell-editor.h"
 
@@ -45,6 +46,7 @@ void            hl_window_end_session       (HlWindow *self);
 
 /* For tests: the parts and the state a person would look at. */
 HlShellEditor  *hl_window_get_shell_editor  (HlWindow *self);
+HlChecksTable  *hl_window_get_checks_table  (HlWindow *self);
 HlResultsTable *hl_window_get_results_table (HlWindow *self);
 HlCanvas       *hl_window_get_canvas        (HlWindow *self);
 /* the unsaved-changes question while it is open, else NULL */
