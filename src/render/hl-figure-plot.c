@@ -231,7 +231,8 @@ y_range (const HlSolution *sol,
          double           *hi)
 {
   *lo = 0.0;
-  *hi = 0.0;
+  /* the allowable and the yield are on the plot, so the margin shows */
+  *hi = MAX (isfinite (sol->allowable) ? sol->allowable : 0.0, isfinite (sol->yield) ? sol->yield : 0.0);
   for (guint i = 0; i < sol->n_points; i++)
     for (int c = 0; c < N_CURVES; c++)
       if (p->curves[c].shown)
@@ -262,6 +263,45 @@ draw_axes (HlFigure       *f,
       cairo_stroke (cr);
     }
   cairo_restore (cr);
+}
+
+/* A stress the wall is checked against: a thin line across the plot,
+ * named at its right end above the line */
+static void
+limit_line (HlFigure             *f,
+            const HlPlotGeometry *g,
+            double                stress,
+            const char           *label)
+{
+  cairo_t *cr = f->cr;
+  double y = hl_axis_map (&g->y, hl_stress_value (f, stress));
+  g_autofree char *value = hl_stress_text (f, stress, 4);
+  g_autofree char *text = g_strdup_printf ("%s %s", label, value);
+
+  cairo_save (cr);
+  hl_palette_set_source (cr, f->pal->ink);
+  cairo_set_line_width (cr, 0.9 * f->lw);
+  hl_palette_set_dash (cr, HL_DASH_DASHED, f->lw);
+  cairo_move_to (cr, g->area.x, y);
+  cairo_line_to (cr, g->area.x + g->area.width, y);
+  cairo_stroke (cr);
+  cairo_restore (cr);
+  /* at the right end: the corrosion band and the bore's peak are at the left */
+  hl_text_draw (f->text, HL_FONT_SMALL, text, g->area.x + g->area.width - 0.4 * f->text->base,
+                y - 0.15 * f->text->base, 1, 1, 0, f->pal->ink);
+}
+
+static void
+draw_limits (HlFigure             *f,
+             const HlPlotGeometry *g)
+{
+  const HlSolution *sol = f->sol;
+
+  if (isfinite (sol->yield) && sol->yield > 0)
+    limit_line (f, g, sol->yield, _("yield"));
+  /* the allowable the code checks the membrane stress against */
+  if (isfinite (sol->allowable) && sol->allowable > 0)
+    limit_line (f, g, sol->allowable, _("allowable S·Ej"));
 }
 
 static void
@@ -314,6 +354,7 @@ draw_curves (HlFigure       *f,
       cairo_restore (cr);
     }
   cairo_restore (cr);
+  draw_limits (f, g);
   {
     gboolean inner = fabs (sol->points[0].hoop) >= fabs (sol->points[sol->n_points - 1].hoop);
     const HlWallPoint *pk = &sol->points[inner ? 0 : sol->n_points - 1];

@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-figure-title"
 
 #include "hl-figure-private.h"
+#include "hl-design-check.h"
 #include "hl-report.h"
 
 #include <math.h>
@@ -13,7 +14,8 @@ static char *
 verdict_text (HlFigure *f)
 {
   const HlSolution *sol = f->sol;
-  gboolean eq = sol->inputs.verdict_measure == HL_MEASURE_EQUIVALENT;
+  /* the measure that decided, when both are checked */
+  gboolean eq = sol->thin_governing == HL_MEASURE_EQUIVALENT;
   HlResult err = eq ? sol->thin_wall_error_equivalent : sol->thin_wall_error;
 
   g_autofree char *tol = hl_figure_format_sig (sol->tolerance, 3, f->locale);
@@ -42,6 +44,27 @@ verdict_text (HlFigure *f)
                           e_pct, tol_pct);
 }
 
+/* Does the wall pass: the design check's verdict in words */
+static char *
+design_text (HlFigure *f)
+{
+  const HlDesignCheck *c = &f->sol->check;
+  const HlMethodCheck *b = &c->methods[c->basis];
+  g_autofree char *u = NULL, *u_pct = NULL;
+
+  if (c->bursts)
+    return g_strdup (_("The wall would burst: the design pressure is above the plastic collapse pressure"));
+  if (c->yields)
+    return g_strdup (_("The wall yields at the bore: the peak equivalent stress is above the yield strength"));
+  if (b->result == HL_CHECK_NOT_APPLICABLE)
+    /* TRANSLATORS: %s is the design basis ("ASME VIII-1 UG-27") */
+    return g_strdup_printf (_("Not shown to pass: the design basis %s does not apply"), b->name);
+  u = hl_figure_format_sig (100 * c->utilisation, 4, f->locale);
+  u_pct = g_strdup_printf ("%s" HL_NBSP "%%", u);
+  /* TRANSLATORS: utilisation in percent, the governing clause, the design basis */
+  return g_strdup_printf (_("Utilisation %s by %s (design basis %s)"), u_pct, c->governing, b->name);
+}
+
 static char *
 warnings_text (HlFigure *f)
 {
@@ -62,8 +85,8 @@ verdict_formed (HlFigure *f)
 {
   const HlSolution *sol = f->sol;
 
-  return hl_result_ok (sol->inputs.verdict_measure == HL_MEASURE_EQUIVALENT ? sol->thin_wall_error_equivalent
-                                                                            : sol->thin_wall_error);
+  return hl_result_ok (sol->thin_governing == HL_MEASURE_EQUIVALENT ? sol->thin_wall_error_equivalent
+                                                                    : sol->thin_wall_error);
 }
 
 static const char *
@@ -77,51 +100,79 @@ tag_text (HlFigure *f)
 static double
 tag_width (HlFigure *f)
 {
-  double w1, w2;
+  const char *words[] = { _("THIN"), _("THICK"), _("PASS"), _("FAIL"), _("N/A") };
+  double w = 0, wi;
 
-  hl_text_measure (f->text, HL_FONT_HEADING, _("THIN"), 0, &w1, NULL);
-  hl_text_measure (f->text, HL_FONT_HEADING, _("THICK"), 0, &w2, NULL);
-  return MAX (w1, w2) + 1.2 * f->text->base;
+  for (guint i = 0; i < G_N_ELEMENTS (words); i++)
+    {
+      hl_text_measure (f->text, HL_FONT_HEADING, words[i], 0, &wi, NULL);
+      w = MAX (w, wi);
+    }
+  return w + 1.2 * f->text->base;
 }
 
 double
 hl_verdict_height (HlFigure *f,
                    double    width)
 {
+  g_autofree char *d = design_text (f);
   g_autofree char *v = verdict_text (f);
   g_autofree char *w = warnings_text (f);
   double text_w = width - tag_width (f) - f->gap;
-  double h1, h2 = 0;
+  double h0, h1, h2 = 0;
 
+  hl_text_measure (f->text, HL_FONT_TITLE, d, text_w, NULL, &h0);
   hl_text_measure (f->text, HL_FONT_TITLE, v, text_w, NULL, &h1);
   if (w != NULL)
     hl_text_measure (f->text, HL_FONT_SMALL, w, text_w, NULL, &h2);
-  return h1 + h2 + f->gap;
+  return h0 + h1 + h2 + f->gap;
+}
+
+/* One verdict: the tag says it in a word, on its own colour for a quick
+ * read; the sentence beside it says why.  Returns the bottom. */
+static double
+verdict_line (HlFigure   *f,
+              double      x0,
+              double      y,
+              double      width,
+              const char *tag,
+              HlRgb       colour,
+              const char *text)
+{
+  cairo_t *cr = f->cr;
+  double tw = tag_width (f), th;
+  double x = x0 + tw + f->gap;
+  HlRect r;
+
+  hl_text_measure (f->text, HL_FONT_TITLE, "T", 0, NULL, &th);
+  cairo_save (cr);
+  cairo_rectangle (cr, x0, y + 0.08 * th, tw, 0.84 * th);
+  hl_palette_set_source (cr, colour);
+  cairo_fill (cr);
+  cairo_restore (cr);
+  hl_text_draw (f->text, HL_FONT_HEADING, tag, x0 + tw / 2, y + th / 2, 0.5, 0.5, 0, f->pal->paper);
+  r = hl_text_draw (f->text, HL_FONT_TITLE, text, x, y, 0, 0, x0 + width - x, f->pal->ink);
+  return r.y + r.height;
 }
 
 void
 hl_verdict_draw (HlFigure     *f,
                  const HlRect *area)
 {
-  cairo_t *cr = f->cr;
+  g_autofree char *d = design_text (f);
   g_autofree char *v = verdict_text (f);
   g_autofree char *w = warnings_text (f);
-  double tw = tag_width (f), th;
-  double x = area->x + tw + f->gap;
-  HlRect r;
+  gboolean pass = f->sol->check.verdict == HL_CHECK_PASS;
+  double x = area->x + tag_width (f) + f->gap;
+  double y;
 
-  /* the tag says it in a word, on its own colour, for a quick read */
-  hl_text_measure (f->text, HL_FONT_TITLE, "T", 0, NULL, &th);
-  cairo_save (cr);
-  cairo_rectangle (cr, area->x, area->y + 0.08 * th, tw, 0.84 * th);
-  hl_palette_set_source (cr, !verdict_formed (f) ? f->pal->muted : f->sol->is_thin ? f->pal->pass : f->pal->fail);
-  cairo_fill (cr);
-  cairo_restore (cr);
-  hl_text_draw (f->text, HL_FONT_HEADING, tag_text (f), area->x + tw / 2, area->y + th / 2, 0.5, 0.5, 0,
-                f->pal->paper);
-  r = hl_text_draw (f->text, HL_FONT_TITLE, v, x, area->y, 0, 0, area->x + area->width - x, f->pal->ink);
+  /* two verdicts, each on its own: a thin wall can fail, a thick one pass */
+  y = verdict_line (f, area->x, area->y, area->width, pass ? _("PASS") : _("FAIL"),
+                    pass ? f->pal->pass : f->pal->fail, d);
+  y = verdict_line (f, area->x, y, area->width, tag_text (f),
+                    !verdict_formed (f) ? f->pal->muted : f->sol->is_thin ? f->pal->pass : f->pal->fail, v);
   if (w != NULL)
-    hl_text_draw (f->text, HL_FONT_SMALL, w, x, r.y + r.height, 0, 0, area->x + area->width - x, f->pal->fail);
+    hl_text_draw (f->text, HL_FONT_SMALL, w, x, y, 0, 0, area->x + area->width - x, f->pal->fail);
 }
 
 typedef struct
@@ -129,6 +180,8 @@ typedef struct
   const char *label;
   char       *value;
 } Cell;
+
+#define N_CELLS 8
 
 static guint
 title_cells (HlFigure *f,
@@ -147,7 +200,25 @@ title_cells (HlFigure *f,
   cells[4] = (Cell) { _("Units"), g_strdup (f->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa") };
   cells[5] = (Cell) { _("Exported"), f->ctx->export_date != NULL ? g_strdup (f->ctx->export_date)
                                                               : g_date_time_format (now, "%Y-%m-%d") };
-  return 6;
+  cells[6] = (Cell) { _("Design basis"), g_strdup ("—") };
+  cells[7] = (Cell) { _("Design load"), g_strdup ("—") };
+  if (f->sol != NULL)
+    {
+      g_autofree char *pi = hl_stress_text (f, f->sol->pi, 4);
+      g_autofree char *po = hl_stress_text (f, f->sol->po, 4);
+      g_autofree char *temp = hl_figure_format_sig (sh->design_temperature.value, 4, f->locale);
+
+      g_free (cells[6].value);
+      g_free (cells[7].value);
+      /* the edition is the user's label, named beside the clause */
+      cells[6].value = sh->code_edition[0] != '\0'
+                         ? g_strdup_printf ("%s, %s", hl_design_basis_name (sh->design_basis), sh->code_edition)
+                         : g_strdup (hl_design_basis_name (sh->design_basis));
+      /* TRANSLATORS: internal and external design pressure, design temperature with its unit */
+      cells[7].value = g_strdup_printf (_("%s inside, %s outside, at %s %s"), pi, po, temp,
+                                        sh->design_temperature.unit);
+    }
+  return N_CELLS;
 }
 
 static double
@@ -164,8 +235,8 @@ static guint
 title_columns (HlFigure *f,
                double    width)
 {
-  static const guint column3[] = { 0, 1, 2, 0, 1, 2 };
-  Cell cells[6];
+  static const guint column3[N_CELLS] = { 0, 1, 2, 0, 1, 2, 0, 1 };
+  Cell cells[N_CELLS];
   guint n = title_cells (f, cells);
   gboolean fit = TRUE;
   double w0 = first_column (3, width), wi = (width - w0) / 2, pad = 0.5 * f->text->base;
@@ -206,7 +277,7 @@ hl_title_block_height (HlFigure *f,
   double ch;
 
   hl_text_measure (f->text, HL_FONT_SMALL, c, width - f->text->base, NULL, &ch);
-  return (6 / cols) * cell_height (f) + ch + 0.6 * f->text->base;
+  return ((N_CELLS + cols - 1) / cols) * cell_height (f) + ch + 0.6 * f->text->base;
 }
 
 void
@@ -214,15 +285,15 @@ hl_title_block_draw (HlFigure     *f,
                      const HlRect *area)
 {
   cairo_t *cr = f->cr;
-  Cell cells[6];
-  guint n = title_cells (f, cells), cols = title_columns (f, area->width), rows = n / cols;
+  Cell cells[N_CELLS];
+  guint n = title_cells (f, cells), cols = title_columns (f, area->width), rows = (n + cols - 1) / cols;
   double w0 = first_column (cols, area->width);
   double wi = (area->width - w0) / (cols - 1);
   double chh = cell_height (f), pad = 0.5 * f->text->base;
   g_autofree char *caution = caution_text ();
   /* reading order in each layout: names first, then who and when */
-  static const guint order3[] = { 0, 1, 2, 3, 4, 5 };
-  static const guint order2[] = { 0, 1, 3, 2, 4, 5 };
+  static const guint order3[N_CELLS] = { 0, 1, 2, 3, 4, 5, 6, 7 };
+  static const guint order2[N_CELLS] = { 0, 1, 3, 2, 6, 7, 4, 5 };
 
   cairo_save (cr);
   hl_palette_set_source (cr, f->pal->ink);
