@@ -379,6 +379,9 @@ put_test_pressure (GString          *out,
     g_string_append (out, "  Result: PASS: the stress at the test pressure is within the limit.\n");
   else
     g_string_append (out, "  Result: NOT APPLICABLE: the stress at test could not be checked.\n");
+  if (hl_result_ok (t->membrane.of_yield) && t->membrane.of_yield.value > 1.0)
+    g_string_append (out, "  DANGER: at the test pressure the general membrane stress is above yield: the wall\n"
+                          "    would deform permanently in the test.\n");
   if (t->checked_rule == HL_TEST_UG100_PNEUMATIC)
     {
       g_autofree char *kj = hl_format_significant (t->stored_energy.value / 1e3, 4);

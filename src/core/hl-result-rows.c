@@ -96,11 +96,11 @@ test_pressure_rows (GArray           *rows,
   const HlTestPressure *t = s->test;
   const HlTestRulePressure *chosen = &t->rules[t->checked_rule];
 
-  row (rows, "test_pressure_hydrostatic", "Test pressure, ASME VIII-1 UG-99(b) hydrostatic", HL_ROW_STRESS,
+  row (rows, "test_pressure_hydrostatic", "Test pressure, UG-99(b) hydrostatic", HL_ROW_STRESS,
        t->rules[HL_TEST_UG99_HYDROSTATIC].pressure, s->test_sources[HL_TEST_UG99_HYDROSTATIC]);
-  row (rows, "test_pressure_pneumatic", "Test pressure, ASME VIII-1 UG-100 pneumatic", HL_ROW_STRESS,
+  row (rows, "test_pressure_pneumatic", "Test pressure, UG-100 pneumatic", HL_ROW_STRESS,
        t->rules[HL_TEST_UG100_PNEUMATIC].pressure, s->test_sources[HL_TEST_UG100_PNEUMATIC]);
-  row (rows, "test_pressure_en13445", "Test pressure, EN 13445-5 / PED hydrostatic", HL_ROW_STRESS,
+  row (rows, "test_pressure_en13445", "Test pressure, EN 13445-5 / PED", HL_ROW_STRESS,
        t->rules[HL_TEST_EN13445_HYDROSTATIC].pressure, s->test_sources[HL_TEST_EN13445_HYDROSTATIC]);
   row (rows, "membrane_stress_at_test", "General membrane stress at test", HL_ROW_STRESS, t->membrane.stress,
        t->membrane.basis);

@@ -364,7 +364,7 @@ solve_design_check (HlSolution *s)
 }
 
 /* The pressure the ASME test rules multiply: the MAWP of the design
- * basis's own method, where it has one.  The EN basis has no ASME MAWP
+ * basis's own method, where it has one (@words names it; NULL: UG-27's).  The EN basis has no ASME MAWP
  * of its own, so the ASME rules take UG-27's there too (the EN rule
  * takes Pd).  Without one the design pressure stands in, as the
  * footnote to UG-99(b) allows. */
@@ -384,7 +384,7 @@ test_mawp (const HlSolution *s,
     case HL_DESIGN_BASIS_UG27:
     case HL_DESIGN_BASIS_EN13445:
     default:
-      *words = "MAWP of ASME VIII-1 UG-27";
+      *words = NULL;
       return s->mawp_ug27;
     }
 }
@@ -454,10 +454,15 @@ solve_test_pressure (HlSolution *s)
   s->test_check = test_check (s->test);
 
   if (s->test_mawp_is_design_pressure)
-    g_snprintf (asme, sizeof asme, "MAWP: design pressure in its place (UG-99(b) footnote; %s: %s)", mawp_words,
+    g_snprintf (asme, sizeof asme, "MAWP: design pressure in its place (UG-99(b) footnote; %s: %s)",
+                mawp_words != NULL ? mawp_words : "MAWP of ASME VIII-1 UG-27",
                 mawp.reason != NULL ? mawp.reason : "not computable");
+  else if (mawp_words == NULL)
+    /* UG-27's own: the clause that governs it */
+    g_snprintf (asme, sizeof asme, "MAWP of ASME VIII-1 %s, of the analysis wall",
+                s->ug27_clause != NULL ? s->ug27_clause : "UG-27");
   else
-    g_snprintf (asme, sizeof asme, "MAWP: %s, of the analysis wall", mawp_words);
+    g_snprintf (asme, sizeof asme, "%s, of the analysis wall", mawp_words);
   ps_words = ps > 0 ? g_strdup ("PS as given") : g_strdup ("PS not given: the design pressure");
   g_snprintf (en, sizeof en, "Pd = internal design pressure; %s", ps_words);
   test_source (s, HL_TEST_UG99_HYDROSTATIC, asme);

@@ -223,6 +223,7 @@ test_report_words (void)
   g_assert_nonnull (strstr (text, "Result: PASS"));
   /* hydrostatic: no hazard note */
   g_assert_null (strstr (text, "HAZARD"));
+  g_assert_null (strstr (text, "DANGER: at the test pressure"));
 
   /* the pneumatic rule: the hazard, in the block and in the warnings */
   in.test_rule = HL_TEST_UG100_PNEUMATIC;
@@ -264,6 +265,8 @@ test_failing_stress (void)
   text = report_of (&in);
   g_assert_nonnull (strstr (text, "Result: FAIL"));
   g_assert_nonnull (strstr (text, "of the limit: FAIL"));
+  /* 327.3 MPa is above the yield strength itself, 260 MPa */
+  g_assert_nonnull (strstr (text, "DANGER: at the test pressure the general membrane stress is above yield"));
   warnings = strstr (text, "\nWarnings\n");
   g_assert_nonnull (warnings);
   g_assert_null (strstr (warnings, "  none\n"));
