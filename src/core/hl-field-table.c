@@ -10,6 +10,7 @@
 
 #include "hl-config.h"
 #include "hl-field-table.h"
+#include "hl-test-pressure.h"
 
 #include <glib/gi18n-lib.h>
 #include <stddef.h>
@@ -48,8 +49,8 @@ static const HlFieldChoice measure_choices[] = {
   { "equivalent", HL_MEASURE_EQUIVALENT, N_("Equivalent stress"), "equivalent (von Mises)",
     N_("von Mises stress"), NULL },
   /* format 1.2: each error within the tolerance */
-  { "both", HL_MEASURE_BOTH, "Hoop and von Mises stress", "hoop and von Mises, each", "hoop and von Mises stress",
-    NULL },
+  { "both", HL_MEASURE_BOTH, N_("Hoop and von Mises stress"), "hoop and von Mises, each",
+    N_("hoop and von Mises stress"), NULL },
   { NULL, 0, NULL, NULL, NULL, NULL },
 };
 
@@ -65,16 +66,27 @@ static const HlFieldChoice design_basis_choices[] = {
   { "asme-ug27", HL_DESIGN_BASIS_UG27, "ASME VIII-1 UG-27 and Appendix 1-1", "ASME VIII-1 UG-27 + App. 1-1",
     "ASME VIII-1 UG-27 + App. 1-1", NULL },
   { "en13445", HL_DESIGN_BASIS_EN13445, "EN 13445-3 7.4", "EN 13445-3 7.4", "EN 13445-3 7.4", NULL },
-  { "lame", HL_DESIGN_BASIS_LAME, "Lamé, elastic, sizing criterion", "Lame elastic (sizing criterion)",
-    "Lamé elastic (sizing criterion)", NULL },
-  { "thin-wall", HL_DESIGN_BASIS_THIN, "Thin wall (membrane)", "thin wall (membrane)", "thin wall (membrane)",
-    NULL },
+  { "lame", HL_DESIGN_BASIS_LAME, N_("Lamé, elastic, sizing criterion"), "Lame elastic (sizing criterion)",
+    N_("Lamé elastic (sizing criterion)"), NULL },
+  { "thin-wall", HL_DESIGN_BASIS_THIN, N_("Thin wall (membrane)"), "thin wall (membrane)",
+    N_("thin wall (membrane)"), NULL },
+  { NULL, 0, NULL, NULL, NULL, NULL },
+};
+
+/* names of published rules; the kind of test is a word */
+static const HlFieldChoice test_rule_choices[] = {
+  { "asme-ug99b", HL_TEST_UG99_HYDROSTATIC, N_("ASME VIII-1 UG-99(b), hydrostatic"),
+    "ASME VIII-1 UG-99(b), hydrostatic", N_("ASME VIII-1 UG-99(b), hydrostatic"), NULL },
+  { "asme-ug100", HL_TEST_UG100_PNEUMATIC, N_("ASME VIII-1 UG-100, pneumatic"), "ASME VIII-1 UG-100, pneumatic",
+    N_("ASME VIII-1 UG-100, pneumatic"), NULL },
+  { "en13445-5", HL_TEST_EN13445_HYDROSTATIC, N_("EN 13445-5 / PED, hydrostatic"),
+    "EN 13445-5 / PED Annex I 7.4, hydrostatic", N_("EN 13445-5 / PED Annex I 7.4, hydrostatic"), NULL },
   { NULL, 0, NULL, NULL, NULL, NULL },
 };
 
 static const HlFieldChoice yes_no_choices[] = {
-  { "no", FALSE, "No", "no", "no", NULL },
-  { "yes", TRUE, "Yes", "yes", "yes", NULL },
+  { "no", FALSE, N_("No"), "no", N_("no"), NULL },
+  { "yes", TRUE, N_("Yes"), "yes", N_("yes"), NULL },
   { NULL, 0, NULL, NULL, NULL, NULL },
 };
 
@@ -115,14 +127,20 @@ static const HlField fields[] = {
    * far beyond any product standard (common practice) and a slip. */
   { .element = "mill-undertolerance", .kind = HL_FIELD_LENGTH, SHELL (mill_tolerance),
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-9, .max_si = MAX_LENGTH_M, .min_text = "1 nm",
-    .max_text = "100 km", .why_min = "a few atoms are no tolerance; 0 means none", .default_value = 0,
-    .default_unit = "mm", .label = "Mill undertolerance", .report = "Mill undertolerance (length)",
-    .sheet = "Mill undertolerance (length)", .since_minor = 2 },
+    .max_text = "100 km", .why_min = N_("a few atoms are no tolerance; 0 means none"), .default_value = 0,
+    .default_unit = "mm", .label = N_("Mill undertolerance"), .report = "Mill undertolerance (length)",
+    .sheet = N_("Mill undertolerance (length)"), .since_minor = 2 },
   { .element = "mill-undertolerance-percent", .kind = HL_FIELD_PERCENT, SHELL (mill_tolerance_percent),
     .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-5, .max_si = 0.5, .max_exclusive = TRUE,
-    .min_text = "0.001 %", .max_text = "50 %", .why_min = "a smaller tolerance than the inputs' own precision; 0 means none",
-    .default_value = 0, .default_unit = "%", .label = "Mill undertolerance (% of nominal)",
-    .report = "Mill undertolerance (% of nominal)", .sheet = "Mill undertolerance (% of nominal)",
+    .min_text = "0.001 %", .max_text = "50 %",
+    .why_min = N_("a smaller tolerance than the inputs' own precision; 0 means none"),
+    .default_value = 0, .default_unit = "%",
+    /* a label, never a format: "% o" is not a conversion */
+    /* xgettext:no-c-format */
+    .label = N_("Mill undertolerance (% of nominal)"),
+    .report = "Mill undertolerance (% of nominal)",
+    /* xgettext:no-c-format */
+    .sheet = N_("Mill undertolerance (% of nominal)"),
     .since_minor = 2 },
   /* the results are linear in the pressure, so a small one loses nothing
    * until the stresses near the subnormal doubles; 1 µPa is far below any
@@ -144,17 +162,17 @@ static const HlField fields[] = {
   /* format 1.2: whether the code formulas may count on the external
    * pressure; off, they take the internal design pressure alone */
   { .element = "external-pressure-coincident", .kind = HL_FIELD_CHOICE, SHELL (external_coincident),
-    .default_value = FALSE, .label = "External pressure always coincident",
-    .tooltip = "Yes only when the outside pressure can never be lost while the inside one acts",
-    .report = "External pressure always acts", .sheet = "External pressure always acts",
+    .default_value = FALSE, .label = N_("External pressure always coincident"),
+    .tooltip = N_("Yes only when the outside pressure can never be lost while the inside one acts"),
+    .report = "External pressure always acts", .sheet = N_("External pressure always acts"),
     .choices = yes_no_choices, .since_minor = 2 },
   /* recorded, not used: the allowable is entered at this temperature.
    * Liquid helium service starts near 4 K; above 1 500 °C steel melts
    * (from memory); between them lie all metal shells. */
   { .element = "design-temperature", .kind = HL_FIELD_TEMPERATURE, SHELL (design_temperature), .bounded = TRUE,
     .min_si = 1.0, .max_si = 1773.15, .min_text = "1 K", .max_text = "1500 °C",
-    .why_min = "absolute zero is 0 K (-273.15 °C)", .default_value = 20, .default_unit = "\xc2\xb0""C",
-    .label = "Design temperature", .tooltip = "The allowable stress is the one at this temperature",
+    .why_min = N_("absolute zero is 0 K (-273.15 °C)"), .default_value = 20, .default_unit = "\xc2\xb0""C",
+    .label = N_("Design temperature"), .tooltip = N_("The allowable stress is the one at this temperature"),
     .report = "Design temperature", .since_minor = 2 },
   /* the material's rows; their defaults are those of hl_material_default() */
   { .element = "name", .kind = HL_FIELD_TEXT, MATERIAL (name), TEXT_SIZE (HlMaterial, name), .label = N_("Name"), .report = "Material",
@@ -198,10 +216,10 @@ static const HlField fields[] = {
    * lists a text row as a material's name and a quantity in its own
    * units, which a temperature is not */
   { .element = "material-specification", .kind = HL_FIELD_TEXT, SHELL (material_spec),
-    TEXT_SIZE (HlShellInputs, material_spec), .label = "Material specification",
+    TEXT_SIZE (HlShellInputs, material_spec), .label = N_("Material specification"),
     .report = "Material specification", .since_minor = 2 },
   { .element = "allowable-stress-source", .kind = HL_FIELD_TEXT, SHELL (allowable_source),
-    TEXT_SIZE (HlShellInputs, allowable_source), .label = "Source of the allowable stress",
+    TEXT_SIZE (HlShellInputs, allowable_source), .label = N_("Source of the allowable stress"),
     .report = "Source of the allowable stress", .since_minor = 2 },
   { .element = "thin-radius-basis", .kind = HL_FIELD_CHOICE, SHELL (thin_basis), .default_value = HL_BASIS_MEAN,
     .report = "Thin-wall radius basis", .sheet = N_("Thin-wall radius basis"), .choices = basis_choices },
@@ -219,11 +237,38 @@ static const HlField fields[] = {
     .default_value = HL_CRITERION_VON_MISES, .report = "Sizing criterion (Lame-based)",
     .sheet = N_("Sizing criterion"), .choices = criterion_choices },
   { .element = "design-basis", .kind = HL_FIELD_CHOICE, SHELL (design_basis), .default_value = HL_DESIGN_BASIS_UG27,
-    .label = "Design basis", .report = "Design basis", .sheet = "Design basis", .choices = design_basis_choices,
+    .label = N_("Design basis"), .report = "Design basis", .sheet = N_("Design basis"), .choices = design_basis_choices,
     .since_minor = 2 },
   { .element = "code-edition", .kind = HL_FIELD_TEXT, SHELL (code_edition), TEXT_SIZE (HlShellInputs, code_edition),
-    .label = "Code edition", .tooltip = "Shown on every clause, e.g. the year of the edition",
+    .label = N_("Code edition"), .tooltip = N_("Shown on every clause, e.g. the year of the edition"),
     .report = "Code edition", .since_minor = 2 },
+  /* the test pressure, format 1.2 (METHODS-NEXT §E) */
+  { .element = "test-rule", .kind = HL_FIELD_CHOICE, SHELL (test_rule), .default_value = HL_TEST_UG99_HYDROSTATIC,
+    .label = N_("Test rule"), .report = "Test rule", .sheet = N_("Test rule"), .choices = test_rule_choices,
+    .since_minor = 2 },
+  /* LSR (ASME) or fa/fTd (EN).  A test runs near ambient, where a metal
+   * is seldom weaker than at its design temperature (allowables below
+   * ambient are the ambient ones, common practice): under half is a
+   * slip.  Creep-range allowables fall to about a fifteenth of the
+   * room-temperature value at the top of the tables (from memory):
+   * past 20 is a slip. */
+  { .element = "test-stress-ratio", .kind = HL_FIELD_RATIO, SHELL (test_stress_ratio), .bounded = TRUE,
+    .min_si = 0.5, .max_si = 20.0,
+    .range_message = N_("must be at least 0.5 and at most 20 (allowable stress at test temperature over the one "
+                        "at design temperature)"),
+    .default_value = 1.0, .label = N_("Stress ratio for the test"),
+    .tooltip = N_("Allowable stress at test temperature over the one at design temperature; the lowest of the "
+                  "pressure parts' materials"),
+    .report = "Stress ratio at test (LSR, fa/fTd)", .sheet = N_("Stress ratio at test (LSR, fa/fTd)"),
+    .since_minor = 2 },
+  /* PED PS: the bounds of the pressures; 0: not given */
+  { .element = "maximum-allowable-pressure-ps", .kind = HL_FIELD_PRESSURE, SHELL (test_ps),
+    .zero_allowed = TRUE, .bounded = TRUE, .min_si = 1e-6, .max_si = 1e10, .min_text = "1 µPa",
+    .max_text = "10 GPa", .why_min = N_("no gauge reads less; 0 means the design pressure"), .default_value = 0,
+    .default_unit = "bar", .label = N_("Maximum allowable pressure PS"),
+    .tooltip = N_("PED 2014/68/EU; 0: the design pressure stands in"),
+    .report = "Maximum allowable pressure PS (PED)", .sheet = N_("Maximum allowable pressure PS (PED)"),
+    .since_minor = 2 },
 };
 
 guint

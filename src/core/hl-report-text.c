@@ -8,6 +8,7 @@
 #include "hl-field-table.h"
 #include "hl-result-rows.h"
 #include "hl-design-check.h"
+#include "hl-test-pressure.h"
 
 #include <math.h>
 
@@ -278,6 +279,122 @@ put_design_check (GString          *out,
     g_string_append_printf (out, "  DANGER: %s\n", c->bursts ? "the wall would burst" : "the wall yields at the bore");
 }
 
+/* "1.52034 MPa", or "n/a (reason)" */
+static char *
+test_value (HlResult    r,
+            double      factor,
+            const char *unit)
+{
+  g_autofree char *num = NULL;
+
+  if (!hl_result_ok (r))
+    return hl_report_escape_line (r.reason != NULL ? r.reason : "not computable");
+  num = hl_format_significant (r.value / factor, REPORT_DIGITS);
+  return g_strdup_printf ("%s %s", num, unit);
+}
+
+static void
+put_test_stress (GString            *out,
+                 const HlTestStress *st,
+                 const char         *pu,
+                 double              pf)
+{
+  g_autofree char *sv = test_value (st->stress, pf, pu);
+
+  g_string_append_printf (out, "  %s:\n    %s", st->basis, sv);
+  if (hl_result_ok (st->of_yield))
+    g_string_append_printf (out, " = %.1f %% of yield", 100 * st->of_yield.value);
+  if (hl_result_ok (st->utilisation))
+    g_string_append_printf (out, ", %.1f %% of the limit", 100 * st->utilisation.value);
+  g_string_append_printf (out, ": %s\n", hl_test_verdict_word (st->verdict));
+}
+
+static void
+put_test_pressure (GString          *out,
+                   const HlSolution *s,
+                   HlUnitSystem      system)
+{
+  const HlTestPressure *t = s->test;
+  const HlField *rule_field = hl_field_find (HL_FIELD_OF_SHELL, "test-rule");
+  const HlFieldChoice *chosen = hl_field_choice_by_value (rule_field, t->checked_rule);
+  gboolean us = system == HL_UNIT_SYSTEM_US;
+  const char *pu = us ? "psi" : "MPa";
+  double pf = us ? 6894.757293168 : 1e6;
+  HlResult mawp = { s->test_mawp, NULL }, ps = { s->test_ps, NULL };
+  g_autofree char *lsr = hl_format_significant (s->inputs.test_stress_ratio, 6);
+  g_autofree char *mawp_text = test_value (mawp, pf, pu);
+  g_autofree char *ps_text = test_value (ps, pf, pu);
+  g_autofree char *limit = test_value (t->limit, pf, pu);
+  g_autofree char *yield = hl_format_significant (s->yield / pf, REPORT_DIGITS);
+
+  rule (out, "Test pressure (corroded wall)");
+  g_string_append_printf (out, "  Chosen rule: %s\n", chosen != NULL ? chosen->report : "");
+  g_string_append_printf (out, "  Stress ratio LSR (fa/fTd in EN words) = %s: allowable stress at test temperature\n"
+                               "    over the one at design temperature, the lowest of the pressure parts' materials\n",
+                          lsr);
+  g_string_append_printf (out, "  MAWP the ASME rules multiply: %s%s\n", mawp_text,
+                          s->test_mawp_is_design_pressure ? " (the design pressure in its place, UG-99(b) footnote)"
+                                                          : "");
+  g_string_append_printf (out, "  PS (PED) = %s%s\n", ps_text,
+                          hl_quantity_si (s->inputs.test_ps, HL_KIND_STRESS) > 0 ? ""
+                                                                                 : " (not given: the design pressure)");
+  for (int i = 0; i < HL_TEST_N_RULES; i++)
+    {
+      const HlTestRulePressure *r = &t->rules[i];
+      g_autofree char *pt = test_value (r->pressure, pf, pu);
+      g_autofree char *insp = test_value (r->inspection, pf, pu);
+      g_autofree char *source = hl_report_escape_line (s->test_sources[i]);
+
+      g_string_append_printf (out, "  %s\n    PT = %s", source, pt);
+      if (hl_result_ok (r->pressure))
+        {
+          if (r->data->ps_factor > 0)
+            {
+              g_autofree char *a = test_value (r->terms[0], pf, pu);
+              g_autofree char *b = test_value (r->terms[1], pf, pu);
+
+              g_string_append_printf (out, " = max(%s, %s)", a, b);
+            }
+          if (r->data->inspection_divisor > 0)
+            {
+              g_autofree char *div = hl_format_significant (r->data->inspection_divisor, 3);
+
+              g_string_append_printf (out, "; inspection pressure %s (%s: PT / %s)", insp, r->data->inspection_clause,
+                                      div);
+            }
+          else
+            g_string_append_printf (out, "; %s", r->data->no_inspection);
+        }
+      g_string_append_c (out, '\n');
+    }
+  g_string_append_printf (out, "  Stress at the test pressure of the chosen rule, against %s = %s\n"
+                               "    (yield strength as entered, %s %s, taken for the test temperature)\n",
+                          t->limit_words, limit, yield, pu);
+  put_test_stress (out, &t->membrane, pu, pf);
+  put_test_stress (out, &t->peak, pu, pf);
+  if (s->test_check == HL_CHECK_FAIL)
+    g_string_append (out, "  Result: FAIL: the stress at the test pressure exceeds the limit; lower the test\n"
+                          "    pressure (where the rule allows) or thicken the wall.\n");
+  else if (s->test_check == HL_CHECK_PASS)
+    g_string_append (out, "  Result: PASS: the stress at the test pressure is within the limit.\n");
+  else
+    g_string_append (out, "  Result: NOT APPLICABLE: the stress at test could not be checked.\n");
+  if (hl_result_ok (t->membrane.of_yield) && t->membrane.of_yield.value > 1.0)
+    g_string_append (out, "  DANGER: at the test pressure the general membrane stress is above yield: the wall\n"
+                          "    would deform permanently in the test.\n");
+  if (t->checked_rule == HL_TEST_UG100_PNEUMATIC)
+    {
+      g_autofree char *kj = hl_format_significant (t->stored_energy.value / 1e3, 4);
+      g_autofree char *energy = hl_result_ok (t->stored_energy) ? g_strdup_printf ("%s kJ", kj)
+                                                                : hl_report_escape_line (t->stored_energy.reason);
+
+      g_string_append_printf (out, "  HAZARD: a pneumatic test stores far more energy than a hydrostatic one; a rupture\n"
+                                   "    throws fragments. Keep people clear; test with water where the vessel allows.\n"
+                                   "    Stored energy (ASME PCC-2, adiabatic): %s.\n", energy);
+    }
+  g_string_append (out, "  UG-99(c), the calculated test pressure, is not covered.\n");
+}
+
 static const char *
 measure_word (HlVerdictMeasure m)
 {
@@ -377,6 +494,7 @@ hl_report_text (const HlProject  *project,
   put_inputs (out, &corroded->inputs);
   put_methods (out);
   put_design_check (out, corroded, system);
+  put_test_pressure (out, corroded, system);
   put_results (out, new_wall, corroded, system);
   put_verdict (out, corroded, system);
 

@@ -6,6 +6,7 @@
 
 #include "hl-config.h"
 #include "hl-result-rows.h"
+#include "hl-test-pressure.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -36,29 +37,6 @@ word (GArray     *rows,
   g_array_append_val (rows, r);
 }
 
-/* Rows of the design check (issue 10).  Their labels have no German yet
- * (po/de.po; tests/desktop/test-translation lists them as known gaps),
- * so they are not the row() the template extraction picks up. */
-static void
-check_row (GArray     *rows,
-           const char *key,
-           const char *label,
-           HlRowKind   kind,
-           HlResult    result,
-           const char *source)
-{
-  row (rows, key, label, kind, result, source);
-}
-
-static void
-check_word (GArray     *rows,
-            const char *key,
-            const char *label,
-            const char *value)
-{
-  word (rows, key, label, value);
-}
-
 static HlResult
 percent_of (double fraction)
 {
@@ -67,7 +45,7 @@ percent_of (double fraction)
   if (!isfinite (fraction))
     {
       r.value = NAN;
-      r.reason = "no value for this method";
+      r.reason = N_("no value for this method");
     }
   return r;
 }
@@ -84,28 +62,52 @@ design_check_rows (GArray           *rows,
     "check_ug27", "check_en13445", "check_lame", "check_thin",
   };
   static const char *const utilisation_labels[HL_N_METHODS] = {
-    "Utilisation, ASME VIII-1 UG-27", "Utilisation, EN 13445-3 7.4", "Utilisation, Lamé", "Utilisation, thin-wall",
+    N_("Utilisation, ASME VIII-1 UG-27"), N_("Utilisation, EN 13445-3 7.4"), N_("Utilisation, Lamé"),
+    N_("Utilisation, thin-wall"),
   };
   static const char *const check_labels[HL_N_METHODS] = {
-    "Check, ASME VIII-1 UG-27", "Check, EN 13445-3 7.4", "Check, Lamé", "Check, thin-wall",
+    N_("Check, ASME VIII-1 UG-27"), N_("Check, EN 13445-3 7.4"), N_("Check, Lamé"), N_("Check, thin-wall"),
   };
   HlResult available = { c->available, NULL };
 
-  check_word (rows, "design_basis", "Design basis", hl_design_basis_to_string (c->basis));
-  check_word (rows, "design_verdict", "Design verdict", hl_check_result_to_string (c->verdict));
-  check_word (rows, "governing_check", "Governing check", c->governing);
-  check_row (rows, "utilisation", "Utilisation (design basis)", HL_ROW_PERCENT, percent_of (c->utilisation),
-             "design pressure / MAWP");
-  check_row (rows, "available_thickness", "Available thickness (nominal - corrosion - mill)", HL_ROW_LENGTH,
-             available, c->mill_text);
+  word (rows, "design_basis", "Design basis", hl_design_basis_to_string (c->basis));
+  word (rows, "design_verdict", "Design verdict", hl_check_result_to_string (c->verdict));
+  word (rows, "governing_check", "Governing check", c->governing);
+  row (rows, "utilisation", "Utilisation (design basis)", HL_ROW_PERCENT, percent_of (c->utilisation),
+       "design pressure / MAWP");
+  row (rows, "available_thickness", "Available thickness (nominal - corrosion - mill)", HL_ROW_LENGTH,
+       available, c->mill_text);
   for (int m = 0; m < HL_N_METHODS; m++)
     {
       const HlMethodCheck *mc = &c->methods[m];
       double u = isfinite (mc->utilisation_pressure) ? mc->utilisation_pressure : mc->utilisation_thickness;
 
-      check_row (rows, utilisation_keys[m], utilisation_labels[m], HL_ROW_PERCENT, percent_of (u), mc->clause);
-      check_word (rows, check_keys[m], check_labels[m], hl_check_result_to_string (mc->result));
+      row (rows, utilisation_keys[m], utilisation_labels[m], HL_ROW_PERCENT, percent_of (u), mc->clause);
+      word (rows, check_keys[m], check_labels[m], hl_check_result_to_string (mc->result));
     }
+}
+
+/* Rows of the test pressure (METHODS-NEXT §E): every rule's PT, then
+ * the inspection pressure and the stresses of the chosen rule's */
+static void
+test_pressure_rows (GArray           *rows,
+                    const HlSolution *s)
+{
+  const HlTestPressure *t = s->test;
+  const HlTestRulePressure *chosen = &t->rules[t->checked_rule];
+
+  row (rows, "test_pressure_hydrostatic", "Test pressure, UG-99(b) hydrostatic", HL_ROW_STRESS,
+       t->rules[HL_TEST_UG99_HYDROSTATIC].pressure, s->test_sources[HL_TEST_UG99_HYDROSTATIC]);
+  row (rows, "test_pressure_pneumatic", "Test pressure, UG-100 pneumatic", HL_ROW_STRESS,
+       t->rules[HL_TEST_UG100_PNEUMATIC].pressure, s->test_sources[HL_TEST_UG100_PNEUMATIC]);
+  row (rows, "test_pressure_en13445", "Test pressure, EN 13445-5 / PED", HL_ROW_STRESS,
+       t->rules[HL_TEST_EN13445_HYDROSTATIC].pressure, s->test_sources[HL_TEST_EN13445_HYDROSTATIC]);
+  row (rows, "membrane_stress_at_test", "General membrane stress at test", HL_ROW_STRESS, t->membrane.stress,
+       t->membrane.basis);
+  row (rows, "inspection_pressure", "Inspection pressure (chosen test rule)", HL_ROW_STRESS, chosen->inspection,
+       chosen->data->inspection_clause != NULL ? chosen->data->inspection_clause : chosen->data->clause);
+  row (rows, "peak_stress_at_test", "Peak von Mises stress at test", HL_ROW_STRESS, t->peak.stress, t->peak.basis);
+  word (rows, "check_test", "Stress check at test (0.90 × yield)", hl_check_result_to_string (s->test_check));
 }
 
 static const char *
@@ -176,16 +178,16 @@ hl_result_rows (const HlSolution *s)
   row (rows, "max_allowable_pressure_thin", "Max. allowable pressure, thin-wall", HL_ROW_STRESS, s->mawp_thin, LOAD_PATH);
   row (rows, "max_allowable_pressure_lame", "Max. allowable pressure, Lamé", HL_ROW_STRESS, s->mawp_lame,
        in->sizing_criterion == HL_CRITERION_TRESCA ? "Lamé, Tresca; " LOAD_PATH : "Lamé, von Mises; " LOAD_PATH);
-  check_row (rows, "required_thickness_thin", "Required thickness, thin-wall (incl. corrosion allowance)", HL_ROW_LENGTH,
-             s->treq_thin, NULL);
-  check_row (rows, "required_thickness_lame", "Required thickness, Lamé (incl. corrosion allowance)", HL_ROW_LENGTH,
-             s->treq_lame, in->sizing_criterion == HL_CRITERION_TRESCA ? "Lamé, Tresca" : "Lamé, von Mises");
-  check_row (rows, "required_thickness_ug27", "Required thickness, ASME VIII-1 (incl. corrosion allowance)",
-             HL_ROW_LENGTH, s->treq_ug27, s->ug27_source);
+  row (rows, "required_thickness_thin", "Required thickness, thin-wall (incl. corrosion allowance)", HL_ROW_LENGTH,
+       s->treq_thin, NULL);
+  row (rows, "required_thickness_lame", "Required thickness, Lamé (incl. corrosion allowance)", HL_ROW_LENGTH,
+       s->treq_lame, in->sizing_criterion == HL_CRITERION_TRESCA ? "Lamé, Tresca" : "Lamé, von Mises");
+  row (rows, "required_thickness_ug27", "Required thickness, ASME VIII-1 (incl. corrosion allowance)",
+       HL_ROW_LENGTH, s->treq_ug27, s->ug27_source);
   row (rows, "max_allowable_pressure_ug27", "Max. allowable pressure, ASME VIII-1", HL_ROW_STRESS, s->mawp_ug27,
        s->ug27_source);
-  check_row (rows, "required_thickness_en13445", "Required thickness, EN 13445-3 (incl. corrosion allowance)",
-             HL_ROW_LENGTH, s->treq_en13445, s->en13445_source);
+  row (rows, "required_thickness_en13445", "Required thickness, EN 13445-3 (incl. corrosion allowance)",
+       HL_ROW_LENGTH, s->treq_en13445, s->en13445_source);
   row (rows, "max_allowable_pressure_en13445", "Max. allowable pressure, EN 13445-3", HL_ROW_STRESS, s->mawp_en13445,
        s->en13445_source);
   /* Ej, the joint efficiency, not the modulus E */
@@ -198,6 +200,7 @@ hl_result_rows (const HlSolution *s)
   row (rows, "bore_volume_strain", "Bore volume strain dV/V", HL_ROW_RATIO, s->volume_strain, "Lamé");
   /* issue 10: appended, so the keys before keep their places */
   design_check_rows (rows, s);
+  test_pressure_rows (rows, s);
   return rows;
 }
 

@@ -262,7 +262,7 @@ check_design_wall (GPtrArray           *problems,
 
   if (m > 0.0 && t - c - m < HL_MIN_WALL_M)
     add (problems, mp > ml ? "mill-undertolerance-percent" : "mill-undertolerance",
-         say ("with the corrosion allowance leaves less than 0.01 mm of wall"));
+         say (N_("with the corrosion allowance leaves less than 0.01 mm of wall")));
 }
 
 /* A name is one line: a line break in it could forge a line of the
@@ -353,7 +353,7 @@ hl_shell_inputs_check (const HlShellInputs *in)
           else if (f->owner == HL_FIELD_OF_SHELL && strcmp (f->element, "material-ref") != 0
                    && hl_text_has_control (hl_field_cslot (f, in), FALSE))
             add (problems, f->element,
-                 say ("holds a control character (a line break, tab or the like): it is one line of text"));
+                 say (N_("holds a control character (a line break, tab or the like): it is one line of text")));
           continue;
         }
       msg = field_check (f, hl_field_cslot (f, in));

@@ -79,6 +79,10 @@ typedef struct
   HlQuantity       mill_tolerance_percent;  /* of the nominal wall */
   char             code_edition[HL_NAME_MAX];
   gboolean         external_coincident; /* external pressure always acts with the internal */
+  /* the test pressure (format 1.2) */
+  int              test_rule;           /* an HlTestRule (hl-test-pressure.h) */
+  double           test_stress_ratio;   /* allowable at test / at design temperature, the lowest part's */
+  HlQuantity       test_ps;             /* PS (PED); 0: not given, the design pressure stands in */
 } HlShellInputs;
 
 /* Defaults of DESIGN.md §3: closed cylinder, no corrosion, no external

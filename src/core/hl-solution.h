@@ -28,6 +28,9 @@ typedef struct
   const char *reason;
 } HlResult;
 
+/* hl-test-pressure.h */
+typedef struct _HlTestPressure HlTestPressure;
+
 typedef struct
 {
   HlShellInputs inputs;
@@ -75,6 +78,14 @@ typedef struct
   char ug27_source[160];        /* clause, edition and the pressure taken */
   char en13445_source[160];
   HlDesignCheck check;          /* PASS / FAIL, read by every output */
+  /* the test pressure of every rule and the stress check at test of the
+   * chosen one (hl-test-pressure.h); owned */
+  HlTestPressure *test;
+  double   test_mawp;           /* what the ASME rules multiply */
+  gboolean test_mawp_is_design_pressure;
+  double   test_ps;             /* PS the PED rule took */
+  char     test_sources[3][240]; /* per HlTestRule: clause, formula, the pressures taken */
+  HlCheckResult test_check;     /* worst of the stress checks at test; NOT_APPLICABLE: none done */
 
   GPtrArray *warnings;          /* char * */
 } HlSolution;

@@ -13,6 +13,7 @@
 #include "hl-sizing.h"
 #include "hl-design-codes.h"
 #include "hl-number-format.h"
+#include "hl-test-pressure.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -20,9 +21,11 @@
 #define RULE_OF_THUMB_RATIO 10.0   /* common practice: R/t >= 10 is thin */
 /* until the external-pressure checks exist, no internal-pressure sizing
  * stands in for them */
-#define BUCKLING_GOVERNS "buckling governs; see the external-pressure check"
+#define BUCKLING_GOVERNS N_("buckling governs; see the external-pressure check")
 
 G_DEFINE_QUARK (hl-solve-error-quark, hl_solve_error)
+
+G_STATIC_ASSERT (G_N_ELEMENTS (((HlSolution *) NULL)->test_sources) == HL_TEST_N_RULES);
 
 static HlResult
 ok (double value)
@@ -201,7 +204,7 @@ solve_yield_and_collapse (HlSolution *s)
    * the internal pressure raised, the external held at its value */
   if (s->pi == s->po && s->pi > 0.0)
     {
-      s->first_yield_von_mises = na ("no deviatoric stress: the internal and external pressures are equal");
+      s->first_yield_von_mises = na (N_("no deviatoric stress: the internal and external pressures are equal"));
       s->first_yield_tresca = s->first_yield_von_mises;
     }
   else
@@ -360,6 +363,129 @@ solve_design_check (HlSolution *s)
   hl_design_check_run (&d, &s->check);
 }
 
+/* The pressure the ASME test rules multiply: the MAWP of the design
+ * basis's own method, where it has one (@words names it; NULL: UG-27's).  The EN basis has no ASME MAWP
+ * of its own, so the ASME rules take UG-27's there too (the EN rule
+ * takes Pd).  Without one the design pressure stands in, as the
+ * footnote to UG-99(b) allows. */
+static HlResult
+test_mawp (const HlSolution *s,
+           const char      **words)
+{
+  switch (s->inputs.design_basis)
+    {
+    case HL_DESIGN_BASIS_LAME:
+      *words = s->inputs.sizing_criterion == HL_CRITERION_TRESCA ? "MAWP of the Lamé basis (peak Tresca = S Ej)"
+                                                                  : "MAWP of the Lamé basis (peak von Mises = S Ej)";
+      return s->mawp_lame;
+    case HL_DESIGN_BASIS_THIN:
+      *words = "MAWP of the thin-wall basis (membrane stress = S Ej)";
+      return s->mawp_thin;
+    case HL_DESIGN_BASIS_UG27:
+    case HL_DESIGN_BASIS_EN13445:
+    default:
+      *words = NULL;
+      return s->mawp_ug27;
+    }
+}
+
+static void
+test_source (HlSolution *s,
+             HlTestRule  rule,
+             const char *pressure_words)
+{
+  const HlTestRulePressure *r = &s->test->rules[rule];
+  g_autofree char *lsr = hl_format_significant (s->inputs.test_stress_ratio, 6);
+
+  g_snprintf (s->test_sources[rule], sizeof s->test_sources[rule], "%s%s%s%s; %s; %s = %s%s%s", r->data->formula,
+              r->edition != NULL ? " (" : "", r->edition != NULL ? r->edition : "", r->edition != NULL ? ")" : "",
+              pressure_words, rule == HL_TEST_EN13445_HYDROSTATIC ? "fa/fTd" : "LSR", lsr,
+              r->governing_words != NULL ? "; " : "", r->governing_words != NULL ? r->governing_words : "");
+}
+
+static HlCheckResult
+test_check (const HlTestPressure *t)
+{
+  HlTestVerdict m = t->membrane.verdict, p = t->peak.verdict;
+
+  if (m == HL_TEST_CHECK_FAIL || p == HL_TEST_CHECK_FAIL)
+    return HL_CHECK_FAIL;
+  if (m == HL_TEST_CHECK_PASS || p == HL_TEST_CHECK_PASS)
+    return HL_CHECK_PASS;
+  return HL_CHECK_NOT_APPLICABLE;
+}
+
+/* Every test rule's pressure and the stress check at the chosen one's,
+ * on the analysis wall (METHODS-NEXT §E) */
+static void
+solve_test_pressure (HlSolution *s)
+{
+  const HlShellInputs *in = &s->inputs;
+  HlTestInputs t = hl_test_inputs_default ();
+  const char *mawp_words = NULL;
+  HlResult mawp = test_mawp (s, &mawp_words);
+  double ps = hl_quantity_si (in->test_ps, HL_KIND_STRESS);
+  HlLame unit;
+  char asme[200], en[200];
+  g_autofree char *ps_words = NULL;
+
+  s->test_mawp_is_design_pressure = !hl_result_ok (mawp);
+  s->test_mawp = s->test_mawp_is_design_pressure ? s->pi : mawp.value;
+  s->test_ps = ps > 0 ? ps : s->pi;
+  t.mawp = s->test_mawp;
+  t.mawp_is_design_pressure = s->test_mawp_is_design_pressure;
+  t.design_pressure = s->pi;
+  t.ps = s->test_ps;
+  t.stress_ratio = in->test_stress_ratio;
+  /* the yield strength as entered stands for the one at test
+   * temperature: a test runs near ambient, where it is not lower */
+  t.yield_at_test = s->yield;
+  t.rule = (HlTestRule) CLAMP (in->test_rule, 0, HL_TEST_N_RULES - 1);
+  t.asme_edition = in->code_edition;
+  t.en_edition = in->code_edition;
+  t.form = in->form;
+  t.inner_radius = s->a;
+  t.thickness = s->t;
+  /* Lamé is linear in the pressure: the peak at 1 Pa inside alone,
+   * the outside at atmosphere as in the test */
+  hl_lame_init (&unit, in->form, in->ends, s->a, s->b, 1.0, 0.0, s->lame.E, s->lame.nu);
+  t.peak_equivalent_per_pa = hl_lame_peak_equivalent (&unit, HL_CRITERION_VON_MISES);
+  s->test = hl_test_pressure_new (&t);
+  s->test_check = test_check (s->test);
+
+  if (s->test_mawp_is_design_pressure)
+    g_snprintf (asme, sizeof asme, "MAWP: design pressure in its place (UG-99(b) footnote; %s: %s)",
+                mawp_words != NULL ? mawp_words : "MAWP of ASME VIII-1 UG-27",
+                mawp.reason != NULL ? mawp.reason : "not computable");
+  else if (mawp_words == NULL)
+    /* UG-27's own: the clause that governs it */
+    g_snprintf (asme, sizeof asme, "MAWP of ASME VIII-1 %s, of the analysis wall",
+                s->ug27_clause != NULL ? s->ug27_clause : "UG-27");
+  else
+    g_snprintf (asme, sizeof asme, "%s, of the analysis wall", mawp_words);
+  ps_words = ps > 0 ? g_strdup ("PS as given") : g_strdup ("PS not given: the design pressure");
+  g_snprintf (en, sizeof en, "Pd = internal design pressure; %s", ps_words);
+  test_source (s, HL_TEST_UG99_HYDROSTATIC, asme);
+  test_source (s, HL_TEST_UG100_PNEUMATIC, asme);
+  test_source (s, HL_TEST_EN13445_HYDROSTATIC, en);
+}
+
+static void
+collect_test_warnings (HlSolution *s)
+{
+  const HlTestPressure *t = s->test;
+
+  if (t->membrane.verdict == HL_TEST_CHECK_FAIL)
+    warn (s, "%s", N_("at the test pressure the general membrane stress exceeds 0.90 × yield (common practice; "
+                      "ASME VIII-1 gives no number): lower the test pressure or thicken the wall"));
+  if (t->peak.verdict == HL_TEST_CHECK_FAIL)
+    warn (s, "%s", N_("at the test pressure the peak von Mises stress exceeds 0.90 × yield (common practice): "
+                      "the bore may yield during the test"));
+  if (t->checked_rule == HL_TEST_UG100_PNEUMATIC)
+    warn (s, "%s", N_("a pneumatic test stores far more energy than a hydrostatic one: a rupture throws fragments; "
+                      "keep people clear and test with water where the vessel allows"));
+}
+
 static void
 collect_warnings (HlSolution *s)
 {
@@ -387,6 +513,7 @@ collect_warnings (HlSolution *s)
     warn (s, N_("the allowable stress is above the yield strength: check the material data"));
   if (!s->is_thin && (s->pi != 0.0 || s->po != 0.0))
     warn (s, N_("the thin-wall formulas are outside the tolerance here: use the Lamé (thick-wall) results"));
+  collect_test_warnings (s);
 }
 
 HlSolution *
@@ -446,6 +573,7 @@ hl_solve (const HlShellInputs *in,
   solve_yield_and_collapse (s);
   solve_allowables (s);
   solve_design_check (s);
+  solve_test_pressure (s);
   collect_warnings (s);
   return s;
 }
@@ -456,6 +584,7 @@ hl_solution_free (HlSolution *solution)
   if (solution == NULL)
     return;
   g_free (solution->points);
+  g_clear_pointer (&solution->test, hl_test_pressure_free);
   g_clear_pointer (&solution->warnings, g_ptr_array_unref);
   g_free (solution);
 }

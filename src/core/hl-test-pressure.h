@@ -102,7 +102,8 @@ typedef struct
   const char   *basis;              /* N_() words: which stress, which formula */
 } HlTestStress;
 
-typedef struct
+/* typedef in hl-solution.h, which holds one */
+struct _HlTestPressure
 {
   HlTestRulePressure rules[HL_TEST_N_RULES];
   HlTestRule   checked_rule;
@@ -112,7 +113,7 @@ typedef struct
   HlTestStress peak;                /* Lamé peak von Mises */
   HlResult     stored_energy;       /* J, for the pneumatic rule's PT */
   double       atmospheric, gamma;  /* the ones the energy used */
-} HlTestPressure;
+};
 
 /* MAWP, Pd, PS, R, t, peak, yield, volume not given; ratio 1, limit 0.90,
  * UG-99(b), cylinder, 101 325 Pa, γ = 1.4. */

@@ -174,7 +174,8 @@ test_summary_keys (void)
   g_autoptr(HlSolution) s = hlt_solve (&in, 11);
   g_autoptr(GArray) rows = hl_result_rows (s);
   g_autofree char *block = hl_report_summary_block (s, HL_UNIT_SYSTEM_SI);
-  guint first = rows->len - G_N_ELEMENTS (keys);
+  /* the test pressure's keys follow these (test-test-solution) */
+  guint first = hl_result_rows_find (rows, "design_basis") - (const HlResultRow *) (gpointer) rows->data;
 
   for (guint i = 0; i < G_N_ELEMENTS (keys); i++)
     g_assert_cmpstr (g_array_index (rows, HlResultRow, first + i).key, ==, keys[i]);
