@@ -323,8 +323,20 @@ hl_application_default_shell (HlApplication *self)
       shell.external_pressure = hl_quantity_make (0, "psi");
     }
   shell.thin_tolerance = hl_quantity_make (g_settings_get_double (self->settings, "default-tolerance"), "%");
-  shell.verdict_measure = g_settings_get_enum (self->settings, "default-verdict-measure") == 1
-                          ? HL_MEASURE_EQUIVALENT : HL_MEASURE_HOOP;
+  switch (g_settings_get_enum (self->settings, "default-verdict-measure"))
+    {
+    case 0:
+      shell.verdict_measure = HL_MEASURE_HOOP;
+      break;
+    case 1:
+      shell.verdict_measure = HL_MEASURE_EQUIVALENT;
+      break;
+    default:
+      shell.verdict_measure = HL_MEASURE_BOTH;
+    }
+  /* the schema's values follow HlDesignBasis */
+  shell.design_basis = (HlDesignBasis) CLAMP (g_settings_get_enum (self->settings, "default-design-basis"),
+                                              HL_DESIGN_BASIS_UG27, HL_DESIGN_BASIS_THIN);
   return shell;
 }
 

@@ -38,7 +38,8 @@ static GParamSpec *properties[N_PROPS];
 enum { EDITED, N_SIGNALS };
 static guint signals[N_SIGNALS];
 
-static const char *const kind_names[] = { "length", "stress", "percent", "ratio", "modulus" };
+/* in the order of HlQuantityKind */
+static const char *const kind_names[] = { "length", "stress", "percent", "ratio", "modulus", "temperature" };
 
 /* A value with its unit is a few dozen characters; anything much longer
  * is a paste gone wrong.  The field holds somewhat more than it reads, so

@@ -35,6 +35,12 @@ struct _HlShellEditor
   GtkDropDown     *basis_dropdown;
   GtkDropDown     *measure_dropdown;
   GtkDropDown     *criterion_dropdown;
+  GtkDropDown     *design_basis_dropdown;
+  GtkDropDown     *coincident_dropdown;
+  GtkDropDown     *test_rule_dropdown;
+  GtkEntry        *code_edition_entry;
+  GtkEntry        *material_spec_entry;
+  GtkEntry        *allowable_source_entry;
 
   HlDocument      *document;
   GSignalGroup    *follower;      /* calls on_document_changed_cb */
@@ -42,6 +48,33 @@ struct _HlShellEditor
 
 
 static void on_name_entry_changed_cb (GtkEntry *entry, HlShellEditor *self);
+static void on_text_entry_changed_cb (GtkEntry *entry, HlShellEditor *self);
+
+/* the drop-downs of the table's choice rows and the entries of its text
+ * rows, each knowing its element by the "hl-field" data */
+#define N_CHOICES 6
+#define N_TEXTS 3
+
+static void
+choice_dropdowns (HlShellEditor *self,
+                  GtkDropDown   *out[N_CHOICES])
+{
+  out[0] = self->basis_dropdown;
+  out[1] = self->measure_dropdown;
+  out[2] = self->criterion_dropdown;
+  out[3] = self->design_basis_dropdown;
+  out[4] = self->coincident_dropdown;
+  out[5] = self->test_rule_dropdown;
+}
+
+static void
+text_entries (HlShellEditor *self,
+              GtkEntry      *out[N_TEXTS])
+{
+  out[0] = self->code_edition_entry;
+  out[1] = self->material_spec_entry;
+  out[2] = self->allowable_source_entry;
+}
 
 G_DEFINE_FINAL_TYPE (HlShellEditor, hl_shell_editor, GTK_TYPE_BOX)
 
@@ -132,9 +165,21 @@ sync_widgets (HlShellEditor       *self,
       if (f != NULL && hl_field_is_number (f) && hl_document_get_input_error (self->document, field) == NULL)
         hl_quantity_rows_show (rows[i], hl_quantity_rows_value (f, shell));
     }
-  sync_dropdown (self->basis_dropdown, choice_position (shell, "thin-radius-basis"));
-  sync_dropdown (self->measure_dropdown, choice_position (shell, "verdict-measure"));
-  sync_dropdown (self->criterion_dropdown, choice_position (shell, "sizing-criterion"));
+  {
+    GtkDropDown *choices[N_CHOICES];
+    GtkEntry *texts[N_TEXTS];
+
+    choice_dropdowns (self, choices);
+    for (guint i = 0; i < N_CHOICES; i++)
+      sync_dropdown (choices[i], choice_position (shell, g_object_get_data (G_OBJECT (choices[i]), "hl-field")));
+    text_entries (self, texts);
+    for (guint i = 0; i < N_TEXTS; i++)
+      {
+        const HlField *f = hl_field_lookup (g_object_get_data (G_OBJECT (texts[i]), "hl-field"));
+
+        hl_quantity_rows_show_name (texts[i], hl_field_cslot (f, shell), (gpointer) on_text_entry_changed_cb, self);
+      }
+  }
   hl_quantity_rows_mark (rows, self->document);
 }
 
@@ -233,6 +278,27 @@ on_name_entry_changed_cb (GtkEntry      *entry,
     commit_shell (self, &shell, "name");
 }
 
+/* a text row of the table (code edition, material specification, …) */
+static void
+on_text_entry_changed_cb (GtkEntry      *entry,
+                          HlShellEditor *self)
+{
+  const HlShellInputs *current = current_shell (self);
+  const char *element = g_object_get_data (G_OBJECT (entry), "hl-field");
+  const HlField *f = hl_field_lookup (element);
+  HlShellInputs shell;
+  char *slot;
+
+  if (current == NULL || f == NULL)
+    return;
+  shell = *current;
+  slot = hl_field_slot (f, &shell);
+  hl_utf8_copy (slot, gtk_editable_get_text (GTK_EDITABLE (entry)), f->text_size);
+  g_strstrip (slot);
+  if (strcmp (slot, (const char *) hl_field_cslot (f, current)) != 0)
+    commit_shell (self, &shell, element);
+}
+
 static void
 hl_shell_editor_dispose (GObject *object)
 {
@@ -265,11 +331,18 @@ hl_shell_editor_class_init (HlShellEditorClass *klass)
   CHILD (basis_dropdown);
   CHILD (measure_dropdown);
   CHILD (criterion_dropdown);
+  CHILD (design_basis_dropdown);
+  CHILD (coincident_dropdown);
+  CHILD (test_rule_dropdown);
+  CHILD (code_edition_entry);
+  CHILD (material_spec_entry);
+  CHILD (allowable_source_entry);
 #undef CHILD
 #define CALLBACK(name) gtk_widget_class_bind_template_callback (widget_class, name)
   CALLBACK (on_row_edited_cb);
   CALLBACK (on_dropdown_selected_cb);
   CALLBACK (on_name_entry_changed_cb);
+  CALLBACK (on_text_entry_changed_cb);
 #undef CALLBACK
 }
 
@@ -282,6 +355,27 @@ hl_shell_editor_init (HlShellEditor *self)
   fill_choices (self->basis_dropdown, "thin-radius-basis");
   fill_choices (self->measure_dropdown, "verdict-measure");
   fill_choices (self->criterion_dropdown, "sizing-criterion");
+  fill_choices (self->design_basis_dropdown, "design-basis");
+  fill_choices (self->coincident_dropdown, "external-pressure-coincident");
+  fill_choices (self->test_rule_dropdown, "test-rule");
+  {
+    GtkEntry *texts[N_TEXTS];
+    static const char *const elements[N_TEXTS] = { "code-edition", "material-specification",
+                                                   "allowable-stress-source" };
+
+    text_entries (self, texts);
+    for (guint i = 0; i < N_TEXTS; i++)
+      {
+        const HlField *f = hl_field_lookup (elements[i]);
+
+        g_object_set_data (G_OBJECT (texts[i]), "hl-field", (gpointer) elements[i]);
+        gtk_editable_set_enable_undo (GTK_EDITABLE (texts[i]), FALSE);
+        /* the file's slot, less the end byte */
+        hl_fields_limit_editable (GTK_EDITABLE (texts[i]), 0, f->text_size - 1, TRUE);
+        if (f->tooltip != NULL)
+          gtk_widget_set_tooltip_text (GTK_WIDGET (texts[i]), _(f->tooltip));
+      }
+  }
   own_rows (self, rows);
   hl_quantity_rows_label (rows);
   /* Ctrl+Z belongs to the document's undo, which covers every field */

@@ -266,17 +266,23 @@ draw_axes (HlFigure       *f,
 }
 
 /* A stress the wall is checked against: a thin line across the plot,
- * named at its right end above the line */
-static void
+ * named beside it: at the right end above the line if there is room
+ * (the corrosion band and the bore's peak are at the left), else below
+ * it, else at the left end; never over the other limit's name.  Returns
+ * where the name went. */
+static HlRect
 limit_line (HlFigure             *f,
             const HlPlotGeometry *g,
             double                stress,
-            const char           *label)
+            const char           *label,
+            const HlRect         *avoid)
 {
   cairo_t *cr = f->cr;
   double y = hl_axis_map (&g->y, hl_stress_value (f, stress));
   g_autofree char *value = hl_stress_text (f, stress, 4);
   g_autofree char *text = g_strdup_printf ("%s %s", label, value);
+  double w, h, pad = 0.4 * f->text->base, lift = 0.15 * f->text->base;
+  HlRect spot = { 0 };
 
   cairo_save (cr);
   hl_palette_set_source (cr, f->pal->ink);
@@ -286,9 +292,22 @@ limit_line (HlFigure             *f,
   cairo_line_to (cr, g->area.x + g->area.width, y);
   cairo_stroke (cr);
   cairo_restore (cr);
-  /* at the right end: the corrosion band and the bore's peak are at the left */
-  hl_text_draw (f->text, HL_FONT_SMALL, text, g->area.x + g->area.width - 0.4 * f->text->base,
-                y - 0.15 * f->text->base, 1, 1, 0, f->pal->ink);
+
+  hl_text_measure (f->text, HL_FONT_SMALL, text, 0, &w, &h);
+  for (guint k = 0; k < 4; k++)
+    {
+      double x = k < 2 ? g->area.x + g->area.width - pad - w : g->area.x + pad;
+      double top = k % 2 == 0 ? y - lift - h : y + lift;
+
+      spot = (HlRect) { x, top, w, h };
+      if (top >= g->area.y && top + h <= g->area.y + g->area.height
+          && (avoid == NULL || !hl_rect_overlaps (&spot, avoid)))
+        break;
+      spot.width = 0;
+    }
+  if (spot.width > 0)
+    hl_text_draw (f->text, HL_FONT_SMALL, text, spot.x, spot.y, 0, 0, 0, f->pal->ink);
+  return spot;
 }
 
 static void
@@ -296,12 +315,13 @@ draw_limits (HlFigure             *f,
              const HlPlotGeometry *g)
 {
   const HlSolution *sol = f->sol;
+  HlRect first = { 0 };
 
-  if (isfinite (sol->yield) && sol->yield > 0)
-    limit_line (f, g, sol->yield, _("yield"));
   /* the allowable the code checks the membrane stress against */
   if (isfinite (sol->allowable) && sol->allowable > 0)
-    limit_line (f, g, sol->allowable, _("allowable S·Ej"));
+    first = limit_line (f, g, sol->allowable, _("allowable S·Ej"), NULL);
+  if (isfinite (sol->yield) && sol->yield > 0)
+    limit_line (f, g, sol->yield, _("yield"), first.width > 0 ? &first : NULL);
 }
 
 static void

@@ -95,6 +95,23 @@ test_bursting_receiver (void)
   hl_ui_discard_window (window);
 }
 
+/* Preferences give a new shell its design basis; the verdict measure's
+ * default is "both" (issue 10: each error within the tolerance) */
+static void
+test_default_basis (void)
+{
+  g_autoptr(GSettings) settings = g_settings_new ("org.hoopline.Hoopline");
+  HlShellInputs shell;
+
+  shell = hl_application_default_shell (app);
+  g_assert_cmpint (shell.design_basis, ==, HL_DESIGN_BASIS_UG27);
+  g_assert_cmpint (shell.verdict_measure, ==, HL_MEASURE_BOTH);
+  g_settings_set_enum (settings, "default-design-basis", HL_DESIGN_BASIS_LAME);
+  shell = hl_application_default_shell (app);
+  g_assert_cmpint (shell.design_basis, ==, HL_DESIGN_BASIS_LAME);
+  g_settings_reset (settings, "default-design-basis");
+}
+
 int
 main (int    argc,
       char **argv)
@@ -115,6 +132,7 @@ main (int    argc,
   g_test_add_func ("/verdicts/failing-receiver", test_failing_receiver);
   g_test_add_func ("/verdicts/thick-barrel", test_thick_barrel);
   g_test_add_func ("/verdicts/bursting-receiver", test_bursting_receiver);
+  g_test_add_func ("/verdicts/default-basis", test_default_basis);
   status = g_test_run ();
   g_object_unref (app);
   return status;
