@@ -10,6 +10,7 @@
 #include "hl-sheet-private.h"
 #include "hl-figure-format.h"
 #include "hl-field-table.h"
+#include "hl-design-check.h"
 #include "hl-report.h"
 #include "hl-result-rows.h"
 
@@ -20,6 +21,7 @@ static const double cols_pair[] = { 0.34, 0.66 };
 static const double cols_input[] = { 0.42, 0.29, 0.29 };
 static const double cols_result1[] = { 0.44, 0.24, 0.32 };
 static const double cols_result2[] = { 0.37, 0.19, 0.19, 0.25 };
+static const double cols_check[] = { 0.31, 0.25, 0.25, 0.19 };
 
 static void
 clear_row (gpointer data)
@@ -248,12 +250,95 @@ results (GArray                *rows,
     }
 }
 
+static char *
+quantity_text (double                 value,
+               HlRowKind              kind,
+               const HlFigureContext *ctx)
+{
+  if (!isfinite (value))
+    return g_strdup ("—");
+  return hl_figure_format_quantity (value, kind, ctx->units, 4, ctx->locale_numbers);
+}
+
+static char *
+percent_text (double                 fraction,
+              const HlFigureContext *ctx)
+{
+  g_autofree char *n = NULL;
+
+  if (!isfinite (fraction))
+    return g_strdup ("—");
+  n = hl_figure_format_sig (100 * fraction, 4, ctx->locale_numbers);
+  return g_strdup_printf ("%s %%", n);
+}
+
+static const char *
+check_word (HlCheckResult result)
+{
+  return result == HL_CHECK_PASS ? _("PASS") : result == HL_CHECK_FAIL ? _("FAIL") : _("NOT APPLICABLE");
+}
+
+/* Does the wall pass: the verdict in words first, then every method */
+static void
+design_check (GArray                *rows,
+              const HlFigureContext *ctx)
+{
+  const HlDesignCheck *c = &ctx->solution->check;
+  const HlMethodCheck *b = &c->methods[c->basis];
+  g_autofree char *u = percent_text (c->utilisation, ctx);
+  g_autofree char *nominal = quantity_text (c->nominal, HL_ROW_LENGTH, ctx);
+  g_autofree char *corrosion = quantity_text (c->corrosion, HL_ROW_LENGTH, ctx);
+  g_autofree char *mill = quantity_text (c->mill, HL_ROW_LENGTH, ctx);
+  g_autofree char *available = quantity_text (c->available, HL_ROW_LENGTH, ctx);
+
+  add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Design check"));
+  if (c->bursts)
+    add (rows, HL_SHEET_PARAGRAPH, NULL, TRUE, 1,
+         _("FAIL — DANGER: the wall would burst: the design pressure is above the plastic collapse pressure."));
+  else if (c->yields)
+    add (rows, HL_SHEET_PARAGRAPH, NULL, TRUE, 1,
+         _("FAIL — DANGER: the wall yields at the bore: the peak equivalent stress is above the yield strength."));
+  else if (b->result == HL_CHECK_NOT_APPLICABLE)
+    add_text (rows, HL_SHEET_PARAGRAPH,
+              g_strdup_printf (_("FAIL — not shown to pass: the design basis %s does not apply: %s"), b->name,
+                               hl_figure_core_text (b->reason)));
+  else
+    /* TRANSLATORS: PASS or FAIL, the utilisation, the governing clause, the design basis */
+    add_text (rows, HL_SHEET_PARAGRAPH,
+              g_strdup_printf (_("%s — utilisation %s by %s (design basis %s)%s%s"), check_word (c->verdict), u,
+                               c->governing, b->name, b->reason[0] != '\0' ? ": " : "",
+                               hl_figure_core_text (b->reason)));
+  /* TRANSLATORS: nominal − corrosion allowance − mill undertolerance = available */
+  add_text (rows, HL_SHEET_PARAGRAPH,
+            g_strdup_printf (_("Available wall: %s nominal − %s corrosion allowance − %s mill undertolerance = %s."),
+                             nominal, corrosion, mill, available));
+  add (rows, HL_SHEET_TABLE, cols_check, TRUE, 4, _("Method"), _("Required / available t"),
+       _("Allowable / design P"), _("Utilisation, result"));
+  for (guint m = 0; m < HL_N_METHODS; m++)
+    {
+      const HlMethodCheck *mc = &c->methods[m];
+      g_autofree char *req = quantity_text (mc->required, HL_ROW_LENGTH, ctx);
+      g_autofree char *avail = quantity_text (mc->available, HL_ROW_LENGTH, ctx);
+      g_autofree char *mawp = quantity_text (mc->mawp, HL_ROW_STRESS, ctx);
+      g_autofree char *design = quantity_text (mc->design_pressure, HL_ROW_STRESS, ctx);
+      g_autofree char *um = percent_text (mc->utilisation_pressure, ctx);
+      g_autofree char *name = m == (guint) c->basis ? g_strdup_printf (_("%s (design basis), %s"), mc->name, mc->clause)
+                                                    : g_strdup_printf ("%s, %s", mc->name, mc->clause);
+      g_autofree char *t = g_strdup_printf ("%s / %s", req, avail);
+      g_autofree char *p = g_strdup_printf ("%s / %s", mawp, design);
+      g_autofree char *r = g_strdup_printf ("%s, %s", um, check_word (mc->result));
+
+      add (rows, HL_SHEET_TABLE, cols_check, m == (guint) c->basis, 4, name, t, p, r);
+    }
+}
+
 static void
 verdict (GArray                *rows,
          const HlFigureContext *ctx)
 {
   const HlSolution *s = ctx->solution;
-  gboolean eq = s->inputs.verdict_measure == HL_MEASURE_EQUIVALENT;
+  /* the measure that decided, when both are checked */
+  gboolean eq = s->thin_governing == HL_MEASURE_EQUIVALENT;
   HlResult err = eq ? s->thin_wall_error_equivalent : s->thin_wall_error;
   gboolean loc = ctx->locale_numbers;
   g_autofree char *tol = hl_figure_format_sig (s->tolerance, 3, loc);
@@ -317,12 +402,16 @@ methods (GArray                *rows,
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
        _("Thin-wall error = 100 (thin − Lamé peak) / |Lamé peak|; the verdict compares it with the tolerance."));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
-       _("First yield: all pressures scaled together until the peak equivalent stress reaches the yield strength. "
-         "Plastic collapse: Hill, The Mathematical Theory of Plasticity (1950), perfectly plastic, von Mises."));
+       _("First yield, plastic collapse and allowable pressure on one load path: the internal pressure raised, the "
+         "external held. Plastic collapse: Hill, The Mathematical Theory of Plasticity (1950), perfectly plastic, "
+         "von Mises."));
   add_text (rows, HL_SHEET_BULLET,
-            g_strdup_printf (_("Allowable pressure and required thickness: thin wall (σθ = S E), Lamé (peak "
-                               "equivalent stress = S E), ASME BPVC Section VIII Division 1 %s, %s, Barlow "
-                               "P = 2 S t / D for pipe. Code formulas are used inside their stated ranges only."),
+            g_strdup_printf (_("Allowable pressure and required thickness (corrosion allowance and mill "
+                               "undertolerance included): thin wall (σθ = S Ej), Lamé (peak equivalent stress = "
+                               "S Ej), ASME BPVC Section VIII Division 1 %s, %s, Barlow P = 2 S Ej t / D for pipe; "
+                               "Ej is the joint efficiency (z in EN 13445). Code formulas are used inside their "
+                               "stated ranges only, on the internal design pressure unless the external pressure "
+                               "always acts."),
                              s->ug27_clause != NULL ? s->ug27_clause : "UG-27",
                              s->en13445_clause != NULL ? s->en13445_clause : "EN 13445-3 7.4"));
   add (rows, HL_SHEET_BULLET, NULL, FALSE, 1,
@@ -359,6 +448,7 @@ hl_sheet_rows (const HlFigureContext *ctx)
     new_wall = ctx->new_wall != NULL ? ctx->new_wall
                                      : (solved_here = hl_solve (&s->inputs, HL_DEFAULT_POINTS, FALSE, NULL));
   header (rows, ctx);
+  design_check (rows, ctx);
   inputs (rows, ctx);
   results (rows, ctx, new_wall);
   verdict (rows, ctx);
