@@ -5,8 +5,10 @@
 #define G_LOG_DOMAIN "hl-report-summary"
 
 #include "hl-report.h"
+#include "hl-design-check.h"
 #include "hl-result-rows.h"
 
+#include <math.h>
 #include <string.h>
 
 /* issue: at least 6 significant digits; 9 keeps round-off visible */
@@ -118,7 +120,15 @@ hl_report_csv (const HlSolution *s,
   const char *lu = hl_row_unit (HL_ROW_LENGTH, system);
   const char *su = hl_row_unit (HL_ROW_STRESS, system);
   GString *out = g_string_new (NULL);
+  g_autofree char *u = hl_format_significant (100 * s->check.utilisation, 9);
 
+  /* the verdicts the other outputs give, as comment lines a reader skips
+   * (pandas comment="#", numpy's default), so a table sent on alone
+   * still says whether the wall passes */
+  g_string_append_printf (out, "# design_verdict = %s\n", hl_check_result_to_string (s->check.verdict));
+  g_string_append_printf (out, "# governing_check = %s\n", s->check.governing);
+  g_string_append_printf (out, "# utilisation = %s %%\n", isfinite (s->check.utilisation) ? u : "n/a");
+  g_string_append_printf (out, "# thin_wall_verdict = %s\n", s->is_thin ? "thin" : "thick");
   for (guint k = 0; k < G_N_ELEMENTS (columns); k++)
     {
       g_autofree char *name = g_strdup_printf ("%s_%s", columns[k], k == 0 ? lu : su);

@@ -35,7 +35,10 @@ char *hl_report_summary_block (const HlSolution *solution,
                                HlUnitSystem      system);
 
 /* Through-thickness table, inner to outer surface inclusive; CSV with
- * fields per hl_report_csv_field(). */
+ * fields per hl_report_csv_field(), after HL_CSV_PREAMBLE_LINES comment
+ * lines "# key = value" with the verdicts (design_verdict,
+ * governing_check, utilisation, thin_wall_verdict). */
+#define HL_CSV_PREAMBLE_LINES 4
 char *hl_report_csv           (const HlSolution *solution,
                                HlUnitSystem      system);
 

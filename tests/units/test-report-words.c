@@ -152,8 +152,12 @@ test_csv_records (void)
   g_auto(GStrv) lines = g_strsplit (csv, "\n", -1);
 
   assert_lines_clean (csv, "von_mises_max");
-  g_assert_cmpuint (g_strv_length (lines), ==, s->n_points + 2);   /* the last is empty */
-  for (guint i = 0; lines[i + 1] != NULL; i++)
+  /* four comment lines with the verdicts come first (issue 10), then
+   * the header and the records */
+  g_assert_cmpuint (g_strv_length (lines), ==, HL_CSV_PREAMBLE_LINES + s->n_points + 2);   /* the last is empty */
+  for (guint i = 0; i < HL_CSV_PREAMBLE_LINES; i++)
+    g_assert_true (lines[i][0] == '#');
+  for (guint i = HL_CSV_PREAMBLE_LINES; lines[i + 1] != NULL; i++)
     {
       g_auto(GStrv) fields = g_strsplit (lines[i], ",", -1);
 
