@@ -283,6 +283,15 @@ build (HlChecksTable *self)
     }
   for (guint r = 1; r <= HL_N_METHODS; r++)
     gtk_widget_add_css_class (self->cells[r][N_COLUMNS - 1], "hl-badge");
+  /* the method's name gives way first, then the headings, so the table
+   * never widens the window past the figure (German headings are long) */
+  for (guint r = 0; r <= HL_N_METHODS; r++)
+    {
+      gtk_label_set_ellipsize (GTK_LABEL (self->cells[r][0]), PANGO_ELLIPSIZE_END);
+      gtk_widget_set_hexpand (self->cells[r][0], TRUE);
+    }
+  for (guint c = 1; c < N_COLUMNS; c++)
+    gtk_label_set_ellipsize (GTK_LABEL (self->cells[0][c]), PANGO_ELLIPSIZE_END);
   gtk_box_append (GTK_BOX (box), GTK_WIDGET (self->grid));
   gtk_widget_set_parent (box, GTK_WIDGET (self));
 }

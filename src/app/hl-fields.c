@@ -166,3 +166,40 @@ hl_fields_limit_text_buffer (GtkTextBuffer *buffer,
   g_signal_connect (buffer, "insert-text", G_CALLBACK (on_limited_buffer_insert_text_cb),
                     GSIZE_TO_POINTER ((gsize) max_chars));
 }
+
+static void
+on_ellipsized_item_setup_cb (GtkSignalListItemFactory *factory,
+                           GtkListItem              *item,
+                           gpointer                  user_data)
+{
+  GtkWidget *label = gtk_label_new (NULL);
+
+  gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
+  gtk_label_set_xalign (GTK_LABEL (label), 0);
+  gtk_list_item_set_child (item, label);
+}
+
+static void
+on_ellipsized_item_bind_cb (GtkSignalListItemFactory *factory,
+                          GtkListItem              *item,
+                          gpointer                  user_data)
+{
+  GtkStringObject *name = gtk_list_item_get_item (item);
+  GtkWidget *label = gtk_list_item_get_child (item);
+
+  gtk_label_set_text (GTK_LABEL (label), gtk_string_object_get_string (name));
+  gtk_widget_set_tooltip_text (label, gtk_string_object_get_string (name));
+}
+
+/* Long items (material names, clause names) ellipsized leave the sidebar
+ * its width, in every language; the open list and the tooltip show them
+ * whole. */
+void
+hl_fields_ellipsize_dropdown (GtkDropDown *dropdown)
+{
+  g_autoptr(GtkListItemFactory) factory = gtk_signal_list_item_factory_new ();
+
+  g_signal_connect (factory, "setup", G_CALLBACK (on_ellipsized_item_setup_cb), NULL);
+  g_signal_connect (factory, "bind", G_CALLBACK (on_ellipsized_item_bind_cb), NULL);
+  gtk_drop_down_set_factory (dropdown, factory);
+}

@@ -35,4 +35,7 @@ void        hl_fields_limit_editable    (GtkEditable   *editable,
 void        hl_fields_limit_text_buffer (GtkTextBuffer *buffer,
                                          glong          max_chars);
 
+/* Items of @dropdown end in an ellipsis where they would widen it. */
+void        hl_fields_ellipsize_dropdown (GtkDropDown *dropdown);
+
 G_END_DECLS

@@ -251,32 +251,6 @@ on_material_dropdown_selected_cb (GObject         *dropdown,
   hl_document_edit_shell (self->document, &shell, NULL);
 }
 
-/* Material names are long; ellipsized they leave the sidebar its width,
- * and the open list still shows them whole. */
-static void
-on_material_item_setup_cb (GtkSignalListItemFactory *factory,
-                           GtkListItem              *item,
-                           gpointer                  user_data)
-{
-  GtkWidget *label = gtk_label_new (NULL);
-
-  gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
-  gtk_label_set_xalign (GTK_LABEL (label), 0);
-  gtk_list_item_set_child (item, label);
-}
-
-static void
-on_material_item_bind_cb (GtkSignalListItemFactory *factory,
-                          GtkListItem              *item,
-                          gpointer                  user_data)
-{
-  GtkStringObject *name = gtk_list_item_get_item (item);
-  GtkWidget *label = gtk_list_item_get_child (item);
-
-  gtk_label_set_text (GTK_LABEL (label), gtk_string_object_get_string (name));
-  gtk_widget_set_tooltip_text (label, gtk_string_object_get_string (name));
-}
-
 static void
 hl_material_group_dispose (GObject *object)
 {
@@ -324,7 +298,6 @@ hl_material_group_class_init (HlMaterialGroupClass *klass)
 static void
 hl_material_group_init (HlMaterialGroup *self)
 {
-  g_autoptr(GtkListItemFactory) factory = gtk_signal_list_item_factory_new ();
   HlQuantityRow *rows[HL_QUANTITY_ROWS_MAX];
 
   self->material_ids = g_ptr_array_new_with_free_func (g_free);
@@ -336,9 +309,7 @@ hl_material_group_init (HlMaterialGroup *self)
   gtk_editable_set_enable_undo (GTK_EDITABLE (self->material_name_entry), FALSE);
   /* names are fixed slots of bytes in the file model */
   hl_fields_limit_editable (GTK_EDITABLE (self->material_name_entry), 0, HL_LIMIT_NAME_BYTES, TRUE);
-  g_signal_connect (factory, "setup", G_CALLBACK (on_material_item_setup_cb), NULL);
-  g_signal_connect (factory, "bind", G_CALLBACK (on_material_item_bind_cb), NULL);
-  gtk_drop_down_set_factory (self->material_dropdown, factory);
+  hl_fields_ellipsize_dropdown (self->material_dropdown);
   self->follower = hl_document_follower_new ((HlDocumentRefresh) on_document_changed_cb, self);
 }
 

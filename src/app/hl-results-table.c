@@ -42,14 +42,20 @@ struct _HlResultsTable
 
 G_DEFINE_FINAL_TYPE (HlResultsTable, hl_results_table, GTK_TYPE_WIDGET)
 
-/* The figure and the list above already name the shell, and the checks
- * table above shows each method's utilisation and result */
+/* The figure and the list above already name the shell */
 static gboolean
 skip_row (const HlResultRow *row)
 {
-  return strcmp (row->key, "shell") == 0 || strcmp (row->key, "id") == 0
-         || ((g_str_has_prefix (row->key, "utilisation_") || g_str_has_prefix (row->key, "check_"))
-             && hl_result_group_of (row->key) == HL_GROUP_DESIGN);
+  return strcmp (row->key, "shell") == 0 || strcmp (row->key, "id") == 0;
+}
+
+/* The checks table above the groups shows the design check (verdict,
+ * clause, utilisation, available wall, each method): its rows go only
+ * into the copied text, so every other row fits 1280 × 800 unscrolled */
+static gboolean
+in_groups (const HlResultRow *row)
+{
+  return !skip_row (row) && hl_result_group_of (row->key) != HL_GROUP_DESIGN;
 }
 
 static void
@@ -95,7 +101,7 @@ same_keys (HlResultsTable *self,
     {
       const HlResultRow *row = &g_array_index (rows, HlResultRow, i);
 
-      if (skip_row (row))
+      if (!in_groups (row))
         continue;
       if (n >= self->keys->len || strcmp (g_ptr_array_index (self->keys, n), row->key) != 0)
         return FALSE;
@@ -160,7 +166,7 @@ ensure_cells (HlResultsTable *self,
       HlResultGroup g;
       GtkWidget *name, *value;
 
-      if (skip_row (row))
+      if (!in_groups (row))
         continue;
       g = hl_result_group_of (row->key);
       if (self->groups[g] == NULL)
@@ -250,6 +256,9 @@ rebuild (HlResultsTable *self)
         shown = g_strdup ("—");
       else
         shown = unit[0] != '\0' ? g_strdup_printf ("%s %s", number, unit) : g_strdup (number);
+      g_string_append_printf (self->text, "%s\t%s\t%s\n", _(row->label), number, unit);
+      if (!in_groups (row))
+        continue;
       name = g_ptr_array_index (self->names, n);
       value = g_ptr_array_index (self->values, n);
       gtk_label_set_text (name, _(row->label));
@@ -259,7 +268,6 @@ rebuild (HlResultsTable *self)
         set_tooltip (GTK_WIDGET (value), row->result.reason != NULL ? row->result.reason : "", number);
       else
         set_tooltip (GTK_WIDGET (value), NULL, NULL);
-      g_string_append_printf (self->text, "%s\t%s\t%s\n", _(row->label), number, unit);
       n++;
     }
 }

@@ -358,6 +358,8 @@ hl_shell_editor_init (HlShellEditor *self)
   fill_choices (self->design_basis_dropdown, "design-basis");
   fill_choices (self->coincident_dropdown, "external-pressure-coincident");
   fill_choices (self->test_rule_dropdown, "test-rule");
+  hl_fields_ellipsize_dropdown (self->design_basis_dropdown);
+  hl_fields_ellipsize_dropdown (self->test_rule_dropdown);
   {
     GtkEntry *texts[N_TEXTS];
     static const char *const elements[N_TEXTS] = { "code-edition", "material-specification",
