@@ -16,10 +16,11 @@
 #include "hl-checks-table.h"
 #include "hl-design-check.h"
 #include "hl-document-follower.h"
+#include "hl-figure-format.h"
 #include "hl-number-format.h"
 #include "hl-result-rows.h"
 
-#include <glib/gi18n.h>
+/* gettext through hl-figure-format.h (gi18n-lib) */
 #include <math.h>
 
 #define N_COLUMNS 7
@@ -134,7 +135,7 @@ show_method (HlChecksTable      *self,
   /* TRANSLATORS: utilisation by pressure, then by thickness */
   g_autofree char *u = g_strdup_printf (_("%s · %s"), u_p, u_t);
   g_autofree char *name = NULL;
-  const char *reason = mc->reason[0] != '\0' ? mc->reason : NULL;
+  g_autofree char *reason = hl_figure_check_reason (mc, units, TRUE);
 
   /* the design basis is the method that decides */
   name = m == (guint) sol->check.basis ? g_strdup_printf (_("%s (design basis)"), mc->name) : g_strdup (mc->name);
@@ -156,23 +157,27 @@ show_method (HlChecksTable      *self,
 
 static void
 show_verdicts (HlChecksTable    *self,
-               const HlSolution *sol)
+               const HlSolution *sol,
+               HlUnitSystem      units)
 {
   const HlDesignCheck *c = &sol->check;
   const HlMethodCheck *b = &c->methods[c->basis];
   g_autofree char *u = percent (c->utilisation);
   g_autofree char *design = NULL;
   g_autofree char *floors = NULL;
+  g_autofree char *why = hl_figure_check_reason (b, units, TRUE);
 
   set_badge (self->design_badge, result_word (c->verdict), result_kind (c->verdict));
-  if (c->bursts || c->yields || b->result == HL_CHECK_NOT_APPLICABLE)
+  if (c->bursts || c->yields)
     /* TRANSLATORS: %s is the design basis ("ASME VIII-1 UG-27") */
     design = g_strdup_printf (_("Fails whatever the basis (%s): see below"), b->name);
+  else if (b->result == HL_CHECK_NOT_APPLICABLE)
+    /* TRANSLATORS: %s is the design basis ("ASME VIII-1 UG-27") */
+    design = g_strdup_printf (_("Not shown to pass: the design basis %s does not apply"), b->name);
   else
     /* TRANSLATORS: utilisation in percent, the governing clause, the design basis */
     design = g_strdup_printf (_("Utilisation %s by %s (design basis %s)"), u, c->governing, b->name);
   gtk_label_set_text (GTK_LABEL (self->design_text), design);
-  gtk_widget_set_tooltip_text (self->design_text, c->verdict_text);
 
   if (c->bursts)
     floors = g_strdup (_("DANGER: the wall would burst: the design pressure is above the plastic collapse pressure."));
@@ -180,9 +185,9 @@ show_verdicts (HlChecksTable    *self,
     floors = g_strdup (_("DANGER: the wall yields at the bore: the peak equivalent stress is above the yield strength."));
   else if (b->result == HL_CHECK_NOT_APPLICABLE)
     /* TRANSLATORS: %s is the reason the design basis does not apply */
-    floors = g_strdup_printf (_("Not shown to pass: the design basis does not apply: %s"), b->reason);
+    floors = g_strdup_printf (_("Not shown to pass: the design basis does not apply: %s"), why);
   else if (b->result == HL_CHECK_FAIL)
-    floors = g_strdup_printf (_("Fails: %s"), b->reason);
+    floors = g_strdup_printf (_("Fails: %s"), why);
   gtk_widget_set_visible (self->floors_text, floors != NULL);
   gtk_label_set_text (GTK_LABEL (self->floors_text), floors != NULL ? floors : "");
 
@@ -210,7 +215,7 @@ on_document_changed_cb (HlDocument    *document,
   gtk_widget_set_visible (GTK_WIDGET (self), sol != NULL);
   if (sol == NULL)
     return;
-  show_verdicts (self, sol);
+  show_verdicts (self, sol, units);
   for (guint m = 0; m < HL_N_METHODS; m++)
     show_method (self, sol, m, units);
 }
@@ -369,4 +374,13 @@ hl_checks_table_get_cell (HlChecksTable *self,
   if (row > HL_N_METHODS || column >= N_COLUMNS)
     return NULL;
   return gtk_label_get_text (GTK_LABEL (self->cells[row][column]));
+}
+
+const char *
+hl_checks_table_get_reason_text (HlChecksTable *self)
+{
+  g_return_val_if_fail (HL_IS_CHECKS_TABLE (self), NULL);
+  if (!gtk_widget_get_visible (self->floors_text))
+    return NULL;
+  return gtk_label_get_text (GTK_LABEL (self->floors_text));
 }

@@ -87,3 +87,33 @@ hl_figure_core_text (const char *text)
 {
   return text != NULL && text[0] != '\0' ? g_dgettext (GETTEXT_PACKAGE, text) : text;
 }
+
+char *
+hl_figure_check_reason (const HlMethodCheck *check,
+                        HlUnitSystem         system,
+                        gboolean             locale)
+{
+  g_autofree char *need = NULL, *have = NULL, *allow = NULL, *design = NULL;
+  gboolean short_wall, over_pressure;
+
+  g_return_val_if_fail (check != NULL, NULL);
+
+  if (check->result == HL_CHECK_PASS)
+    return NULL;
+  /* the core's reason for an out-of-range method is a fixed, marked text */
+  if (check->result == HL_CHECK_NOT_APPLICABLE)
+    return g_strdup (hl_figure_core_text (check->reason));
+  short_wall = check->required > check->nominal;
+  over_pressure = check->design_pressure > check->mawp;
+  need = hl_figure_format_quantity (check->required, HL_ROW_LENGTH, system, 4, locale);
+  have = hl_figure_format_quantity (check->nominal, HL_ROW_LENGTH, system, 4, locale);
+  allow = hl_figure_format_quantity (check->mawp, HL_ROW_STRESS, system, 4, locale);
+  design = hl_figure_format_quantity (check->design_pressure, HL_ROW_STRESS, system, 4, locale);
+  if (short_wall && over_pressure)
+    /* TRANSLATORS: required and nominal thickness, allowable and design pressure */
+    return g_strdup_printf (_("needs %s nominal, has %s; allows %s, below the design pressure %s"), need, have,
+                            allow, design);
+  if (short_wall)
+    return g_strdup_printf (_("needs %s nominal, has %s"), need, have);
+  return g_strdup_printf (_("allows %s, below the design pressure %s"), allow, design);
+}

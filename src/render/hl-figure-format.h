@@ -5,6 +5,7 @@
 #pragma once
 
 #include "hl-config.h"
+#include "hl-design-check.h"
 #include "hl-result-rows.h"
 
 /* gettext is libc/GLib, not GTK: the words drawn follow the user's
@@ -32,6 +33,13 @@ char *hl_figure_format_quantity (double       si,
                                  HlUnitSystem system,
                                  int          digits,
                                  gboolean     locale);
+
+/* Why a method of the design check fails or does not apply, in the
+ * user's language and units: "needs 12.59 mm nominal, has 12 mm; …";
+ * NULL when it passes */
+char       *hl_figure_check_reason  (const HlMethodCheck *check,
+                                     HlUnitSystem         system,
+                                     gboolean             locale);
 
 /* "Caution: " and HL_CAUTION in the user's language */
 char       *hl_figure_caution       (void);

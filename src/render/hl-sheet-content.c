@@ -290,6 +290,7 @@ design_check (GArray                *rows,
   g_autofree char *corrosion = quantity_text (c->corrosion, HL_ROW_LENGTH, ctx);
   g_autofree char *mill = quantity_text (c->mill, HL_ROW_LENGTH, ctx);
   g_autofree char *available = quantity_text (c->available, HL_ROW_LENGTH, ctx);
+  g_autofree char *why = hl_figure_check_reason (b, ctx->units, ctx->locale_numbers);
 
   add (rows, HL_SHEET_HEADING, NULL, FALSE, 1, _("Design check"));
   if (c->bursts)
@@ -300,14 +301,12 @@ design_check (GArray                *rows,
          _("FAIL — DANGER: the wall yields at the bore: the peak equivalent stress is above the yield strength."));
   else if (b->result == HL_CHECK_NOT_APPLICABLE)
     add_text (rows, HL_SHEET_PARAGRAPH,
-              g_strdup_printf (_("FAIL — not shown to pass: the design basis %s does not apply: %s"), b->name,
-                               hl_figure_core_text (b->reason)));
+              g_strdup_printf (_("FAIL — not shown to pass: the design basis %s does not apply: %s"), b->name, why));
   else
     /* TRANSLATORS: PASS or FAIL, the utilisation, the governing clause, the design basis */
     add_text (rows, HL_SHEET_PARAGRAPH,
               g_strdup_printf (_("%s — utilisation %s by %s (design basis %s)%s%s"), check_word (c->verdict), u,
-                               c->governing, b->name, b->reason[0] != '\0' ? ": " : "",
-                               hl_figure_core_text (b->reason)));
+                               c->governing, b->name, why != NULL ? ": " : "", why != NULL ? why : ""));
   /* TRANSLATORS: nominal − corrosion allowance − mill undertolerance = available */
   add_text (rows, HL_SHEET_PARAGRAPH,
             g_strdup_printf (_("Available wall: %s nominal − %s corrosion allowance − %s mill undertolerance = %s."),

@@ -95,6 +95,49 @@ test_bursting_receiver (void)
   hl_ui_discard_window (window);
 }
 
+/* Net external pressure (10 bar outside, 1 bar inside): every internal-
+ * pressure sizing is NOT APPLICABLE — buckling governs (common
+ * practice: a shell under external pressure is checked for buckling,
+ * ASME VIII-1 UG-28, EN 13445-3 clause 8) — and the wall is not shown
+ * to pass */
+static void
+test_net_external (void)
+{
+  HlWindow *window = open_cases ();
+  HlDocument *doc = hl_window_get_document (window);
+  HlChecksTable *checks = select_shell (window, 0);
+  HlShellInputs shell = *hl_document_get_shell (doc);
+
+  shell.internal_pressure = hl_quantity_make (1, "bar");
+  shell.external_pressure = hl_quantity_make (10, "bar");
+  hl_document_edit_shell (doc, &shell, NULL);
+  hl_ui_iterate ();
+  g_assert_cmpstr (hl_checks_table_get_design_word (checks), ==, "FAIL");
+  g_assert_nonnull (strstr (hl_checks_table_get_verdict_text (checks), "Not shown to pass"));
+  for (guint m = 1; m <= 4; m++)
+    g_assert_cmpstr (hl_checks_table_get_cell (checks, m, 6), ==, "NOT APPLICABLE");
+  g_assert_nonnull (strstr (hl_checks_table_get_reason_text (checks), "buckling"));
+  hl_ui_discard_window (window);
+}
+
+/* The reason is in the project's units: in US units the receiver needs
+ * 12.594 mm = 0.4958 in (NIST SP 811: 1 in = 25.4 mm exactly) */
+static void
+test_reason_in_us_units (void)
+{
+  HlWindow *window = open_cases ();
+  HlDocument *doc = hl_window_get_document (window);
+  HlChecksTable *checks = select_shell (window, 0);
+  const HlProject *p = hl_document_get_project (doc);
+
+  hl_document_set_info (doc, p->title, p->engineer, p->description, HL_UNIT_SYSTEM_US);
+  hl_ui_iterate ();
+  g_assert_nonnull (strstr (hl_checks_table_get_reason_text (checks), "0.4958"));
+  g_assert_nonnull (strstr (hl_checks_table_get_reason_text (checks), "psi"));
+  g_assert_null (strstr (hl_checks_table_get_reason_text (checks), "MPa"));
+  hl_ui_discard_window (window);
+}
+
 /* Preferences give a new shell its design basis; the verdict measure's
  * default is "both" (issue 10: each error within the tolerance) */
 static void
@@ -133,6 +176,8 @@ main (int    argc,
   g_test_add_func ("/verdicts/thick-barrel", test_thick_barrel);
   g_test_add_func ("/verdicts/bursting-receiver", test_bursting_receiver);
   g_test_add_func ("/verdicts/default-basis", test_default_basis);
+  g_test_add_func ("/verdicts/net-external", test_net_external);
+  g_test_add_func ("/verdicts/reason-in-us-units", test_reason_in_us_units);
   status = g_test_run ();
   g_object_unref (app);
   return status;
