@@ -155,6 +155,28 @@ show_method (HlChecksTable      *self,
   set_badge (self->cells[row][6], result_word (mc->result), result_kind (mc->result));
 }
 
+/* how the thin-wall value compares with the Lamé peak, in words */
+static char *
+thin_words (const HlSolution *sol)
+{
+  g_autofree char *by = hl_format_display (sol->thin_wording_by, 3);
+
+  switch (sol->thin_wording)
+    {
+    case HL_THIN_WORDING_OPPOSITE_SIGN:
+      return g_strdup (_("has the opposite sign of the Lamé peak (unconservative)"));
+    case HL_THIN_WORDING_UNDER:
+      return g_strdup_printf (_("underestimates the peak by %s %% (unconservative)"), by);
+    case HL_THIN_WORDING_OVER:
+      return g_strdup_printf (_("overestimates the peak by %s %% (conservative)"), by);
+    case HL_THIN_WORDING_EQUAL:
+      return g_strdup (_("equals the peak"));
+    case HL_THIN_WORDING_NOT_COMPARABLE:
+    default:
+      return g_strdup (_("cannot be compared with the Lamé peak"));
+    }
+}
+
 static void
 show_verdicts (HlChecksTable    *self,
                const HlSolution *sol,
@@ -196,10 +218,11 @@ show_verdicts (HlChecksTable    *self,
   else
     set_badge (self->thin_badge, sol->is_thin ? _("THIN") : _("THICK"), sol->is_thin ? "pass" : "fail");
   {
-    const char *measure = sol->thin_governing == HL_MEASURE_EQUIVALENT ? _("von Mises stress") : _("hoop stress");
-    /* TRANSLATORS: the governing measure ("hoop stress"), then the core's
-     * words: "underestimates the peak by 30.6 % (unconservative)" */
-    g_autofree char *text = g_strdup_printf (_("Thin-wall %s %s"), measure, sol->thin_words);
+    g_autofree char *words = thin_words (sol);
+    g_autofree char *text = sol->thin_governing == HL_MEASURE_EQUIVALENT
+                              /* TRANSLATORS: "underestimates the peak by 30.6 % (unconservative)" */
+                              ? g_strdup_printf (_("Thin-wall von Mises stress %s"), words)
+                              : g_strdup_printf (_("Thin-wall hoop stress %s"), words);
 
     gtk_label_set_text (GTK_LABEL (self->thin_text), text);
   }
@@ -383,4 +406,11 @@ hl_checks_table_get_reason_text (HlChecksTable *self)
   if (!gtk_widget_get_visible (self->floors_text))
     return NULL;
   return gtk_label_get_text (GTK_LABEL (self->floors_text));
+}
+
+const char *
+hl_checks_table_get_thin_text (HlChecksTable *self)
+{
+  g_return_val_if_fail (HL_IS_CHECKS_TABLE (self), NULL);
+  return gtk_label_get_text (GTK_LABEL (self->thin_text));
 }

@@ -20,6 +20,8 @@ void        hl_checks_table_set_document  (HlChecksTable *self,
 const char *hl_checks_table_get_design_word (HlChecksTable *self);
 const char *hl_checks_table_get_thin_word   (HlChecksTable *self);
 const char *hl_checks_table_get_verdict_text (HlChecksTable *self);
+/* the thin-wall verdict's sentence beside its badge */
+const char *hl_checks_table_get_thin_text (HlChecksTable *self);
 /* why the wall fails or is not shown to pass, or NULL when it passes */
 const char *hl_checks_table_get_reason_text (HlChecksTable *self);
 /* the text of cell (@row, @column) of the methods table, row 0 the

@@ -12,6 +12,16 @@ G_BEGIN_DECLS
 #define HL_DEFAULT_POINTS 101
 #define HL_MAX_POINTS     100001
 
+/* how the thin-wall value compares with the Lamé peak */
+typedef enum
+{
+  HL_THIN_WORDING_NOT_COMPARABLE,
+  HL_THIN_WORDING_OPPOSITE_SIGN,  /* unconservative */
+  HL_THIN_WORDING_UNDER,          /* unconservative */
+  HL_THIN_WORDING_OVER,           /* conservative */
+  HL_THIN_WORDING_EQUAL,
+} HlThinWording;
+
 typedef struct
 {
   double r;
@@ -59,6 +69,9 @@ typedef struct
   gboolean is_thin;             /* verdict of the chosen measure */
   HlVerdictMeasure thin_governing; /* HOOP or EQUIVALENT: the error that decides */
   char thin_words[120];         /* "underestimates the peak by 30.6 % (unconservative)" */
+  /* the same in parts, for a view that words it in its own language */
+  HlThinWording thin_wording;
+  double        thin_wording_by; /* percent, for UNDER and OVER */
   gboolean rule_of_thumb;       /* mean radius / t >= 10 */
   HlResult ratio_for_tolerance;
   HlResult von_mises_max, tresca_max;

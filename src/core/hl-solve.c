@@ -101,24 +101,41 @@ fill_points (HlSolution *s)
  * for a positive peak and 1 - e/100 for a negative one (compression),
  * where a positive error means a smaller magnitude. */
 static void
-thin_wording (char   *buf,
-              gsize   size,
-              double  error,
-              double  exact)
+thin_wording (HlSolution *s,
+              double      error,
+              double      exact)
 {
   double r = exact < 0 ? 1 - error / 100 : 1 + error / 100;
   g_autofree char *by = hl_format_significant (100 * fabs (1 - r), 3);
+  gsize size = sizeof s->thin_words;
+  char *buf = s->thin_words;
 
+  s->thin_wording_by = 100 * fabs (1 - r);
   if (!isfinite (error) || exact == 0.0)
-    g_strlcpy (buf, "cannot be compared with the Lamé peak", size);
+    {
+      s->thin_wording = HL_THIN_WORDING_NOT_COMPARABLE;
+      g_strlcpy (buf, "cannot be compared with the Lamé peak", size);
+    }
   else if (r < 0)
-    g_strlcpy (buf, "has the opposite sign of the Lamé peak (unconservative)", size);
+    {
+      s->thin_wording = HL_THIN_WORDING_OPPOSITE_SIGN;
+      g_strlcpy (buf, "has the opposite sign of the Lamé peak (unconservative)", size);
+    }
   else if (r < 1)
-    g_snprintf (buf, size, "underestimates the peak by %s %% (unconservative)", by);
+    {
+      s->thin_wording = HL_THIN_WORDING_UNDER;
+      g_snprintf (buf, size, "underestimates the peak by %s %% (unconservative)", by);
+    }
   else if (r > 1)
-    g_snprintf (buf, size, "overestimates the peak by %s %% (conservative)", by);
+    {
+      s->thin_wording = HL_THIN_WORDING_OVER;
+      g_snprintf (buf, size, "overestimates the peak by %s %% (conservative)", by);
+    }
   else
-    g_strlcpy (buf, "equals the peak", size);
+    {
+      s->thin_wording = HL_THIN_WORDING_EQUAL;
+      g_strlcpy (buf, "equals the peak", size);
+    }
 }
 
 static void
@@ -161,8 +178,7 @@ solve_membrane_and_lame (HlSolution *s)
   chosen = s->thin_governing == HL_MEASURE_EQUIVALENT ? err_eq : err_hoop;
   s->is_thin = isfinite (chosen) && fabs (chosen) <= s->tolerance
                && (in->verdict_measure != HL_MEASURE_BOTH || (isfinite (err_hoop) && isfinite (err_eq)));
-  thin_wording (s->thin_words, sizeof s->thin_words, chosen,
-                s->thin_governing == HL_MEASURE_HOOP ? hl_lame_peak_hoop (&s->lame) : 1.0);
+  thin_wording (s, chosen, s->thin_governing == HL_MEASURE_HOOP ? hl_lame_peak_hoop (&s->lame) : 1.0);
   s->rule_of_thumb = s->mean_ratio >= RULE_OF_THUMB_RATIO;
 
   {
