@@ -92,13 +92,13 @@ hl_local_max (HlRootFunc f,
   return MAX (fc, fd);
 }
 
-gboolean
-hl_ratio_for_tolerance (const HlLame     *lame,
-                        HlRadiusBasis     basis,
-                        HlVerdictMeasure  measure,
-                        double            tolerance_percent,
-                        double           *ratio,
-                        const char      **reason)
+static gboolean
+ratio_for_tolerance_search (const HlLame     *lame,
+                            HlRadiusBasis     basis,
+                            HlVerdictMeasure  measure,
+                            double            tolerance_percent,
+                            double           *ratio,
+                            const char      **reason)
 {
   HlLame base = *lame;
   SizingProblem sp = { &base, basis, measure, tolerance_percent, 0, 0, FALSE };
@@ -107,10 +107,6 @@ hl_ratio_for_tolerance (const HlLame     *lame,
   double last_bad_m = 0.0;
   int last_bad = -1;
 
-  /* the error depends on the pressure ratio, not the level; with no load
-   * at all take internal pressure alone */
-  if (base.pi == 0.0 && base.po == 0.0)
-    base.pi = 1.0;
   for (int i = 0; i < RATIO_GRID; i++)
     {
       g[i] = error_excess (RATIO_MIN * exp (step * i), &sp);
@@ -259,4 +255,73 @@ hl_lame_required_wall (const HlLame *lame,
       return FALSE;
     }
   return TRUE;
+}
+
+/* The search above costs about 200 error evaluations and its answer
+ * depends only on the form, the end condition, the load ratio, the
+ * material's constants, the basis, the measure and the tolerance — not
+ * on the size.  A project of many shells of one material and load asks
+ * the same question again and again, so the last few answers are kept
+ * (per thread; exact comparison, so a kept answer is the answer). */
+typedef struct
+{
+  gboolean valid;
+  HlForm form;
+  HlEnds ends;
+  double pi, po, E, nu, tolerance;
+  HlRadiusBasis basis;
+  HlVerdictMeasure measure;
+  gboolean found;
+  double ratio;
+  const char *reason;
+} RatioMemo;
+
+#define RATIO_MEMO_SIZE 8
+
+static _Thread_local RatioMemo ratio_memo[RATIO_MEMO_SIZE];
+static _Thread_local guint ratio_memo_next;
+
+gboolean
+hl_ratio_for_tolerance (const HlLame     *lame,
+                        HlRadiusBasis     basis,
+                        HlVerdictMeasure  measure,
+                        double            tolerance_percent,
+                        double           *ratio,
+                        const char      **reason)
+{
+  /* The error depends on the pressure ratio, not the level: the search
+   * runs at the larger pressure scaled to 1 (internal pressure alone when
+   * there is no load at all), so every shell of one load ratio asks the
+   * same question, whichever was solved before it. */
+  double scale = MAX (fabs (lame->pi), fabs (lame->po));
+  HlLame unit_load = *lame;
+  RatioMemo *m = NULL;
+
+  unit_load.pi = scale > 0.0 ? lame->pi / scale : 1.0;
+  unit_load.po = scale > 0.0 ? lame->po / scale : 0.0;
+  for (guint i = 0; i < RATIO_MEMO_SIZE && m == NULL; i++)
+    {
+      RatioMemo *e = &ratio_memo[i];
+
+      if (e->valid && e->form == unit_load.form && e->ends == unit_load.ends && e->pi == unit_load.pi
+          && e->po == unit_load.po && e->E == unit_load.E && e->nu == unit_load.nu
+          && e->tolerance == tolerance_percent && e->basis == basis && e->measure == measure)
+        m = e;
+    }
+  if (m == NULL)
+    {
+      RatioMemo fresh = { TRUE, unit_load.form, unit_load.ends, unit_load.pi, unit_load.po, unit_load.E,
+                          unit_load.nu, tolerance_percent, basis, measure, FALSE, 0.0, NULL };
+
+      fresh.found = ratio_for_tolerance_search (&unit_load, basis, measure, tolerance_percent, &fresh.ratio,
+                                                &fresh.reason);
+      m = &ratio_memo[ratio_memo_next];
+      ratio_memo_next = (ratio_memo_next + 1) % RATIO_MEMO_SIZE;
+      *m = fresh;
+    }
+  if (m->found)
+    *ratio = m->ratio;
+  else
+    *reason = m->reason;
+  return m->found;
 }
