@@ -27,6 +27,8 @@ hl_project_new (void)
   p->engineer = g_strdup ("");
   p->description = g_strdup ("");
   p->display_units = HL_UNIT_SYSTEM_SI;
+  for (guint i = 0; i < HL_N_SIGNOFFS; i++)
+    p->signoff[i].name = g_strdup ("");
   p->materials = g_array_new (FALSE, TRUE, sizeof (HlMaterial));
   p->shells = g_array_new (FALSE, TRUE, sizeof (HlShellInputs));
   p->revisions = g_array_new (FALSE, TRUE, sizeof (HlRevision));
@@ -43,6 +45,8 @@ hl_project_copy (const HlProject *project)
   hl_project_set_engineer (p, project->engineer);
   hl_project_set_description (p, project->description);
   p->display_units = project->display_units;
+  for (guint i = 0; i < HL_N_SIGNOFFS; i++)
+    hl_project_set_signoff (p, i, project->signoff[i].name, project->signoff[i].date);
   g_array_append_vals (p->materials, project->materials->data, project->materials->len);
   g_array_append_vals (p->shells, project->shells->data, project->shells->len);
   for (guint i = 0; i < project->revisions->len; i++)
@@ -62,6 +66,8 @@ hl_project_free (HlProject *project)
   g_free (project->title);
   g_free (project->engineer);
   g_free (project->description);
+  for (guint i = 0; i < HL_N_SIGNOFFS; i++)
+    g_free (project->signoff[i].name);
   g_array_unref (project->materials);
   g_array_unref (project->shells);
   g_array_unref (project->revisions);
@@ -74,6 +80,8 @@ hl_project_strip_texts (HlProject *project)
   g_strstrip (project->title);
   g_strstrip (project->engineer);
   g_strstrip (project->description);
+  for (guint i = 0; i < HL_N_SIGNOFFS; i++)
+    g_strstrip (project->signoff[i].name);
   for (guint i = 0; i < project->materials->len; i++)
     g_strstrip (g_array_index (project->materials, HlMaterial, i).name);
   for (guint i = 0; i < project->shells->len; i++)
@@ -168,6 +176,9 @@ hl_project_first_difference (const HlProject *a,
     return g_strdup ("description");
   if (a->display_units != b->display_units)
     return g_strdup ("display-units");
+  for (guint i = 0; i < HL_N_SIGNOFFS; i++)
+    if (g_strcmp0 (a->signoff[i].name, b->signoff[i].name) != 0 || strcmp (a->signoff[i].date, b->signoff[i].date) != 0)
+      return g_strdup_printf ("sign-off “%s”", hl_signoff_role_to_string (i));
   for (guint i = 0; i < MIN (a->materials->len, b->materials->len); i++)
     {
       const HlMaterial *ma = &g_array_index (a->materials, HlMaterial, i);
@@ -374,4 +385,24 @@ hl_project_latest_revision (const HlProject *project)
         best = r;
     }
   return best;
+}
+
+void
+hl_project_set_signoff (HlProject     *project,
+                        HlSignoffRole  role,
+                        const char    *name,
+                        const char    *date)
+{
+  g_return_if_fail (role < HL_N_SIGNOFFS);
+  replace_string (&project->signoff[role].name, name);
+  g_strlcpy (project->signoff[role].date, date != NULL ? date : "", sizeof project->signoff[role].date);
+}
+
+const char *
+hl_signoff_role_to_string (HlSignoffRole role)
+{
+  static const char *const words[HL_N_SIGNOFFS] = { "prepared", "checked", "approved" };
+
+  g_return_val_if_fail (role < HL_N_SIGNOFFS, "prepared");
+  return words[role];
 }

@@ -16,6 +16,23 @@ typedef struct
   char *text;
 } HlRevision;
 
+/* The three signatures of a design note, in the order a sheet shows them. */
+typedef enum
+{
+  HL_SIGNOFF_PREPARED,
+  HL_SIGNOFF_CHECKED,
+  HL_SIGNOFF_APPROVED,
+  HL_N_SIGNOFFS,
+} HlSignoffRole;
+
+/* One signature: a name (may be empty) and a date, "YYYY-MM-DD" or
+ * empty when not given. */
+typedef struct
+{
+  char *name;
+  char  date[11];
+} HlSignoff;
+
 typedef struct
 {
   char        *title;
@@ -25,6 +42,7 @@ typedef struct
   GArray      *materials;   /* HlMaterial */
   GArray      *shells;      /* HlShellInputs */
   GArray      *revisions;   /* HlRevision, in file order */
+  HlSignoff    signoff[HL_N_SIGNOFFS];
 } HlProject;
 
 HlProject           *hl_project_new           (void);
@@ -47,6 +65,13 @@ char                *hl_project_first_difference (const HlProject *a,
 void                 hl_project_set_title       (HlProject *project, const char *title);
 void                 hl_project_set_engineer    (HlProject *project, const char *engineer);
 void                 hl_project_set_description (HlProject *project, const char *description);
+/* @date "YYYY-MM-DD" or "" (hl_date_valid() decides; the caller checks) */
+void                 hl_project_set_signoff     (HlProject     *project,
+                                                 HlSignoffRole  role,
+                                                 const char    *name,
+                                                 const char    *date);
+/* "prepared", "checked", "approved": the file's words */
+const char          *hl_signoff_role_to_string  (HlSignoffRole  role);
 
 guint                hl_project_n_shells      (const HlProject *project);
 HlShellInputs       *hl_project_shell         (const HlProject *project,

@@ -7,6 +7,7 @@
 #pragma once
 
 #include "hl-figure.h"
+#include "hl-paper.h"
 #include "hl-project.h"
 
 G_BEGIN_DECLS
@@ -20,7 +21,11 @@ typedef struct
   guint        points;        /* CSV rows */
   const char  *size;          /* "WxH" or NULL for the default */
   gboolean     figure_only;   /* PDF without the calculation sheet */
-  gboolean     shell_given;   /* --shell was given: TXT of that one only */
+  gboolean     shell_given;   /* --shell was given: a report of that one only,
+                              * without the project summary */
+  /* Fields added for the design note: zero is the old behaviour. */
+  HlPaper      paper;         /* sheet pages of a PDF */
+  guint        panels;        /* HlFigurePanels; 0: all that fit */
 } HlExportRequest;
 
 typedef enum

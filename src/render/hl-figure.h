@@ -20,6 +20,16 @@ typedef enum
   HL_FIGURE_STYLE_DARK,
 } HlFigureStyle;
 
+/* The panels of a figure an export may leave out (0: all that fit). */
+typedef enum
+{
+  HL_PANEL_SECTION = 1 << 0,   /* the ring or sphere section to scale */
+  HL_PANEL_DETAIL  = 1 << 1,   /* the magnified wall */
+  HL_PANEL_PLOT    = 1 << 2,   /* stresses through the wall */
+  HL_PANEL_CHART   = 1 << 3,   /* thinness chart */
+  HL_PANELS_ALL    = 0xf,
+} HlFigurePanels;
+
 typedef struct
 {
   const HlProject  *project;      /* title block; may be NULL */
@@ -36,6 +46,7 @@ typedef struct
   const HlSolution *new_wall;     /* optional: the uncorroded wall beside a
                                    * corroded @solution, for the sheet; the
                                    * sheet solves it itself when NULL */
+  guint             panels;       /* HlFigurePanels to draw; 0: all */
 } HlFigureContext;
 
 typedef enum
