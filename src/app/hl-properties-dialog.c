@@ -1,4 +1,4 @@
-/* hl-properties-dialog.c — title, engineer, description, revision notes
+/* hl-properties-dialog.c — title, engineer, description, revision notes, sign-off
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -9,6 +9,7 @@
 #include "hl-date.h"
 #include "hl-fields.h"
 #include "hl-limits.h"
+#include "hl-signoff-page.h"
 
 #include <glib/gi18n.h>
 #include <string.h>
@@ -27,6 +28,7 @@ struct _HlPropertiesDialog
   GtkEntry    *revision_author_entry;
   GtkEntry    *revision_text_entry;
   GtkLabel    *revision_error_label;
+  GtkWidget   *signoff_page;
 
   HlDocument  *document;
   guint        updating;
@@ -272,6 +274,8 @@ hl_properties_dialog_new (GtkWindow  *parent,
 
   self->document = g_object_ref (document);
   g_signal_connect (document, "changed", G_CALLBACK (on_document_changed_cb), self);
+  self->signoff_page = hl_signoff_page_new (document);
+  gtk_notebook_append_page (self->notebook, self->signoff_page, gtk_label_new_with_mnemonic (_("_Sign-off")));
   reload (self);
   gtk_editable_set_text (GTK_EDITABLE (self->revision_date_entry), today);
   gtk_editable_set_text (GTK_EDITABLE (self->revision_author_entry),
@@ -282,6 +286,13 @@ hl_properties_dialog_new (GtkWindow  *parent,
       gtk_widget_grab_focus (GTK_WIDGET (self->revision_text_entry));
     }
   return self;
+}
+
+HlSignoffPage *
+hl_properties_dialog_get_signoff_page (HlPropertiesDialog *self)
+{
+  g_return_val_if_fail (HL_IS_PROPERTIES_DIALOG (self), NULL);
+  return HL_SIGNOFF_PAGE (self->signoff_page);
 }
 
 GtkEditable *

@@ -7,6 +7,7 @@
 #include <gtk/gtk.h>
 
 #include "hl-document.h"
+#include "hl-signoff-page.h"
 
 G_BEGIN_DECLS
 
@@ -28,5 +29,6 @@ GtkEditable        *hl_properties_dialog_get_revision_date_entry   (HlProperties
 GtkEditable        *hl_properties_dialog_get_revision_author_entry (HlPropertiesDialog *self);
 GtkEditable        *hl_properties_dialog_get_revision_text_entry   (HlPropertiesDialog *self);
 const char         *hl_properties_dialog_get_revision_error        (HlPropertiesDialog *self);
+HlSignoffPage      *hl_properties_dialog_get_signoff_page          (HlPropertiesDialog *self);
 
 G_END_DECLS

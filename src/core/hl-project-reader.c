@@ -111,7 +111,7 @@ hl_reader_on_structured_error (void        *user_data,
 /* ---- tree checks --------------------------------------------------- */
 
 const char *const hl_reader_known_project[] = {
-  "title", "engineer", "description", "display-units", "material", "shell", "revision", NULL
+  "title", "engineer", "description", "display-units", "material", "shell", "revision", "sign-off", NULL
 };
 static const char **
 material_elements (void)
@@ -598,6 +598,44 @@ read_revision (HlReader    *rd,
   return TRUE;
 }
 
+/* <sign-off role="checked" date="2026-12-01">A. Name</sign-off>, each
+ * role at most once (format 1.3) */
+static gboolean
+read_signoff (HlReader  *rd,
+              HlProject *project,
+              xmlNodePtr n)
+{
+  g_autofree char *role = hl_reader_prop (n, "role");
+  g_autofree char *date = hl_reader_prop (n, "date");
+  g_autofree char *name = hl_reader_text (n);
+  int r;
+
+  for (r = 0; r < HL_N_SIGNOFFS; r++)
+    if (role != NULL && strcmp (g_strstrip (role), hl_signoff_role_to_string (r)) == 0)
+      break;
+  if (r == HL_N_SIGNOFFS)
+    {
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "sign-off",
+                      "role “%s” is not prepared, checked or approved", role != NULL ? role : "");
+      return FALSE;
+    }
+  if (project->signoff[r].name[0] != '\0' || project->signoff[r].date[0] != '\0')
+    {
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "sign-off", "role “%s” is given twice", role);
+      return FALSE;
+    }
+  if (date != NULL && !hl_date_valid (g_strstrip (date)))
+    {
+      hl_reader_fail (rd, HL_PROJECT_FILE_ERROR_VALUE, xmlGetLineNo (n), "sign-off", "date “%s” is not a YYYY-MM-DD date",
+                      date);
+      return FALSE;
+    }
+  if (!check_text (rd, n, "sign-off", g_strstrip (name), HL_TEXT_ONE_LINE))
+    return FALSE;
+  hl_project_set_signoff (project, r, name, date != NULL ? date : "");
+  return TRUE;
+}
+
 static HlProject *
 build_project (HlReader    *rd,
                xmlNodePtr root)
@@ -629,6 +667,10 @@ build_project (HlReader    *rd,
   for (n = root->children; n != NULL; n = n->next)
     if (n->type == XML_ELEMENT_NODE && xmlStrEqual (n->name, BAD_CAST "revision")
         && !read_revision (rd, project, n))
+      return NULL;
+  for (n = root->children; n != NULL; n = n->next)
+    if (n->type == XML_ELEMENT_NODE && xmlStrEqual (n->name, BAD_CAST "sign-off")
+        && !read_signoff (rd, project, n))
       return NULL;
   return g_steal_pointer (&project);
 }

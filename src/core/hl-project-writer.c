@@ -214,6 +214,16 @@ uses_format_1_2 (const HlProject *project)
   return FALSE;
 }
 
+/* 1.3 added the sign-off block */
+static gboolean
+uses_signoff (const HlProject *project)
+{
+  for (int r = 0; r < HL_N_SIGNOFFS; r++)
+    if (project->signoff[r].name[0] != '\0' || project->signoff[r].date[0] != '\0')
+      return TRUE;
+  return FALSE;
+}
+
 char *
 hl_project_to_xml (const HlProject *project)
 {
@@ -248,9 +258,21 @@ hl_project_to_xml (const HlProject *project)
       g_string_append_printf (out, "  <revision number=\"%u\" date=\"%s\" author=\"%s\">%s</revision>\n",
                               r->number, date, author, text);
     }
+  for (int r = 0; r < HL_N_SIGNOFFS; r++)
+    if (project->signoff[r].name[0] != '\0' || project->signoff[r].date[0] != '\0')
+      {
+        g_autofree char *name = escape (project->signoff[r].name, FALSE);
+
+        g_string_append_printf (out, "  <sign-off role=\"%s\"", hl_signoff_role_to_string (r));
+        if (project->signoff[r].date[0] != '\0')
+          g_string_append_printf (out, " date=\"%s\"", project->signoff[r].date);
+        g_string_append_printf (out, ">%s</sign-off>\n", name);
+      }
   g_string_append (out, "</hoopline-project>\n");
   /* the lowest version that holds what was written */
-  if (uses_format_1_2 (project))
+  if (uses_signoff (project))
+    g_string_insert (out, format_at, ".3");
+  else if (uses_format_1_2 (project))
     g_string_insert (out, format_at, ".2");
   else if (copies)
     g_string_insert (out, format_at, ".1");
@@ -314,6 +336,20 @@ check_fields (const HlProject *project,
       || !check_text ("", "engineer", project->engineer, HL_TEXT_ONE_LINE, error)
       || !check_text ("", "description", project->description, HL_TEXT_MULTI_LINE, error))
     return FALSE;
+  for (int r = 0; r < HL_N_SIGNOFFS; r++)
+    {
+      g_autofree char *what = g_strdup_printf ("“%s” name", hl_signoff_role_to_string (r));
+
+      if (!check_text ("sign-off ", what, project->signoff[r].name, HL_TEXT_ONE_LINE, error))
+        return FALSE;
+      if (project->signoff[r].date[0] != '\0' && !hl_date_valid (project->signoff[r].date))
+        {
+          g_set_error (error, HL_PROJECT_FILE_ERROR, HL_PROJECT_FILE_ERROR_VALUE,
+                       "Cannot save: the “%s” sign-off date “%s” is not a YYYY-MM-DD date", hl_signoff_role_to_string (r),
+                       project->signoff[r].date);
+          return FALSE;
+        }
+    }
   for (guint i = 0; i < project->materials->len; i++)
     {
       const HlMaterial *m = &g_array_index (project->materials, HlMaterial, i);

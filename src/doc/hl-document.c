@@ -493,6 +493,27 @@ hl_document_set_info (HlDocument  *self,
   hl_document_end_edit (self);
 }
 
+void
+hl_document_set_signoff (HlDocument    *self,
+                         HlSignoffRole  role,
+                         const char    *name,
+                         const char    *date)
+{
+  static const char *const merge_keys[HL_N_SIGNOFFS] = { "signoff-prepared", "signoff-checked", "signoff-approved" };
+  const HlSignoff *so;
+
+  g_return_if_fail (HL_IS_DOCUMENT (self));
+  g_return_if_fail (role < HL_N_SIGNOFFS);
+
+  so = &self->project->signoff[role];
+  if (g_strcmp0 (so->name, name != NULL ? name : "") == 0 && g_strcmp0 (so->date, date != NULL ? date : "") == 0)
+    return;
+  /* typing in the same box is one undo step, like the project texts */
+  hl_document_begin_edit (self, merge_keys[role]);
+  hl_history_set_signoff (self->history, self->project, role, name, date);
+  hl_document_end_edit (self);
+}
+
 gboolean
 hl_document_add_revision (HlDocument *self,
                           const char *date,

@@ -115,6 +115,12 @@ void                 hl_document_set_info        (HlDocument  *self,
                                                   const char  *engineer,
                                                   const char  *description,
                                                   HlUnitSystem units);
+/* One sign-off of the design note.  @date is "YYYY-MM-DD" or "": the
+ * caller checks it (hl_date_valid()); a save refuses a bad one. */
+void                 hl_document_set_signoff     (HlDocument    *self,
+                                                  HlSignoffRole  role,
+                                                  const char    *name,
+                                                  const char    *date);
 /* The next number after the latest; FALSE (and nothing added) when it
  * or a text would pass the limits the project file reader keeps. */
 gboolean             hl_document_add_revision    (HlDocument *self,

@@ -23,7 +23,9 @@ typedef enum
   OP_REVISION,         /* HlRevision at index (the last) */
 } OpKind;
 
-enum { INFO_TITLE, INFO_ENGINEER, INFO_DESCRIPTION, N_INFO_TEXTS };
+/* the sign-off names and dates follow the three project texts, a name
+ * and a date per HlSignoffRole */
+enum { INFO_TITLE, INFO_ENGINEER, INFO_DESCRIPTION, INFO_SIGNOFF, N_INFO_TEXTS = INFO_SIGNOFF + 2 * HL_N_SIGNOFFS };
 
 /* the project texts an edit changed; NULL where it did not */
 typedef struct
@@ -162,8 +164,19 @@ set_info_text (HlProject  *project,
     hl_project_set_title (project, text);
   else if (which == INFO_ENGINEER)
     hl_project_set_engineer (project, text);
-  else
+  else if (which == INFO_DESCRIPTION)
     hl_project_set_description (project, text);
+  else
+    {
+      HlSignoffRole role = (which - INFO_SIGNOFF) / 2;
+      HlSignoff *so = &project->signoff[role];
+      g_autofree char *name = g_strdup (so->name);
+
+      if ((which - INFO_SIGNOFF) % 2 == 0)
+        hl_project_set_signoff (project, role, text, so->date);
+      else
+        hl_project_set_signoff (project, role, name, text);
+    }
 }
 
 /* puts one side of @op into @project; @forward picks "after" */
@@ -541,6 +554,36 @@ hl_history_set_info (HlHistory    *self,
       after->units = units;
       changed = TRUE;
     }
+  if (!changed)
+    {
+      info_free (before);
+      info_free (after);
+      return;
+    }
+  record (self, project, OP_INFO, 0, before, after, NULL);
+}
+
+void
+hl_history_set_signoff (HlHistory     *self,
+                        HlProject     *project,
+                        HlSignoffRole  role,
+                        const char    *name,
+                        const char    *date)
+{
+  const HlSignoff *so = &project->signoff[role];
+  const char *now[2] = { so->name, so->date };
+  const char *next[2] = { name != NULL ? name : "", date != NULL ? date : "" };
+  Info *before = g_new0 (Info, 1);
+  Info *after = g_new0 (Info, 1);
+  gboolean changed = FALSE;
+
+  for (guint i = 0; i < 2; i++)
+    if (g_strcmp0 (now[i], next[i]) != 0)
+      {
+        before->text[INFO_SIGNOFF + 2 * role + i] = g_strdup (now[i]);
+        after->text[INFO_SIGNOFF + 2 * role + i] = g_strdup (next[i]);
+        changed = TRUE;
+      }
   if (!changed)
     {
       info_free (before);

@@ -61,6 +61,12 @@ void       hl_history_set_info       (HlHistory           *history,
                                       const char          *engineer,
                                       const char          *description,
                                       HlUnitSystem         units);
+/* one sign-off of the design note; @date "YYYY-MM-DD" or "" */
+void       hl_history_set_signoff    (HlHistory           *history,
+                                      HlProject           *project,
+                                      HlSignoffRole        role,
+                                      const char          *name,
+                                      const char          *date);
 void       hl_history_add_revision   (HlHistory           *history,
                                       HlProject           *project,
                                       guint                number,

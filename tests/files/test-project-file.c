@@ -428,6 +428,59 @@ test_decimal_comma_locale (void)
   setlocale (LC_ALL, old);
 }
 
+/* The sign-off block of a design note (format 1.3): prepared, checked,
+ * approved, each a name and an ISO 8601 date (common practice for a
+ * calculation sheet); a file without it is still 1.2 and loads. */
+static void
+test_signoff (void)
+{
+  g_autoptr(HlProject) p = awkward_project ();
+  g_autofree char *before = hl_project_to_xml (p);
+  g_autofree char *xml = NULL;
+  g_autoptr(HlProject) back = NULL;
+  g_autoptr(GError) error = NULL;
+  const char *bad[] = {
+    "role=\"drawn\"", "role=\"checked\" date=\"2026-13-01\"",
+  };
+
+  g_assert_null (strstr (before, "<sign-off"));
+  g_assert_null (strstr (before, "format=\"1.3\""));
+  hl_project_set_signoff (p, HL_SIGNOFF_PREPARED, "A. Author & Co", "2026-11-30");
+  hl_project_set_signoff (p, HL_SIGNOFF_CHECKED, "", "2026-12-01");
+  xml = hl_project_to_xml (p);
+  g_assert_nonnull (strstr (xml, "format=\"1.3\""));
+  g_assert_nonnull (strstr (xml, "<sign-off role=\"prepared\" date=\"2026-11-30\">A. Author &amp; Co</sign-off>"));
+  g_assert_null (strstr (xml, "role=\"approved\""));   /* empty: not written */
+  back = load_xml (xml);
+  g_assert_cmpstr (back->signoff[HL_SIGNOFF_PREPARED].name, ==, "A. Author & Co");
+  g_assert_cmpstr (back->signoff[HL_SIGNOFF_CHECKED].date, ==, "2026-12-01");
+  g_assert_cmpstr (back->signoff[HL_SIGNOFF_APPROVED].name, ==, "");
+  check_round_trip (p);
+
+  /* a role the format does not know, a bad date, a role twice: refused
+   * with the element named */
+  for (guint i = 0; i <= G_N_ELEMENTS (bad); i++)
+    {
+      g_autoptr(GString) t = g_string_new (xml);
+      HlProject *refused;
+
+      if (i < G_N_ELEMENTS (bad))
+        g_string_replace (t, "role=\"prepared\" date=\"2026-11-30\"", bad[i], 1);
+      else
+        g_string_replace (t, "role=\"checked\"", "role=\"prepared\"", 1);
+      refused = hl_project_load_bytes (t->str, t->len, "memory", NULL, &error);
+      g_assert_null (refused);
+      g_assert_nonnull (error);
+      g_assert_nonnull (strstr (error->message, "sign-off"));
+      g_clear_error (&error);
+    }
+
+  /* the writer refuses what the reader would (a bad date set by code) */
+  hl_project_set_signoff (p, HL_SIGNOFF_APPROVED, "B. Boss", "2026-02-30");
+  g_assert_false (hl_project_check_writable (p, &error));
+  g_assert_nonnull (strstr (error->message, "approved"));
+}
+
 int
 main (int    argc,
       char **argv)
@@ -441,6 +494,7 @@ main (int    argc,
   g_test_add_func ("/files/project/defaults", test_defaults);
   g_test_add_func ("/files/project/tolerance-without-unit", test_tolerance_without_unit);
   g_test_add_func ("/files/project/newer-minor-version", test_newer_minor_version);
+  g_test_add_func ("/files/project/sign-off", test_signoff);
   g_test_add_func ("/files/project/good-files", test_good_files);
   g_test_add_func ("/files/project/decimal-comma-locale", test_decimal_comma_locale);
   return g_test_run ();

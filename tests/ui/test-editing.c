@@ -312,6 +312,50 @@ test_properties_limits (void)
   discard_window (window);
 }
 
+/* The sign-off block of a design note (common practice: prepared,
+ * checked, approved, each a name and a date): typed in the properties
+ * dialog, a date that is not ISO 8601 YYYY-MM-DD is marked and not
+ * taken, undo takes the edit back, and the project saves and reopens. */
+static void
+test_signoff (void)
+{
+  HlWindow *window = open_demo ();
+  HlPropertiesDialog *dialog = hl_properties_dialog_new (GTK_WINDOW (window), document (window), FALSE);
+  HlSignoffPage *page = hl_properties_dialog_get_signoff_page (dialog);
+  const HlProject *project = hl_document_get_project (document (window));
+  g_autofree char *long_name = repeat ("Ø", 1200);
+
+  gtk_window_present (GTK_WINDOW (dialog));
+  hl_ui_iterate ();
+  g_assert_cmpstr (project->signoff[HL_SIGNOFF_CHECKED].name, ==, "");
+  paste_into (hl_signoff_page_get_name (page, HL_SIGNOFF_CHECKED), "C. Checker");
+  paste_into (hl_signoff_page_get_date (page, HL_SIGNOFF_CHECKED), "2026-12-03");
+  project = hl_document_get_project (document (window));
+  g_assert_cmpstr (project->signoff[HL_SIGNOFF_CHECKED].name, ==, "C. Checker");
+  g_assert_cmpstr (project->signoff[HL_SIGNOFF_CHECKED].date, ==, "2026-12-03");
+  g_assert_cmpstr (hl_signoff_page_get_error (page), ==, "");
+
+  /* 3 December written the European way is not taken */
+  paste_into (hl_signoff_page_get_date (page, HL_SIGNOFF_CHECKED), "03.12.2026");
+  g_assert_cmpstr (hl_document_get_project (document (window))->signoff[HL_SIGNOFF_CHECKED].date, ==, "2026-12-03");
+  g_assert_nonnull (strstr (hl_signoff_page_get_error (page), "YYYY-MM-DD"));
+  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (hl_signoff_page_get_date (page, HL_SIGNOFF_CHECKED)), "error"));
+
+  /* the reader's limit holds while typing */
+  paste_into (hl_signoff_page_get_name (page, HL_SIGNOFF_APPROVED), long_name);
+  g_assert_cmpint (g_utf8_strlen (hl_document_get_project (document (window))->signoff[HL_SIGNOFF_APPROVED].name, -1),
+                   ==, HL_LIMIT_SHORT_TEXT_CHARS);
+  assert_saves_and_reopens (window);
+
+  /* undo takes the approver back out, and the box follows */
+  g_action_group_activate_action (G_ACTION_GROUP (window), "undo", NULL);
+  hl_ui_iterate ();
+  g_assert_cmpstr (hl_document_get_project (document (window))->signoff[HL_SIGNOFF_APPROVED].name, ==, "");
+  g_assert_cmpstr (gtk_editable_get_text (hl_signoff_page_get_name (page, HL_SIGNOFF_APPROVED)), ==, "");
+  gtk_window_destroy (GTK_WINDOW (dialog));
+  discard_window (window);
+}
+
 /* The reader takes revision numbers up to HL_LIMIT_REVISION_NUMBER; at
  * that number no further revision can be added. */
 static void
@@ -478,6 +522,7 @@ main (int    argc,
   g_test_add_func ("/editing/duplicate-long-name", test_duplicate_long_name);
   g_test_add_func ("/editing/properties-limits", test_properties_limits);
   g_test_add_func ("/editing/revision-number-limit", test_revision_number_limit);
+  g_test_add_func ("/editing/sign-off", test_signoff);
   g_test_add_func ("/editing/shared-material", test_shared_material);
   g_test_add_func ("/editing/huge-paste-keeps-width", test_huge_paste_keeps_width);
   status = g_test_run ();
