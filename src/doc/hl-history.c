@@ -526,28 +526,33 @@ hl_history_put_material (HlHistory        *self,
   g_free (before);
 }
 
-void
-hl_history_set_info (HlHistory    *self,
-                     HlProject    *project,
-                     const char   *title,
-                     const char   *engineer,
-                     const char   *description,
-                     HlUnitSystem  units)
+/* Records the project texts that change: @next[i] NULL leaves text i
+ * alone; @units is looked at when @set_units. */
+static void
+record_info (HlHistory    *self,
+             HlProject    *project,
+             const char  **next,
+             gboolean      set_units,
+             HlUnitSystem  units)
 {
   const char *now[N_INFO_TEXTS] = { project->title, project->engineer, project->description };
-  const char *next[N_INFO_TEXTS] = { title, engineer, description };
   Info *before = g_new0 (Info, 1);
   Info *after = g_new0 (Info, 1);
   gboolean changed = FALSE;
 
+  for (int r = 0; r < HL_N_SIGNOFFS; r++)
+    {
+      now[INFO_SIGNOFF + 2 * r] = project->signoff[r].name;
+      now[INFO_SIGNOFF + 2 * r + 1] = project->signoff[r].date;
+    }
   for (guint i = 0; i < N_INFO_TEXTS; i++)
-    if (g_strcmp0 (now[i], next[i] != NULL ? next[i] : "") != 0)
+    if (next[i] != NULL && g_strcmp0 (now[i] != NULL ? now[i] : "", next[i]) != 0)
       {
         before->text[i] = g_strdup (now[i] != NULL ? now[i] : "");
-        after->text[i] = g_strdup (next[i] != NULL ? next[i] : "");
+        after->text[i] = g_strdup (next[i]);
         changed = TRUE;
       }
-  if (project->display_units != units)
+  if (set_units && project->display_units != units)
     {
       before->has_units = after->has_units = TRUE;
       before->units = project->display_units;
@@ -564,33 +569,31 @@ hl_history_set_info (HlHistory    *self,
 }
 
 void
+hl_history_set_info (HlHistory    *self,
+                     HlProject    *project,
+                     const char   *title,
+                     const char   *engineer,
+                     const char   *description,
+                     HlUnitSystem  units)
+{
+  const char *next[N_INFO_TEXTS] = { title != NULL ? title : "", engineer != NULL ? engineer : "",
+                                     description != NULL ? description : "" };
+
+  record_info (self, project, next, TRUE, units);
+}
+
+void
 hl_history_set_signoff (HlHistory     *self,
                         HlProject     *project,
                         HlSignoffRole  role,
                         const char    *name,
                         const char    *date)
 {
-  const HlSignoff *so = &project->signoff[role];
-  const char *now[2] = { so->name, so->date };
-  const char *next[2] = { name != NULL ? name : "", date != NULL ? date : "" };
-  Info *before = g_new0 (Info, 1);
-  Info *after = g_new0 (Info, 1);
-  gboolean changed = FALSE;
+  const char *next[N_INFO_TEXTS] = { NULL };
 
-  for (guint i = 0; i < 2; i++)
-    if (g_strcmp0 (now[i], next[i]) != 0)
-      {
-        before->text[INFO_SIGNOFF + 2 * role + i] = g_strdup (now[i]);
-        after->text[INFO_SIGNOFF + 2 * role + i] = g_strdup (next[i]);
-        changed = TRUE;
-      }
-  if (!changed)
-    {
-      info_free (before);
-      info_free (after);
-      return;
-    }
-  record (self, project, OP_INFO, 0, before, after, NULL);
+  next[INFO_SIGNOFF + 2 * role] = name != NULL ? name : "";
+  next[INFO_SIGNOFF + 2 * role + 1] = date != NULL ? date : "";
+  record_info (self, project, next, FALSE, 0);
 }
 
 void

@@ -162,6 +162,36 @@ test_undo_redo_exact (void)
   close_demo (doc, &notes);
 }
 
+/* Sign-off edits undo exactly, and an edit of the other project texts
+ * leaves the sign-off alone both ways (hl_project_equal compares all). */
+static void
+test_signoff_undo (void)
+{
+  Notes notes;
+  HlDocument *doc = open_demo (&notes);
+  g_autoptr(HlProject) before = hl_project_copy (hl_document_get_project (doc));
+  g_autoptr(HlProject) signed_off = NULL;
+  const HlProject *p = hl_document_get_project (doc);
+
+  hl_document_set_signoff (doc, HL_SIGNOFF_PREPARED, "P. Preparer", "2026-12-01");
+  hl_document_set_signoff (doc, HL_SIGNOFF_APPROVED, "A. Approver", "");
+  signed_off = hl_project_copy (hl_document_get_project (doc));
+  hl_document_set_info (doc, "Another title", p->engineer, p->description, p->display_units);
+  g_assert_cmpstr (hl_document_get_project (doc)->signoff[HL_SIGNOFF_PREPARED].name, ==, "P. Preparer");
+  hl_document_undo (doc);
+  g_assert_true (hl_project_equal (hl_document_get_project (doc), signed_off));
+  hl_document_undo (doc);
+  hl_document_undo (doc);
+  g_assert_true (hl_project_equal (hl_document_get_project (doc), before));
+  hl_document_redo (doc);
+  hl_document_redo (doc);
+  hl_document_redo (doc);
+  g_assert_cmpstr (hl_document_get_project (doc)->title, ==, "Another title");
+  g_assert_cmpstr (hl_document_get_project (doc)->signoff[HL_SIGNOFF_APPROVED].name, ==, "A. Approver");
+  g_assert_cmpstr (hl_document_get_project (doc)->signoff[HL_SIGNOFF_PREPARED].date, ==, "2026-12-01");
+  close_demo (doc, &notes);
+}
+
 static void
 test_save_and_file (void)
 {
@@ -327,6 +357,7 @@ main (int   argc,
   g_test_init (&argc, &argv, NULL);
   g_test_add_func ("/document/properties-notify-on-change", test_properties_notify_on_change);
   g_test_add_func ("/document/undo-redo-exact", test_undo_redo_exact);
+  g_test_add_func ("/document/sign-off-undo", test_signoff_undo);
   g_test_add_func ("/document/save-and-file", test_save_and_file);
   g_test_add_func ("/document/one-solution-per-change", test_one_solution_per_change);
   g_test_add_func ("/document/shell-list-model", test_shell_list_model);
