@@ -428,9 +428,10 @@ thin (Steps *c)
   gboolean sphere = s->inputs.form == HL_FORM_SPHERE;
   double R = hl_thin_radius (s->inputs.thin_basis, s->a, s->b), net = s->pi - s->po;
   double sigma = net * R / ((sphere ? 2.0 : 1.0) * s->t);
-  const char *which = s->inputs.thin_basis == HL_BASIS_INNER ? _("inside radius")
-                      : s->inputs.thin_basis == HL_BASIS_OUTER ? _("outside radius") : _("mean radius");
-  g_autofree char *title = g_strdup_printf (_("thin wall, membrane stress on the %s"), which);
+  /* whole titles, so a translation can decline the radius */
+  const char *title = s->inputs.thin_basis == HL_BASIS_INNER ? _("thin wall, membrane stress on the inside radius")
+                      : s->inputs.thin_basis == HL_BASIS_OUTER ? _("thin wall, membrane stress on the outside radius")
+                                                               : _("thin wall, membrane stress on the mean radius");
   g_autofree char *pp = prs (c, net), *rr = len (c, R), *tt = len (c, s->t), *ss = prs (c, sigma);
   g_autofree char *se = prs (c, s->allowable);
   HlCheckStep *st = add (c, "thin", title, sphere ? "σ = (Pi − Po)·R / (2·t)" : "σθ = (Pi − Po)·R / t");
