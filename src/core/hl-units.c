@@ -241,6 +241,13 @@ hl_unit_default (HlQuantityKind kind,
     }
 }
 
+const char *
+hl_unit_system_words (HlUnitSystem system)
+{
+  /* one wording everywhere: window, --help, reports, sheet */
+  return system == HL_UNIT_SYSTEM_US ? N_("US customary (in, psi)") : N_("SI (mm, MPa)");
+}
+
 /* Length of the longest prefix of @s that is a plain decimal number:
  * [sign] digits [sep digits] [e|E [sign] digits].  Hex, inf and nan are
  * not numbers here, which is why strtod is not used directly. */

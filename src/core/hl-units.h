@@ -64,6 +64,11 @@ const char * const *hl_unit_names       (HlQuantityKind kind);
 const char   *hl_unit_default           (HlQuantityKind kind,
                                          HlUnitSystem   system);
 
+/* The one wording of a unit system, "SI (mm, MPa)" or "US customary
+ * (in, psi)", in English and marked with N_(): the window, the figure
+ * and the sheet show it through gettext, files and the CSV as it is. */
+const char   *hl_unit_system_words      (HlUnitSystem   system);
+
 /* Parses "12 bar", "0.5in", "1.5e3 mm", "7,5 MPa" (with @decimal_comma).
  * A bare number takes @fallback_unit.  Rejects hex, inf, nan, overflow.
  * Digit grouping is refused in both locales, with the accepted forms in
