@@ -151,9 +151,10 @@ HlDocument *
 hl_window_new_document (HlWindow *self)
 {
   HlApplication *app = HL_APPLICATION (gtk_window_get_application (GTK_WINDOW (self)));
-  HlShellInputs shell = hl_application_default_shell (app);
+  HlUnitSystem units = hl_application_unit_system (app);
+  HlShellInputs shell = hl_application_default_shell (app, units);
 
-  return hl_document_new (&shell, hl_application_unit_system (app));
+  return hl_document_new (&shell, units);
 }
 
 static void
@@ -286,7 +287,8 @@ shell_add_activated (GSimpleAction *action,
 {
   HlWindow *self = HL_WINDOW (user_data);
   HlApplication *app = HL_APPLICATION (gtk_window_get_application (GTK_WINDOW (self)));
-  HlShellInputs shell = hl_application_default_shell (app);
+  /* in the project's units, whatever the preference for new projects */
+  HlShellInputs shell = hl_application_default_shell (app, hl_document_get_project (self->document)->display_units);
 
   hl_document_add_shell (self->document, &shell);
   hl_shell_editor_focus_name (self->shell_editor);

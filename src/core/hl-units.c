@@ -241,6 +241,22 @@ hl_unit_default (HlQuantityKind kind,
     }
 }
 
+double
+hl_unit_to_system (double          si,
+                   HlQuantityKind  kind,
+                   HlUnitSystem    system,
+                   const char    **unit_out)
+{
+  const char *unit = hl_unit_default (kind, system);
+  const HlUnitRow *row = find_row (kind, unit);
+
+  if (unit_out != NULL)
+    *unit_out = unit;
+  if (row == NULL)
+    return si;
+  return (si - row->offset) / row->factor;
+}
+
 const char *
 hl_unit_system_words (HlUnitSystem system)
 {

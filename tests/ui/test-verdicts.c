@@ -149,11 +149,11 @@ test_default_basis (void)
   g_autoptr(GSettings) settings = g_settings_new ("org.hoopline.Hoopline");
   HlShellInputs shell;
 
-  shell = hl_application_default_shell (app);
+  shell = hl_application_default_shell (app, HL_UNIT_SYSTEM_SI);
   g_assert_cmpint (shell.design_basis, ==, HL_DESIGN_BASIS_UG27);
   g_assert_cmpint (shell.verdict_measure, ==, HL_MEASURE_BOTH);
   g_settings_set_enum (settings, "default-design-basis", HL_DESIGN_BASIS_LAME);
-  shell = hl_application_default_shell (app);
+  shell = hl_application_default_shell (app, HL_UNIT_SYSTEM_SI);
   g_assert_cmpint (shell.design_basis, ==, HL_DESIGN_BASIS_LAME);
   g_settings_reset (settings, "default-design-basis");
 }
