@@ -33,7 +33,7 @@ static const HlMaterial builtin[] = {
  * Same ids and names: a shell of a US project takes these, so its
  * fields read "29000 ksi" rather than 200 GPa converted to 29007.5 ksi;
  * the SI and US rows differ by the rounding only (below 0.5 %, 1.5 %
- * for copper's yield). */
+ * for copper's yield: 10 ksi against 70 MPa). */
 static const HlMaterial builtin_us[] = {
   { "typical-carbon-steel", "Carbon steel, plate (typical)",
     { 29000, "ksi" }, 0.30, { 38, "ksi" }, { 20, "ksi" } },

@@ -521,7 +521,7 @@ refuse_grouping (const char *s,
           plain[len] = '.';
           plain_q = hl_text_quote (plain, QUOTE_CHARS);
           g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                       _("“%s”: the decimal mark here is a point, not a comma; write “%s”"), quoted, plain_q);
+                       _("“%s”: use a point as the decimal separator; write “%s”"), quoted, plain_q);
           return TRUE;
         }
     }
