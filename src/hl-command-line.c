@@ -23,6 +23,8 @@ typedef struct
   char    *export_path;
   char    *shell_id;
   char    *size;
+  char    *paper;
+  char    *panels;
   int      points;
   char   **files;
 } Options;
@@ -34,6 +36,8 @@ options_clear (Options *o)
   g_free (o->export_path);
   g_free (o->shell_id);
   g_free (o->size);
+  g_free (o->paper);
+  g_free (o->panels);
   g_strfreev (o->files);
 }
 
@@ -88,6 +92,57 @@ parse_units (const char   *text,
   else
     return FALSE;
   return TRUE;
+}
+
+/* --paper: a4 or letter; without it the project's units decide */
+static gboolean
+parse_paper (const char   *text,
+             HlUnitSystem  project_units,
+             HlPaper      *paper)
+{
+  if (text == NULL)
+    *paper = project_units == HL_UNIT_SYSTEM_US ? HL_PAPER_LETTER : HL_PAPER_A4;
+  else if (g_ascii_strcasecmp (text, "a4") == 0)
+    *paper = HL_PAPER_A4;
+  else if (g_ascii_strcasecmp (text, "letter") == 0)
+    *paper = HL_PAPER_LETTER;
+  else
+    return FALSE;
+  return TRUE;
+}
+
+/* --panels: a comma list of section, detail, plot, chart; each once */
+static gboolean
+parse_panels (const char *text,
+              guint      *panels,
+              char      **bad)
+{
+  static const struct { const char *word; HlFigurePanels bit; } words[] = {
+    { "section", HL_PANEL_SECTION }, { "detail", HL_PANEL_DETAIL }, { "plot", HL_PANEL_PLOT },
+    { "chart", HL_PANEL_CHART },
+  };
+  g_auto(GStrv) parts = NULL;
+
+  *panels = 0;
+  if (text == NULL)
+    return TRUE;
+  parts = g_strsplit (text, ",", -1);
+  for (guint i = 0; parts[i] != NULL; i++)
+    {
+      char *word = g_strstrip (parts[i]);
+      guint k;
+
+      for (k = 0; k < G_N_ELEMENTS (words); k++)
+        if (strcmp (word, words[k].word) == 0 && (*panels & words[k].bit) == 0)
+          break;
+      if (k == G_N_ELEMENTS (words))
+        {
+          *bad = g_strdup (word);
+          return FALSE;
+        }
+      *panels |= words[k].bit;
+    }
+  return *panels != 0 || (*bad = g_strdup ("")) == NULL;
 }
 
 static GList *
@@ -171,12 +226,19 @@ make_context (Options *o)
 {
   GOptionEntry entries[] = {
     { "summary", 0, 0, G_OPTION_ARG_NONE, &o->summary, "Print key = value lines for every shell", NULL },
-    { "units", 0, 0, G_OPTION_ARG_STRING, &o->units, "Units of --summary and exports: si (mm, MPa) or us (in, psi)", "si|us" },
+    { "units", 0, 0, G_OPTION_ARG_STRING, &o->units,
+      "Units of --summary and exports: si = SI (mm, MPa), us = US customary (in, psi); "
+      "default: the project's", "si|us" },
     { "export", 0, 0, G_OPTION_ARG_FILENAME, &o->export_path,
-      "Write OUT: .svg .pdf .png figure, .csv through-thickness table, .txt calculation report", "OUT" },
+      "Write OUT: .svg .pdf .png figure, .csv through-thickness table, .txt calculation report; "
+      "of every shell unless --shell is given (see below)", "OUT" },
     { "shell", 0, 0, G_OPTION_ARG_STRING, &o->shell_id, "Only the shell with this id", "ID" },
     { "points", 0, 0, G_OPTION_ARG_INT, &o->points, "Points through the wall for .csv (default 101)", "N" },
     { "size", 0, 0, G_OPTION_ARG_STRING, &o->size, "Figure size: pixels for PNG, points for SVG/PDF", "WxH" },
+    { "paper", 0, 0, G_OPTION_ARG_STRING, &o->paper,
+      "PDF sheet paper: a4 or letter; default A4, Letter when the project's units are US customary", "a4|letter" },
+    { "panels", 0, 0, G_OPTION_ARG_STRING, &o->panels,
+      "Figure panels to draw, comma-separated: section, detail, plot, chart; default all that fit", "LIST" },
     { "figure-only", 0, 0, G_OPTION_ARG_NONE, &o->figure_only, "PDF: leave out the calculation sheet", NULL },
     { "check", 0, 0, G_OPTION_ARG_NONE, &o->check, "Validate FILE; exit 1 with file:line: message", NULL },
     { "version", 0, 0, G_OPTION_ARG_NONE, &o->version, "Print the version", NULL },
@@ -189,7 +251,19 @@ make_context (Options *o)
   g_option_context_set_summary (ctx,
                                 "Without an option, opens FILE in the window.\n"
                                 "Exit status: 0 done, 1 bad file or values, 2 bad command line.");
-  g_option_context_set_description (ctx, "Caution: " HL_CAUTION);
+  g_option_context_set_description (ctx,
+                                    "Scope of --export: without --shell, a .pdf, .txt or .csv holds every shell of\n"
+                                    "the project (a .csv one table per shell, each after its \"# shell = ID\" lines);\n"
+                                    "an .svg or .png is one figure, so a project of several shells gives one file per\n"
+                                    "shell, OUT's name with \"-ID\" before the extension (plan.svg: plan-shell-1.svg,\n"
+                                    "plan-shell-2.svg ...). With --shell=ID every format holds that shell, in OUT.\n"
+                                    "\n"
+                                    "Numbers: .svg, .pdf and .png are written with the decimal mark of the locale,\n"
+                                    "as the window shows them (LC_ALL=de_DE.UTF-8: 12,5; LC_NUMERIC=C for 12.5);\n"
+                                    ".csv, .txt and --summary use the C locale: a decimal point, and in a .csv\n"
+                                    "fields separated by commas (RFC 4180).\n"
+                                    "\n"
+                                    "Caution: " HL_CAUTION);
   return ctx;
 }
 
@@ -203,7 +277,10 @@ hl_command_line_run (int    argc,
   g_autoptr(HlProject) project = NULL;
   g_autoptr(GPtrArray) warnings = NULL;
   g_autoptr(GList) shells = NULL;
+  g_autofree char *bad_panel = NULL;
   HlUnitSystem system;
+  HlPaper paper;
+  guint panels;
   int actions, status;
 
   o.points = HL_DEFAULT_POINTS;
@@ -253,6 +330,18 @@ hl_command_line_run (int    argc,
   if (o.units == NULL)
     system = project->display_units;
 
+  if (!parse_paper (o.paper, project->display_units, &paper))
+    {
+      status = usage_error (ctx, "--paper must be a4 or letter, not “%s”", o.paper);
+      goto out;
+    }
+  if (!parse_panels (o.panels, &panels, &bad_panel))
+    {
+      status = usage_error (ctx, "--panels=%s: “%s” is not one of section, detail, plot, chart "
+                            "(each at most once, comma-separated)", o.panels, bad_panel);
+      goto out;
+    }
+
   shells = selected_shells (project, o.shell_id);
   if (shells == NULL)
     {
@@ -270,6 +359,12 @@ hl_command_line_run (int    argc,
     {
       HlExportRequest req = { project, shells, o.export_path, system, (guint) o.points,
                               o.size, o.figure_only, o.shell_id != NULL };
+
+      req.paper = paper;
+      req.panels = panels;
+      /* as the window: the figure, sheet and report in the locale's
+       * numbers; the CSV stays C locale in the writer */
+      req.locale_numbers = hl_format_locale_decimal_comma ();
 
       /* the exit code is ours to choose: a bad request (extension,
        * size) is a command-line mistake, anything else bad input */

@@ -307,20 +307,23 @@ hl_application_unit_system (HlApplication *self)
 }
 
 HlShellInputs
-hl_application_default_shell (HlApplication *self)
+hl_application_default_shell (HlApplication *self,
+                              HlUnitSystem   system)
 {
   HlShellInputs shell = hl_shell_inputs_default ();
 
   g_return_val_if_fail (HL_IS_APPLICATION (self), shell);
 
-  if (hl_application_unit_system (self) == HL_UNIT_SYSTEM_US)
+  if (system == HL_UNIT_SYSTEM_US)
     {
-      /* round US sizes rather than converted SI ones (39.37 in) */
+      /* round US sizes rather than converted SI ones (39.37 in), and the
+       * material as US tables state it (29000 ksi, not 200 GPa) */
       shell.size = hl_quantity_make (40, "in");
       shell.wall_thickness = hl_quantity_make (0.375, "in");
       shell.corrosion_allowance = hl_quantity_make (0, "in");
       shell.internal_pressure = hl_quantity_make (150, "psi");
       shell.external_pressure = hl_quantity_make (0, "psi");
+      shell.material = hl_material_default_in (HL_UNIT_SYSTEM_US);
     }
   shell.thin_tolerance = hl_quantity_make (g_settings_get_double (self->settings, "default-tolerance"), "%");
   switch (g_settings_get_enum (self->settings, "default-verdict-measure"))

@@ -19,7 +19,10 @@ G_DECLARE_FINAL_TYPE (HlApplication, hl_application, HL, APPLICATION, AdwApplica
 HlApplication *hl_application_new           (GApplicationFlags extra_flags);
 GSettings     *hl_application_get_settings  (HlApplication *self);
 /* a new shell as the preferences ask for: units, tolerance, measure */
-HlShellInputs  hl_application_default_shell (HlApplication *self);
+/* A new shell in @system's units: a US project's starts in inches, psi
+ * and ksi */
+HlShellInputs  hl_application_default_shell (HlApplication *self,
+                                             HlUnitSystem   system);
 HlUnitSystem   hl_application_unit_system   (HlApplication *self);
 
 /* The window part of main(): returns the exit status. */

@@ -14,6 +14,7 @@
 
 #include "hl-config.h"
 #include "hl-checks-table.h"
+#include "hl-pressure-unit.h"
 #include "hl-design-check.h"
 #include "hl-document-follower.h"
 #include "hl-figure-format.h"
@@ -40,6 +41,7 @@ struct _HlChecksTable
 
   HlDocument   *document;
   GSignalGroup *follower;
+  gboolean      follows_settings;   /* redrawn when the pressure unit changes */
 };
 
 G_DEFINE_FINAL_TYPE (HlChecksTable, hl_checks_table, GTK_TYPE_WIDGET)
@@ -60,17 +62,18 @@ set_badge (GtkWidget  *badge,
       gtk_widget_remove_css_class (badge, kinds[i]);
 }
 
+/* @value (SI) in @unit of @kind: "12.59 mm", "9.531 bar" */
 static char *
-number (double       value,
-        HlRowKind    kind,
-        HlUnitSystem units)
+in_unit (double          value,
+         HlQuantityKind  kind,
+         const char     *unit)
 {
   g_autofree char *n = NULL;
 
   if (!isfinite (value))
     return g_strdup ("—");
-  n = hl_format_display (hl_row_convert (kind, units, value), DIGITS);
-  return g_strdup_printf ("%s %s", n, hl_row_unit (kind, units));
+  n = hl_format_display (value / hl_unit_factor (kind, unit), DIGITS);
+  return g_strdup_printf ("%s %s", n, unit);
 }
 
 static char *
@@ -126,10 +129,13 @@ show_method (HlChecksTable      *self,
 {
   const HlMethodCheck *mc = &sol->check.methods[m];
   guint row = m + 1;
-  g_autofree char *required = number (mc->required, HL_ROW_LENGTH, units);
-  g_autofree char *available = number (mc->available, HL_ROW_LENGTH, units);
-  g_autofree char *mawp = number (mc->mawp, HL_ROW_STRESS, units);
-  g_autofree char *design = number (mc->design_pressure, HL_ROW_STRESS, units);
+  const char *l_unit = hl_row_unit (HL_ROW_LENGTH, units);
+  g_autofree char *required = in_unit (mc->required, HL_KIND_LENGTH, l_unit);
+  g_autofree char *available = in_unit (mc->available, HL_KIND_LENGTH, l_unit);
+  const char *p_unit = hl_pressure_unit_shown (NULL, &sol->inputs, units);
+  /* pressures in the preference's unit (hl-pressure-unit.h) */
+  g_autofree char *mawp = in_unit (mc->mawp, HL_KIND_STRESS, p_unit);
+  g_autofree char *design = in_unit (mc->design_pressure, HL_KIND_STRESS, p_unit);
   g_autofree char *u_p = percent (mc->utilisation_pressure);
   g_autofree char *u_t = percent (mc->utilisation_thickness);
   /* TRANSLATORS: utilisation by pressure, then by thickness */
@@ -241,6 +247,15 @@ on_document_changed_cb (HlDocument    *document,
   show_verdicts (self, sol, units);
   for (guint m = 0; m < HL_N_METHODS; m++)
     show_method (self, sol, m, units);
+}
+
+static void
+on_pressure_unit_changed_cb (GSettings     *settings,
+                             const char    *key,
+                             HlChecksTable *self)
+{
+  if (self->document != NULL)
+    on_document_changed_cb (self->document, self);
 }
 
 static GtkWidget *
@@ -365,6 +380,13 @@ hl_checks_table_set_document (HlChecksTable *self,
 
   g_set_object (&self->document, document);
   g_signal_group_set_target (self->follower, document);
+  /* the preference of the pressure unit applies at once */
+  if (!self->follows_settings && hl_pressure_unit_settings () != NULL)
+    {
+      g_signal_connect_object (hl_pressure_unit_settings (), "changed::result-pressure-unit",
+                               G_CALLBACK (on_pressure_unit_changed_cb), self, 0);
+      self->follows_settings = TRUE;
+    }
 }
 
 const char *

@@ -1,4 +1,4 @@
-/* hl-export-dialog.h — choosing where to export, the format and the size
+/* hl-export-dialog.h — choosing where to export, then what goes in it
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -7,17 +7,16 @@
 #include <gtk/gtk.h>
 
 #include "hl-document.h"
-#include "hl-export-job.h"
+#include "hl-export-options.h"
 
 G_BEGIN_DECLS
 
-/* @size is "WxH" (pixels for PNG, points for SVG and PDF) or "" */
-typedef void (*HlExportChosenFunc) (const char *path,
-                                    const char *size,
-                                    gpointer    user_data);
-
-/* Shows the save chooser; calls @done only when the user accepts. */
+/* Shows the save chooser, then the export options for the chosen name;
+ * calls @done only when the user accepts both.  @settings keeps the
+ * options (may be NULL). */
 void  hl_export_dialog_present (GtkWindow          *parent,
+                                HlDocument         *document,
+                                GSettings          *settings,
                                 const char         *stem,
                                 HlExportChosenFunc  done,
                                 gpointer            user_data);

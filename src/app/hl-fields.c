@@ -18,9 +18,7 @@
 gboolean
 hl_locale_decimal_comma (void)
 {
-  const struct lconv *lc = localeconv ();
-
-  return lc != NULL && lc->decimal_point != NULL && lc->decimal_point[0] == ',';
+  return hl_format_locale_decimal_comma ();
 }
 
 char *

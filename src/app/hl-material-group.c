@@ -241,8 +241,9 @@ on_material_dropdown_selected_cb (GObject         *dropdown,
   if (strcmp (id, current->material_ref) == 0)
     return;
   m = hl_project_find_material (hl_document_get_project (self->document), id);
+  /* a built-in material in the project's units: ksi in a US project */
   if (m == NULL)
-    m = hl_material_builtin_find (id);
+    m = hl_material_builtin_find_in (id, hl_document_get_project (self->document)->display_units);
   if (m == NULL)
     return;
   shell = *current;

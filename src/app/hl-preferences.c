@@ -18,6 +18,7 @@ struct _HlPreferences
   GtkSpinButton *tolerance_spin;
   AdwComboRow   *measure_dropdown;
   AdwComboRow   *basis_dropdown;
+  AdwComboRow   *pressure_unit_dropdown;
   GtkSwitch     *dark_switch;
 };
 
@@ -64,6 +65,7 @@ hl_preferences_class_init (HlPreferencesClass *klass)
   gtk_widget_class_bind_template_child (widget_class, HlPreferences, tolerance_spin);
   gtk_widget_class_bind_template_child (widget_class, HlPreferences, measure_dropdown);
   gtk_widget_class_bind_template_child (widget_class, HlPreferences, basis_dropdown);
+  gtk_widget_class_bind_template_child (widget_class, HlPreferences, pressure_unit_dropdown);
   gtk_widget_class_bind_template_child (widget_class, HlPreferences, dark_switch);
 }
 
@@ -80,6 +82,7 @@ hl_preferences_new (GtkWindow *parent,
   static const char *const systems[] = { "si", "us", NULL };
   static const char *const measures[] = { "hoop", "equivalent", "both", NULL };
   static const char *const bases[] = { "asme-ug27", "en13445", "lame", "thin-wall", NULL };
+  static const char *const pressure_units[] = { "typed", "system", "bar", "MPa", "kPa", "psi", NULL };
   HlPreferences *self = g_object_new (HL_TYPE_PREFERENCES, "transient-for", parent, NULL);
 
   g_settings_bind_with_mapping (settings, "unit-system", self->unit_system_dropdown, "selected",
@@ -91,6 +94,9 @@ hl_preferences_new (GtkWindow *parent,
   g_settings_bind_with_mapping (settings, "default-design-basis", self->basis_dropdown, "selected",
                                 G_SETTINGS_BIND_DEFAULT, nick_to_index, index_to_nick,
                                 (gpointer) bases, NULL);
+  g_settings_bind_with_mapping (settings, "result-pressure-unit", self->pressure_unit_dropdown, "selected",
+                                G_SETTINGS_BIND_DEFAULT, nick_to_index, index_to_nick,
+                                (gpointer) pressure_units, NULL);
   g_settings_bind (settings, "default-tolerance", self->tolerance_spin, "value", G_SETTINGS_BIND_DEFAULT);
   g_settings_bind (settings, "dark-style", self->dark_switch, "active", G_SETTINGS_BIND_DEFAULT);
   return self;

@@ -9,6 +9,7 @@
 
 #include "hl-config.h"
 #include "hl-results-table.h"
+#include "hl-pressure-unit.h"
 #include "hl-document-follower.h"
 #include "hl-design-check.h"
 #include "hl-result-groups.h"
@@ -35,6 +36,7 @@ struct _HlResultsTable
 
   HlDocument *document;
   GSignalGroup  *follower;      /* calls on_document_changed_cb */
+  gboolean    follows_settings;   /* rebuilt when the pressure unit changes */
   GString    *text;
   GPtrArray  *names;      /* GtkLabel *, one per row, owned by the grid */
   GPtrArray  *values;
@@ -61,6 +63,7 @@ in_groups (const HlResultRow *row)
 static void
 row_value (const HlResultRow *row,
            HlUnitSystem       units,
+           const char        *pressure_unit,
            char             **number,
            const char       **unit)
 {
@@ -72,6 +75,13 @@ row_value (const HlResultRow *row,
                 : g_strdup_printf (_("n/a (%s)"), _(row->result.reason != NULL ? row->result.reason
                                                                               : "not computable"));
       *unit = "";
+      return;
+    }
+  if (row->kind == HL_ROW_STRESS && hl_result_is_pressure (row->key))
+    {
+      /* pressures in the preference's unit, stresses in the system's */
+      *number = hl_format_display (row->result.value / hl_unit_factor (HL_KIND_STRESS, pressure_unit), DIGITS);
+      *unit = pressure_unit;
       return;
     }
   *number = hl_format_display (hl_row_convert (row->kind, units, row->result.value), DIGITS);
@@ -217,6 +227,7 @@ rebuild (HlResultsTable *self)
 {
   const HlSolution *solution = hl_document_get_solution (self->document);
   HlUnitSystem units = hl_document_get_project (self->document)->display_units;
+  const char *pressure_unit = NULL;
   g_autoptr(GArray) rows = NULL;
   guint n = 0;
 
@@ -226,6 +237,7 @@ rebuild (HlResultsTable *self)
   if (solution == NULL)
     return;
 
+  pressure_unit = hl_pressure_unit_shown (NULL, &solution->inputs, units);
   rows = hl_result_rows (solution);
   ensure_cells (self, rows);
   for (guint i = 0; i < rows->len; i++)
@@ -238,7 +250,7 @@ rebuild (HlResultsTable *self)
 
       if (skip_row (row))
         continue;
-      row_value (row, units, &number, &unit);
+      row_value (row, units, pressure_unit, &number, &unit);
       /* the summary's stable words read better as the names they stand for */
       if (strcmp (row->key, "design_basis") == 0)
         {
@@ -362,6 +374,13 @@ hl_results_table_set_document (HlResultsTable *self,
 
   g_set_object (&self->document, document);
   g_signal_group_set_target (self->follower, document);
+  /* the preference of the pressure unit applies at once */
+  if (!self->follows_settings && hl_pressure_unit_settings () != NULL)
+    {
+      g_signal_connect_object (hl_pressure_unit_settings (), "changed::result-pressure-unit", G_CALLBACK (rebuild),
+                               self, G_CONNECT_SWAPPED);
+      self->follows_settings = TRUE;
+    }
 }
 
 char *

@@ -81,6 +81,7 @@ update_actions (HlWindow *self)
   set_enabled (self, "redo", hl_document_can_redo (self->document));
   set_enabled (self, "export", solved);
   set_enabled (self, "export-to", solved);
+  set_enabled (self, "export-options", solved);
   set_enabled (self, "print", solved);
   set_enabled (self, "print-to", solved);
   set_enabled (self, "copy-results", solved);
@@ -151,19 +152,28 @@ HlDocument *
 hl_window_new_document (HlWindow *self)
 {
   HlApplication *app = HL_APPLICATION (gtk_window_get_application (GTK_WINDOW (self)));
-  HlShellInputs shell = hl_application_default_shell (app);
+  HlUnitSystem units = hl_application_unit_system (app);
+  HlShellInputs shell = hl_application_default_shell (app, units);
 
-  return hl_document_new (&shell, hl_application_unit_system (app));
+  return hl_document_new (&shell, units);
+}
+
+static GSettings *
+window_settings (HlWindow *self)
+{
+  GtkApplication *app = gtk_window_get_application (GTK_WINDOW (self));
+
+  return app != NULL ? hl_application_get_settings (HL_APPLICATION (app)) : NULL;
 }
 
 static void
-export_to (HlWindow   *self,
-           const char *path,
-           const char *size)
+export_to (HlWindow              *self,
+           const char            *path,
+           const HlExportChoices *choices)
 {
   g_autoptr(GError) error = NULL;
 
-  if (!hl_export_document (self->document, path, size, &error))
+  if (!hl_export_document (self->document, path, choices, &error))
     {
       g_autofree char *text = g_strdup_printf (_("Nothing was exported. %s"), error->message);
 
@@ -171,9 +181,17 @@ export_to (HlWindow   *self,
     }
   else
     {
-      g_autofree char *name = g_path_get_basename (path);
-      g_autofree char *text = g_strdup_printf (_("Exported “%s”."), name);
+      g_autoptr(GPtrArray) names = hl_export_document_names (self->document, path, choices);
+      g_autofree char *list = hl_export_list_names (names);
+      g_autofree char *folder = g_path_get_dirname (path);
+      g_autofree char *folder_name = g_filename_display_basename (folder);
+      g_autofree char *text = NULL;
 
+      if (names->len == 1)
+        text = g_strdup_printf (_("Exported “%s”."), (const char *) g_ptr_array_index (names, 0));
+      else
+        /* TRANSLATORS: one figure file per shell: the count, the names, the folder */
+        text = g_strdup_printf (_("Exported %u files, one per shell, into “%s”: %s."), names->len, folder_name, list);
       /* a success needs no answer: it goes by itself, and an older
        * problem notice goes with it */
       hl_window_hide_message (self);
@@ -182,11 +200,11 @@ export_to (HlWindow   *self,
 }
 
 static void
-on_export_chosen (const char *path,
-                  const char *size,
-                  gpointer    user_data)
+on_export_chosen (const char            *path,
+                  const HlExportChoices *choices,
+                  gpointer               user_data)
 {
-  export_to (HL_WINDOW (user_data), path, size);
+  export_to (HL_WINDOW (user_data), path, choices);
 }
 
 static void
@@ -197,20 +215,39 @@ export_activated (GSimpleAction *action,
   HlWindow *self = HL_WINDOW (user_data);
   const HlShellInputs *shell = hl_document_get_shell (self->document);
 
-  hl_export_dialog_present (GTK_WINDOW (self), shell != NULL ? shell->id : "figure",
-                            on_export_chosen, self);
+  hl_export_dialog_present (GTK_WINDOW (self), self->document, window_settings (self),
+                            shell != NULL ? shell->id : "figure", on_export_chosen, self);
 }
 
-/* "export-to" with (path, size): the export without the chooser */
+/* "export-to" with (path, size): the export without the dialogs, with
+ * the options last chosen in them */
 static void
 export_to_activated (GSimpleAction *action,
                      GVariant      *param,
                      gpointer       user_data)
 {
+  HlWindow *self = HL_WINDOW (user_data);
   const char *path, *size;
+  HlExportChoices choices;
 
   g_variant_get (param, "(&s&s)", &path, &size);
-  export_to (HL_WINDOW (user_data), path, size);
+  hl_export_choices_load (&choices, window_settings (self), hl_document_get_project (self->document)->display_units);
+  g_strlcpy (choices.size, size, sizeof choices.size);
+  export_to (self, path, &choices);
+}
+
+/* "export-options" with a path: the options for a name already chosen
+ * (what the chooser leads to) */
+static void
+export_options_activated (GSimpleAction *action,
+                          GVariant      *param,
+                          gpointer       user_data)
+{
+  HlWindow *self = HL_WINDOW (user_data);
+  HlExportOptions *options = hl_export_options_new (GTK_WINDOW (self), self->document, window_settings (self),
+                                                    g_variant_get_string (param, NULL), on_export_chosen, self);
+
+  gtk_window_present (GTK_WINDOW (options));
 }
 
 /* "print" shows the dialog; "print-to" with a path writes the PDF the
@@ -286,7 +323,8 @@ shell_add_activated (GSimpleAction *action,
 {
   HlWindow *self = HL_WINDOW (user_data);
   HlApplication *app = HL_APPLICATION (gtk_window_get_application (GTK_WINDOW (self)));
-  HlShellInputs shell = hl_application_default_shell (app);
+  /* in the project's units, whatever the preference for new projects */
+  HlShellInputs shell = hl_application_default_shell (app, hl_document_get_project (self->document)->display_units);
 
   hl_document_add_shell (self->document, &shell);
   hl_shell_editor_focus_name (self->shell_editor);
@@ -345,6 +383,7 @@ static const GActionEntry win_entries[] = {
   { "show-page", show_page_activated, "s" },
   { "export", export_activated },
   { "export-to", export_to_activated, "(ss)" },
+  { "export-options", export_options_activated, "s" },
   { "print", print_activated },
   { "print-to", print_activated, "s" },
   { "copy-results", copy_results_activated },

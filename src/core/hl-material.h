@@ -32,4 +32,13 @@ guint              hl_material_builtin_count (void);
 const HlMaterial  *hl_material_builtin       (guint       index);
 const HlMaterial  *hl_material_builtin_find  (const char *id);
 
+/* The default and the built-in materials stated in @system's units: SI
+ * as above (GPa, MPa), US customary in ksi with the round values of US
+ * tables (E = 29000 ksi for carbon steel).  For new shells and for a
+ * material chosen in a project of those units; a file's shell keeps the
+ * values it holds. */
+HlMaterial         hl_material_default_in      (HlUnitSystem  system);
+const HlMaterial  *hl_material_builtin_find_in (const char   *id,
+                                                HlUnitSystem  system);
+
 G_END_DECLS

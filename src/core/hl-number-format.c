@@ -7,6 +7,7 @@
 
 #include "hl-number-format.h"
 
+#include <locale.h>
 #include <math.h>
 #include <string.h>
 
@@ -81,6 +82,14 @@ hl_format_exact (double value)
   if (exponent < PLAIN_MIN_EXPONENT || exponent > PLAIN_MAX_EXPONENT)
     return g_strdup (buf);
   return plain_from_scientific (buf);
+}
+
+gboolean
+hl_format_locale_decimal_comma (void)
+{
+  const struct lconv *lc = localeconv ();
+
+  return lc != NULL && lc->decimal_point != NULL && lc->decimal_point[0] == ',';
 }
 
 static char *

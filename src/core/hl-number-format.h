@@ -22,6 +22,9 @@ char         *hl_format_exact           (double value);
 char         *hl_format_significant     (double value,
                                          int    significant);
 
+/* Whether the user's locale (LC_NUMERIC) writes a decimal comma. */
+gboolean      hl_format_locale_decimal_comma (void);
+
 /* As hl_format_significant but in the user's locale (decimal comma). */
 char         *hl_format_display         (double value,
                                          int    significant);

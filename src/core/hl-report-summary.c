@@ -110,6 +110,39 @@ put_csv_value (GString *out,
   g_string_append_c (out, last ? '\n' : ',');
 }
 
+/* a quantity as typed, C locale: "10 bar" */
+static char *
+csv_quantity (HlQuantity q)
+{
+  g_autofree char *num = hl_format_significant (q.value, 10);
+  g_autofree char *unit = hl_report_escape_line (q.unit);
+
+  return g_strdup_printf ("%s %s", num, unit);
+}
+
+static void
+put_csv_identity (GString          *out,
+                  const HlSolution *s,
+                  HlUnitSystem      system)
+{
+  g_autofree char *id = hl_report_escape_line (s->inputs.id);
+  g_autofree char *name = hl_report_escape_line (s->inputs.name);
+  g_autofree char *p_in = csv_quantity (s->inputs.internal_pressure);
+  g_autofree char *p_out = csv_quantity (s->inputs.external_pressure);
+  double design = hl_row_convert (HL_ROW_STRESS, system, s->check.methods[0].design_pressure);
+  g_autofree char *dp = hl_format_significant (design, 10);
+
+  g_string_append (out, "# table = stresses through the wall; fields separated by commas (RFC 4180), "
+                        "numbers in the C locale (decimal point, no grouping)\n");
+  g_string_append_printf (out, "# shell = %s\n", id);
+  g_string_append_printf (out, "# name = %s\n", name);
+  g_string_append_printf (out, "# units = %s\n", hl_unit_system_words (system));
+  g_string_append_printf (out, "# design_pressure = %s %s (internal, gauge)\n", dp,
+                          hl_row_unit (HL_ROW_STRESS, system));
+  g_string_append_printf (out, "# internal_pressure = %s\n", p_in);
+  g_string_append_printf (out, "# external_pressure = %s\n", p_out);
+}
+
 char *
 hl_report_csv (const HlSolution *s,
                HlUnitSystem      system)
@@ -122,9 +155,11 @@ hl_report_csv (const HlSolution *s,
   GString *out = g_string_new (NULL);
   g_autofree char *u = hl_format_significant (100 * s->check.utilisation, 9);
 
-  /* the verdicts the other outputs give, as comment lines a reader skips
-   * (pandas comment="#", numpy's default), so a table sent on alone
-   * still says whether the wall passes */
+  /* what the table is and for which load, then the verdicts the other
+   * outputs give, as comment lines a reader skips (pandas comment="#",
+   * numpy's default), so a table sent on alone still says what it is
+   * and whether the wall passes */
+  put_csv_identity (out, s, system);
   g_string_append_printf (out, "# design_verdict = %s\n", hl_check_result_to_string (s->check.verdict));
   g_string_append_printf (out, "# governing_check = %s\n", s->check.governing);
   g_string_append_printf (out, "# utilisation = %s %%\n", isfinite (s->check.utilisation) ? u : "n/a");

@@ -49,36 +49,19 @@ put_padded (GString    *out,
     g_string_append_c (out, ' ');
 }
 
+/* the value as typed, then in the report's units (issue 11: a US
+ * report's column is in in, psi, ksi, °F whatever was typed) */
 static void
 input_line (GString        *out,
             const char     *label,
             HlQuantity      q,
-            HlQuantityKind  kind)
+            HlQuantityKind  kind,
+            HlUnitSystem    system)
 {
   g_autofree char *typed = hl_format_significant (q.value, 10);
-  double si = hl_quantity_si (q, kind);
-  g_autofree char *converted = NULL;
   const char *unit;
-
-  switch (kind)
-    {
-    case HL_KIND_LENGTH:
-      converted = hl_format_significant (si * 1e3, 8);
-      unit = "mm";
-      break;
-    case HL_KIND_PERCENT:
-      converted = hl_format_significant (si * 100, 8);
-      unit = "%";
-      break;
-    case HL_KIND_TEMPERATURE:
-      converted = hl_format_significant (si - 273.15, 8);
-      unit = "\xc2\xb0""C";
-      break;
-    default:
-      converted = hl_format_significant (si / 1e6, 8);
-      unit = "MPa";
-      break;
-    }
+  double shown = hl_unit_to_system (hl_quantity_si (q, kind), kind, system, &unit);
+  g_autofree char *converted = hl_format_significant (shown, 8);
   g_autofree char *typed_unit = hl_report_escape_line (q.unit);
 
   g_string_append (out, "  ");
@@ -90,7 +73,8 @@ input_line (GString        *out,
 static void
 input_field (GString             *out,
              const HlField       *f,
-             const HlShellInputs *in)
+             const HlShellInputs *in,
+             HlUnitSystem         system)
 {
   gconstpointer slot = hl_field_cslot (f, in);
   const HlFieldChoice *choice;
@@ -123,19 +107,20 @@ input_field (GString             *out,
       g_string_append_printf (out, "  %-35s%s\n", f->report, choice != NULL ? choice->report : "");
     }
   else
-    input_line (out, f->report, *(const HlQuantity *) slot, hl_field_quantity_kind (f));
+    input_line (out, f->report, *(const HlQuantity *) slot, hl_field_quantity_kind (f), system);
 }
 
 static void
 put_inputs (GString             *out,
-            const HlShellInputs *in)
+            const HlShellInputs *in,
+            HlUnitSystem         system)
 {
   rule (out, "Inputs (as entered = converted)");
   g_string_append_printf (out, "  %-35s%s%s%s\n", "Form", hl_form_to_string (in->form),
                           in->form == HL_FORM_CYLINDER ? ", ends " : "",
                           in->form == HL_FORM_CYLINDER ? hl_ends_to_string (in->ends) : "");
   for (guint i = 0; i < hl_field_count (); i++)
-    input_field (out, hl_field_nth (i), in);
+    input_field (out, hl_field_nth (i), in, system);
 }
 
 static void
@@ -488,10 +473,10 @@ hl_report_text (const HlProject  *project,
 
     g_string_append_printf (out, "Shell:     %s (id %s)\n", name, id);
   }
-  g_string_append_printf (out, "Printed:   %s, units %s\n", today, system == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa");
+  g_string_append_printf (out, "Printed:   %s, units %s\n", today, hl_unit_system_words (system));
   g_string_append_printf (out, "\nCAUTION: %s\n", HL_CAUTION);
 
-  put_inputs (out, &corroded->inputs);
+  put_inputs (out, &corroded->inputs, system);
   put_methods (out);
   put_design_check (out, corroded, system);
   put_test_pressure (out, corroded, system);

@@ -35,10 +35,15 @@ char *hl_report_summary_block (const HlSolution *solution,
                                HlUnitSystem      system);
 
 /* Through-thickness table, inner to outer surface inclusive; CSV with
- * fields per hl_report_csv_field(), after HL_CSV_PREAMBLE_LINES comment
- * lines "# key = value" with the verdicts (design_verdict,
- * governing_check, utilisation, thin_wall_verdict). */
-#define HL_CSV_PREAMBLE_LINES 4
+ * fields per hl_report_csv_field(), separated by commas (RFC 4180),
+ * numbers in the C locale whatever the user's, after
+ * HL_CSV_PREAMBLE_LINES comment lines "# key = value": what the table is
+ * and its separator (table), the shell (shell, name), the unit system
+ * (units), the load (design_pressure, internal_pressure,
+ * external_pressure) and the verdicts (design_verdict, governing_check,
+ * utilisation, thin_wall_verdict).  A CSV of several shells is these
+ * blocks one after another, each starting at its "# table =" line. */
+#define HL_CSV_PREAMBLE_LINES 11
 char *hl_report_csv           (const HlSolution *solution,
                                HlUnitSystem      system);
 

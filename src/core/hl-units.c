@@ -241,6 +241,29 @@ hl_unit_default (HlQuantityKind kind,
     }
 }
 
+double
+hl_unit_to_system (double          si,
+                   HlQuantityKind  kind,
+                   HlUnitSystem    system,
+                   const char    **unit_out)
+{
+  const char *unit = hl_unit_default (kind, system);
+  const HlUnitRow *row = find_row (kind, unit);
+
+  if (unit_out != NULL)
+    *unit_out = unit;
+  if (row == NULL)
+    return si;
+  return (si - row->offset) / row->factor;
+}
+
+const char *
+hl_unit_system_words (HlUnitSystem system)
+{
+  /* one wording everywhere: window, --help, reports, sheet */
+  return system == HL_UNIT_SYSTEM_US ? N_("US customary (in, psi)") : N_("SI (mm, MPa)");
+}
+
 /* Length of the longest prefix of @s that is a plain decimal number:
  * [sign] digits [sep digits] [e|E [sign] digits].  Hex, inf and nan are
  * not numbers here, which is why strtod is not used directly. */
@@ -498,7 +521,7 @@ refuse_grouping (const char *s,
           plain[len] = '.';
           plain_q = hl_text_quote (plain, QUOTE_CHARS);
           g_set_error (error, HL_UNITS_ERROR, HL_UNITS_ERROR_NOT_A_NUMBER,
-                       _("“%s”: the decimal mark here is a point, not a comma; write “%s”"), quoted, plain_q);
+                       _("“%s”: use a point as the decimal separator; write “%s”"), quoted, plain_q);
           return TRUE;
         }
     }

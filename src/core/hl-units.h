@@ -64,6 +64,21 @@ const char * const *hl_unit_names       (HlQuantityKind kind);
 const char   *hl_unit_default           (HlQuantityKind kind,
                                          HlUnitSystem   system);
 
+/* SI @si (m, Pa, fraction, K) as a number in @system's unit for @kind
+ * (hl_unit_default: mm or in, MPa or psi, GPa or ksi for a modulus, %,
+ * °C or °F), that unit in @unit_out (may be NULL).  What a listing of
+ * inputs shows beside the value as typed, so that a US project's column
+ * is in US units whatever was typed. */
+double        hl_unit_to_system         (double          si,
+                                         HlQuantityKind  kind,
+                                         HlUnitSystem    system,
+                                         const char    **unit_out);
+
+/* The one wording of a unit system, "SI (mm, MPa)" or "US customary
+ * (in, psi)", in English and marked with N_(): the window, the figure
+ * and the sheet show it through gettext, files and the CSV as it is. */
+const char   *hl_unit_system_words      (HlUnitSystem   system);
+
 /* Parses "12 bar", "0.5in", "1.5e3 mm", "7,5 MPa" (with @decimal_comma).
  * A bare number takes @fallback_unit.  Rejects hex, inf, nan, overflow.
  * Digit grouping is refused in both locales, with the accepted forms in

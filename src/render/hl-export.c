@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-export"
 
 #include "hl-export.h"
+#include "hl-export-private.h"
 #include "hl-atomic-file.h"
 #include "hl-figure.h"
 #include "hl-report.h"
@@ -55,37 +56,19 @@ append_report (GString             *out,
 
 static gboolean
 export_text (const HlExportRequest *req,
-             HlExportFormat         format,
              GError               **error)
 {
   g_autoptr(GString) out = g_string_new (NULL);
   g_autoptr(GError) local = NULL;
 
-  if (format == HL_EXPORT_CSV)
-    {
-      g_autoptr(HlSolution) sol = hl_solve (req->shells->data, req->points, TRUE, &local);
-      g_autofree char *csv = NULL;
-
-      if (sol == NULL)
-        {
-          g_set_error (error, local->domain, local->code, "shell %s: %s",
-                       ((HlShellInputs *) req->shells->data)->id, local->message);
-          return FALSE;
-        }
-      csv = hl_report_csv (sol, req->units);
-      g_string_append (out, csv);
-    }
-  else
-    {
-      /* without --shell the report covers every shell, one after another */
-      for (GList *l = req->shells; l != NULL; l = l->next)
-        if (!append_report (out, req->project, l->data, req->units, &local))
-          {
-            g_set_error (error, local->domain, local->code, "shell %s: %s",
-                         ((HlShellInputs *) l->data)->id, local->message);
-            return FALSE;
-          }
-    }
+  /* without --shell the report covers every shell, one after another */
+  for (GList *l = req->shells; l != NULL; l = l->next)
+    if (!append_report (out, req->project, l->data, req->units, &local))
+      {
+        g_set_error (error, local->domain, local->code, "shell %s: %s",
+                     ((HlShellInputs *) l->data)->id, local->message);
+        return FALSE;
+      }
   if (!hl_atomic_write (req->path, out->str, out->len, error))
     return FALSE;
   return TRUE;
@@ -121,6 +104,8 @@ export_figure (const HlExportRequest *req,
   new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
   hl_figure_context_init (&ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
   ctx.units = req->units;
+  ctx.panels = req->panels;
+  ctx.locale_numbers = req->locale_numbers;
   if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
     return FALSE;
   return TRUE;
@@ -137,13 +122,15 @@ hl_export_run (const HlExportRequest *req,
   switch (format)
     {
     case HL_EXPORT_CSV:
+      return hl_atomic_check_target (req->path, error) && hl_export_csv_shells (req, error);
     case HL_EXPORT_TXT:
       if (!hl_atomic_check_target (req->path, error))
         return FALSE;
-      return export_text (req, format, error);
+      return export_text (req, error);
     case HL_EXPORT_SVG:
-    case HL_EXPORT_PDF:
     case HL_EXPORT_PNG:
+      return hl_export_figure_shells (req, format, error);
+    case HL_EXPORT_PDF:
       return export_figure (req, format, error);
     case HL_EXPORT_UNKNOWN:
     default:

@@ -26,6 +26,9 @@ typedef struct
   /* Fields added for the design note: zero is the old behaviour. */
   HlPaper      paper;         /* sheet pages of a PDF */
   guint        panels;        /* HlFigurePanels; 0: all that fit */
+  gboolean     locale_numbers; /* figure, sheet and report numbers with the
+                               * user's decimal mark (a German window); a
+                               * CSV is C locale whatever this says */
 } HlExportRequest;
 
 typedef enum
@@ -80,7 +83,17 @@ typedef enum
 
 GQuark         hl_export_error_quark     (void);
 
-/* Nothing is left at @path unless the whole export succeeded. */
+/* Whether @request writes one file per shell: an SVG or PNG is one
+ * figure, so a scope of several shells gives one file each. */
+gboolean       hl_export_one_file_per_shell (const HlExportRequest *request);
+
+/* The files hl_export_run() writes for @request, in the order of its
+ * shells: @request->path, or for one file per shell "STEM-ID.EXT"
+ * beside it ("out/receiver.svg" -> "out/receiver-shell-1.svg"). */
+GPtrArray     *hl_export_output_paths    (const HlExportRequest *request);
+
+/* Nothing is left at @path unless the whole export succeeded; of one
+ * file per shell, none is written unless all are. */
 gboolean       hl_export_run             (const HlExportRequest *request,
                                           GError               **error);
 

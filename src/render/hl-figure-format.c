@@ -60,6 +60,22 @@ hl_figure_format_quantity (double       si,
 }
 
 char *
+hl_figure_format_input (double         si,
+                        HlQuantityKind kind,
+                        HlUnitSystem   system,
+                        int            digits,
+                        gboolean       locale)
+{
+  const char *unit;
+  double shown = hl_unit_to_system (si, kind, system, &unit);
+  g_autofree char *number = hl_figure_format_sig (shown, digits, locale);
+
+  if (unit[0] == '\0')
+    return g_steal_pointer (&number);
+  return g_strconcat (number, HL_NBSP, unit, NULL);
+}
+
+char *
 hl_figure_caution (void)
 {
   return g_strdup_printf (_("Caution: %s"), _(HL_CAUTION));

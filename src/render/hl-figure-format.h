@@ -34,6 +34,15 @@ char *hl_figure_format_quantity (double       si,
                                  int          digits,
                                  gboolean     locale);
 
+/* An input's SI @si in @system's unit for its @kind, as a listing of
+ * inputs shows it beside the value as typed: "29007.5 ksi" for a
+ * modulus in US customary units, "2.5 mm", "65 °C" (hl_unit_to_system) */
+char *hl_figure_format_input    (double         si,
+                                 HlQuantityKind kind,
+                                 HlUnitSystem   system,
+                                 int            digits,
+                                 gboolean       locale);
+
 /* Why a method of the design check fails or does not apply, in the
  * user's language and units: "needs 12.59 mm nominal, has 12 mm; …";
  * NULL when it passes */

@@ -454,10 +454,14 @@ check_csv (const char *path,
   double A = p * a * a / (b * b - a * a), B = p * a * a * b * b / (b * b - a * a);
   double last_r = 0;
 
-  /* the verdicts come first, as comment lines (issue 10: every output
-   * says whether the wall passes) */
-  g_assert_true (g_str_has_prefix (lines[0], "# design_verdict = pass")
-                 || g_str_has_prefix (lines[0], "# design_verdict = fail"));
+  /* the shell, its load and verdicts come first, as comment lines
+   * (issue 10: every output says whether the wall passes; issue 11: the
+   * shell id, the units and the load) */
+  g_assert_cmpstr (lines[1], ==, "# shell = press-barrel");
+  g_assert_cmpstr (lines[3], ==, us ? "# units = US customary (in, psi)" : "# units = SI (mm, MPa)");
+  g_assert_cmpstr (lines[5], ==, "# internal_pressure = 400 bar");
+  g_assert_true (g_str_has_prefix (lines[7], "# design_verdict = pass")
+                 || g_str_has_prefix (lines[7], "# design_verdict = fail"));
   while (lines[0] != NULL && lines[0][0] == '#')
     lines++;
   g_assert_cmpstr (lines[0], ==, us ? "radius_in,hoop_lame_psi,radial_lame_psi,axial_lame_psi,von_mises_psi,tresca_psi,hoop_thin_psi,axial_thin_psi"

@@ -237,16 +237,23 @@ test_demo_all (void)
         else
           check_png (out, 1684, 1190);
       }
-  /* without --shell: the first shell's figure */
+  /* without --shell: a PNG is one figure, so one file per shell, named
+   * after it (issue 11) */
   {
-    g_autofree char *out = g_build_filename (dir, "first.png", NULL);
+    g_autofree char *out = g_build_filename (dir, "all.png", NULL);
     g_autofree char *a_out = g_strdup_printf ("--export=%s", out);
     g_autoptr(HlRun) run = hl_test_run (a_out, "--size=600x900", demo_path, NULL);
 
     g_assert_cmpint (run->status, ==, 0);
-    check_png (out, 600, 900);
+    g_assert_false (g_file_test (out, G_FILE_TEST_EXISTS));
+    for (guint i = 0; i < hl_project_n_shells (demo); i++)
+      {
+        g_autofree char *each = g_strdup_printf ("%s/all-%s.png", dir, hl_project_shell (demo, i)->id);
+
+        check_png (each, 600, 900);
+      }
   }
-  g_assert_cmpuint (count_entries (dir), ==, 3 * hl_project_n_shells (demo) + 1);
+  g_assert_cmpuint (count_entries (dir), ==, 4 * hl_project_n_shells (demo));
   remove_tree (dir);
 }
 

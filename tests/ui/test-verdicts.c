@@ -23,6 +23,7 @@
 #include "hl-config.h"
 #include "hl-application.h"
 #include "hl-checks-table.h"
+#include "hl-results-table.h"
 #include "hl-ui-test-util.h"
 #include "hl-window.h"
 
@@ -65,9 +66,57 @@ test_failing_receiver (void)
   g_assert_nonnull (strstr (hl_checks_table_get_cell (checks, 1, 0), "UG-27"));
   g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 1), ==, "12.59 mm");
   g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 2), ==, "12 mm");
+  /* pressures in the unit the design pressure was typed in (issue 11:
+   * nobody compares 0.9531 MPa with 10 bar by hand): 1 bar = 1e5 Pa
+   * exactly (NIST SP 811 B.8) */
+  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 3), ==, "9.531 bar");
+  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 4), ==, "10 bar");
+  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 6), ==, "FAIL");
+  hl_ui_discard_window (window);
+}
+
+/* the preference of the pressure unit: the project's units, or a unit
+ * chosen; the results table follows it too.  1 psi = 6894.757 Pa (NIST
+ * SP 811 B.8): 0.9531 MPa = 138.2 psi */
+static void
+test_pressure_unit_preference (void)
+{
+  g_autoptr(GSettings) settings = g_settings_new ("org.hoopline.Hoopline");
+  HlWindow *window = open_cases ();
+  HlChecksTable *checks = select_shell (window, 0);
+  g_autofree char *results = NULL;
+
+  g_settings_set_string (settings, "result-pressure-unit", "system");
+  hl_ui_iterate ();
   g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 3), ==, "0.9531 MPa");
   g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 4), ==, "1 MPa");
-  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 6), ==, "FAIL");
+  g_settings_set_string (settings, "result-pressure-unit", "psi");
+  hl_ui_iterate ();
+  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 3), ==, "138.2 psi");
+  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 4), ==, "145 psi");
+  results = hl_results_table_get_text (hl_window_get_results_table (window));
+  /* stresses keep the project's unit, pressures take the chosen one */
+  g_assert_nonnull (strstr (results, "\tpsi\n"));
+  g_assert_nonnull (strstr (results, "\tMPa\n"));
+  {
+    g_auto(GStrv) lines = g_strsplit (results, "\n", -1);
+    guint in_psi = 0;
+
+    for (guint i = 0; lines[i] != NULL; i++)
+      {
+        g_autofree char *lower = g_ascii_strdown (lines[i], -1);
+
+        if (g_str_has_suffix (lines[i], "\tMPa") && strstr (lower, "pressure") != NULL)
+          g_error ("a pressure not in psi: %s", lines[i]);
+        if (g_str_has_suffix (lines[i], "\tpsi") && strstr (lower, "pressure") != NULL)
+          in_psi++;
+      }
+    /* MAWP of each method, first yield, collapse at least */
+    g_assert_cmpuint (in_psi, >=, 5);
+  }
+  g_settings_reset (settings, "result-pressure-unit");
+  hl_ui_iterate ();
+  g_assert_cmpstr (hl_checks_table_get_cell (checks, 1, 3), ==, "9.531 bar");
   hl_ui_discard_window (window);
 }
 
@@ -149,11 +198,11 @@ test_default_basis (void)
   g_autoptr(GSettings) settings = g_settings_new ("org.hoopline.Hoopline");
   HlShellInputs shell;
 
-  shell = hl_application_default_shell (app);
+  shell = hl_application_default_shell (app, HL_UNIT_SYSTEM_SI);
   g_assert_cmpint (shell.design_basis, ==, HL_DESIGN_BASIS_UG27);
   g_assert_cmpint (shell.verdict_measure, ==, HL_MEASURE_BOTH);
   g_settings_set_enum (settings, "default-design-basis", HL_DESIGN_BASIS_LAME);
-  shell = hl_application_default_shell (app);
+  shell = hl_application_default_shell (app, HL_UNIT_SYSTEM_SI);
   g_assert_cmpint (shell.design_basis, ==, HL_DESIGN_BASIS_LAME);
   g_settings_reset (settings, "default-design-basis");
 }
@@ -176,6 +225,7 @@ main (int    argc,
     }
   app = hl_ui_application_new ();
   g_test_add_func ("/verdicts/failing-receiver", test_failing_receiver);
+  g_test_add_func ("/verdicts/pressure-unit-preference", test_pressure_unit_preference);
   g_test_add_func ("/verdicts/thick-barrel", test_thick_barrel);
   g_test_add_func ("/verdicts/bursting-receiver", test_bursting_receiver);
   g_test_add_func ("/verdicts/default-basis", test_default_basis);
