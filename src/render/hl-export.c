@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-export"
 
 #include "hl-export.h"
+#include "hl-export-pdf.h"
 #include "hl-atomic-file.h"
 #include "hl-figure.h"
 #include "hl-report.h"
@@ -91,17 +92,54 @@ export_text (const HlExportRequest *req,
   return TRUE;
 }
 
+/* one context per shell of @req, each with its analysis and new wall
+ * (solved once here for every page); NULL with @error set when a shell
+ * cannot be solved */
+static GPtrArray *
+solve_shells (const HlExportRequest *req,
+              GPtrArray             *keep,
+              GError               **error)
+{
+  g_autoptr(GPtrArray) contexts = g_ptr_array_new_with_free_func (g_free);
+
+  for (GList *l = req->shells; l != NULL; l = l->next)
+    {
+      const HlShellInputs *shell = l->data;
+      g_autoptr(GError) local = NULL;
+      HlSolution *sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
+      HlSolution *new_wall;
+      HlFigureContext *ctx;
+
+      if (sol == NULL)
+        {
+          g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
+          return NULL;
+        }
+      new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
+      g_ptr_array_add (keep, sol);
+      if (new_wall != NULL)
+        g_ptr_array_add (keep, new_wall);
+      ctx = g_new0 (HlFigureContext, 1);
+      hl_figure_context_init (ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
+      ctx->units = req->units;
+      ctx->panels = req->panels;
+      g_ptr_array_add (contexts, ctx);
+      /* SVG and PNG hold one figure: the first shell's */
+      if (hl_export_format_for_path (req->path) != HL_EXPORT_PDF)
+        break;
+    }
+  return g_steal_pointer (&contexts);
+}
+
 static gboolean
 export_figure (const HlExportRequest *req,
                HlExportFormat         format,
                GError               **error)
 {
-  const HlShellInputs *shell = req->shells->data;
-  g_autoptr(HlSolution) sol = NULL;
-  g_autoptr(HlSolution) new_wall = NULL;
+  g_autoptr(GPtrArray) keep = g_ptr_array_new_with_free_func ((GDestroyNotify) hl_solution_free);
+  g_autoptr(GPtrArray) contexts = NULL;
   g_autoptr(GError) local = NULL;
-  HlFigureContext ctx = { 0 };
-  guint width, height;
+  guint width = 0, height = 0;
 
   if (!hl_export_parse_size (req->size, format, &width, &height, &local))
     {
@@ -110,20 +148,19 @@ export_figure (const HlExportRequest *req,
     }
   if (!hl_atomic_check_target (req->path, error))
     return FALSE;
-  /* without --shell the figure is of the first shell */
-  sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
-  if (sol == NULL)
-    {
-      g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
-      return FALSE;
-    }
-  /* solved once here for every page of the sheet */
-  new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
-  hl_figure_context_init (&ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
-  ctx.units = req->units;
-  if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
+  contexts = solve_shells (req, keep, error);
+  if (contexts == NULL)
     return FALSE;
-  return TRUE;
+  if (format == HL_EXPORT_PDF)
+    {
+      /* without --size the figure takes the report's paper, landscape */
+      HlPdfReport report = { contexts, !req->shell_given, req->figure_only, req->paper,
+                             req->size != NULL ? width : 0, req->size != NULL ? height : 0 };
+
+      return hl_export_pdf_report (req->path, &report, error);
+    }
+  return hl_export_figure_file (req->path, format, width, height, g_ptr_array_index (contexts, 0), req->figure_only,
+                                error);
 }
 
 gboolean
