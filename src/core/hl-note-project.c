@@ -64,8 +64,8 @@ shell_line (GArray           *rows,
   g_autofree char *thin = g_ascii_strup (hl_result_rows_find (results, "thin_wall_verdict")->word, -1);
 
   /* the verdicts in words, upper case, as the summary's words */
-  hl_note_add (rows, HL_NOTE_TABLE, cols_shells, FALSE, HL_NOTE_SUMMARY_N_COLUMNS, shell, hl_note_form_text (&s->inputs),
-               size, p, mawp, u, verdict, thin);
+  hl_note_add (rows, HL_NOTE_TABLE, cols_shells, FALSE, HL_NOTE_SUMMARY_N_COLUMNS, shell,
+               hl_note_form_text (&s->inputs), size, p, mawp, u, verdict, thin);
 }
 
 GArray *
@@ -109,7 +109,7 @@ hl_note_project_summary (const HlProject *project,
   for (guint i = 0; i < solutions->len; i++)
     shell_line (rows, g_ptr_array_index (solutions, i), units, locale_numbers);
   hl_note_add (rows, HL_NOTE_PARAGRAPH, NULL, FALSE, 1,
-               _("Each shell's figure and calculation sheet follow, in this order. MAWP and utilisation are those of "
+               _("Each shell's calculation sheet follows, in this order (in the PDF after the shell's figure). MAWP and utilisation are those of "
                  "the shell's design basis, on the corroded wall; the verdicts are the design check's and the "
                  "thin-wall check's."));
   return rows;

@@ -192,8 +192,10 @@ hl_note_test_pressure (GArray          *rows,
   if (t->checked_rule == HL_TEST_UG100_PNEUMATIC)
     {
       g_autofree char *kj = hl_note_sig (t->stored_energy.value / 1e3, 4, ctx->loc);
-      g_autofree char *energy = hl_result_ok (t->stored_energy) ? g_strdup_printf ("%s" HL_NOTE_NBSP "kJ", kj)
-                                                                : g_strdup (hl_note_core_text (t->stored_energy.reason));
+      g_autofree char *energy = NULL;
+
+      energy = hl_result_ok (t->stored_energy) ? g_strdup_printf ("%s" HL_NOTE_NBSP "kJ", kj)
+                                               : g_strdup (hl_note_core_text (t->stored_energy.reason));
 
       hl_note_add_owned (rows, HL_NOTE_PARAGRAPH, TRUE,
                          g_strdup_printf (_("HAZARD: a pneumatic test stores far more energy than a hydrostatic one; "

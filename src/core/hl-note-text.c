@@ -153,6 +153,18 @@ cell_natural (const HlNoteRow *r,
   return MAX (text_len (safe), r->boxed ? BOX_WIDTH : 0);
 }
 
+static glong
+longest_word (const char *text)
+{
+  g_autofree char *safe = hl_report_escape_line (text);
+  g_auto(GStrv) words = g_strsplit (safe, " ", -1);
+  glong most = 0;
+
+  for (guint i = 0; words[i] != NULL; i++)
+    most = MAX (most, text_len (words[i]));
+  return most;
+}
+
 /* Column widths for the table rows [@first, @last): each column as wide
  * as its widest cell when the line allows; else the columns narrower
  * than a fair share keep their width (found again as the share grows)
@@ -165,10 +177,10 @@ column_widths (GArray *rows,
                glong  *widths,
                guint  *n_cols)
 {
-  glong natural[HL_NOTE_MAX_CELLS] = { 0 };
+  glong natural[HL_NOTE_MAX_CELLS] = { 0 }, longest[HL_NOTE_MAX_CELLS] = { 0 };
   gboolean fixed[HL_NOTE_MAX_CELLS] = { FALSE };
   const double *cols = hl_note_row (rows, first)->cols;
-  glong room, left;
+  glong room, left, total;
   double share;
   guint n = 0, n_left;
   gboolean changed = TRUE;
@@ -179,7 +191,10 @@ column_widths (GArray *rows,
 
       n = MAX (n, r->n_cells);
       for (guint c = 0; c < r->n_cells; c++)
-        natural[c] = MAX (natural[c], cell_natural (r, c));
+        {
+          natural[c] = MAX (natural[c], cell_natural (r, c));
+          longest[c] = MAX (longest[c], longest_word (r->cells[c]));
+        }
     }
   *n_cols = n;
   room = MAX ((glong) width - INDENT - GAP * ((glong) n - 1), (glong) n * 6);
@@ -214,6 +229,16 @@ column_widths (GArray *rows,
   for (guint c = 0; c < n; c++)
     if (!fixed[c])
       widths[c] = MAX (6, (glong) (left * (cols != NULL ? cols[c] : natural[c]) / MAX (share, 1e-9)));
+  /* a number or a word is not cut while the line has room: the first
+   * column gives back what the others need for their longest words */
+  total = 0;
+  for (guint c = 0; c < n; c++)
+    {
+      widths[c] = MAX (widths[c], MIN (longest[c], 24));
+      total += widths[c];
+    }
+  if (total > room && fixed[0])
+    widths[0] = MAX (MIN (longest[0], 24), widths[0] - (total - room));
 }
 
 static void

@@ -92,6 +92,9 @@ typedef enum
   HL_NOTE_SUMMARY_N_COLUMNS,
 } HlNoteSummaryColumn;
 
+/* Columns of the text report: a printed page at 10 characters an inch */
+#define HL_REPORT_TEXT_WIDTH 100
+
 /* The rows as plain text: tables as aligned columns, paragraphs wrapped
  * at @width columns, every cell through hl_report_escape_line(). */
 char    *hl_note_to_text    (GArray         *rows,

@@ -10,8 +10,6 @@
 #include "hl-report.h"
 #include "hl-note.h"
 
-/* columns of the text report: the width of a printed page at 10 cpi */
-#define REPORT_WIDTH 100
 
 char *
 hl_report_text (const HlProject  *project,
@@ -28,5 +26,5 @@ hl_report_text (const HlProject  *project,
   c = hl_quantity_si (corroded->inputs.corrosion_allowance, HL_KIND_LENGTH);
   rows = hl_note_content (project, corroded, corroded->corroded && c > 0 && new_wall != corroded ? new_wall : NULL,
                           system, FALSE, NULL);
-  return hl_note_to_text (rows, REPORT_WIDTH);
+  return hl_note_to_text (rows, HL_REPORT_TEXT_WIDTH);
 }

@@ -8,6 +8,7 @@
 #include "hl-export-pdf.h"
 #include "hl-atomic-file.h"
 #include "hl-figure.h"
+#include "hl-note.h"
 #include "hl-report.h"
 #include "hl-solution.h"
 
@@ -31,15 +32,17 @@ hl_export_format_for_path (const char *path)
   return HL_EXPORT_UNKNOWN;
 }
 
+/* the report of @shell after @out; its analysis joins @analyses */
 static gboolean
 append_report (GString             *out,
                HlProject           *project,
                const HlShellInputs *shell,
                HlUnitSystem         units,
+               GPtrArray           *analyses,
                GError             **error)
 {
   g_autoptr(HlSolution) fresh = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, error);
-  g_autoptr(HlSolution) corroded = NULL;
+  HlSolution *corroded = NULL;
   g_autofree char *text = NULL;
 
   if (fresh == NULL)
@@ -47,6 +50,7 @@ append_report (GString             *out,
   corroded = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, error);
   if (corroded == NULL)
     return FALSE;
+  g_ptr_array_add (analyses, corroded);
   text = hl_report_text (project, fresh, corroded, units);
   if (out->len > 0)
     g_string_append (out, "\n\f\n");
@@ -78,14 +82,25 @@ export_text (const HlExportRequest *req,
     }
   else
     {
+      g_autoptr(GPtrArray) analyses = g_ptr_array_new_with_free_func ((GDestroyNotify) hl_solution_free);
+
       /* without --shell the report covers every shell, one after another */
       for (GList *l = req->shells; l != NULL; l = l->next)
-        if (!append_report (out, req->project, l->data, req->units, &local))
+        if (!append_report (out, req->project, l->data, req->units, analyses, &local))
           {
             g_set_error (error, local->domain, local->code, "shell %s: %s",
                          ((HlShellInputs *) l->data)->id, local->message);
             return FALSE;
           }
+      /* ... after the project summary, as the PDF */
+      if (!req->shell_given)
+        {
+          g_autoptr(GArray) rows = hl_note_project_summary (req->project, analyses, req->units, FALSE, NULL);
+          g_autofree char *summary = hl_note_to_text (rows, HL_REPORT_TEXT_WIDTH);
+
+          g_string_prepend (out, "\n\f\n");
+          g_string_prepend (out, summary);
+        }
     }
   if (!hl_atomic_write (req->path, out->str, out->len, error))
     return FALSE;
