@@ -22,6 +22,8 @@
 #define LAST_PAGE_MIN_ROWS 3
 /* rows a heading takes along to the next page */
 #define HEADING_KEEPS 2
+/* the most rows a check's title keeps with it (its worked-out table) */
+#define STEP_ROWS 8
 
 typedef struct
 {
@@ -121,6 +123,16 @@ keeps_with_next (const HlSheetRow *r)
   return r->kind == HL_SHEET_HEADING || r->kind == HL_SHEET_TITLE || r->strong;
 }
 
+static gboolean
+same_table (Sheet *s,
+            guint  a,
+            guint  b)
+{
+  const HlSheetRow *ra = hl_note_row (s->rows, a), *rb = hl_note_row (s->rows, b);
+
+  return ra->kind == HL_SHEET_TABLE && rb->kind == HL_SHEET_TABLE && ra->cols == rb->cols;
+}
+
 /* the height from row @i that must stand on one page */
 static double
 block_height (Sheet *s,
@@ -134,6 +146,16 @@ block_height (Sheet *s,
       end++;
       need += s->heights[end];
     }
+  /* a check's title takes its whole short table along: the formula, the
+   * numbers, the result and the outcome on one page */
+  if (hl_note_row (s->rows, i)->kind == HL_SHEET_PARAGRAPH && hl_note_row (s->rows, i)->strong)
+    for (guint k = 0; k < STEP_ROWS && end + 1 < n && same_table (s, end, end + 1); k++)
+      need += s->heights[++end];
+  /* a table's last row does not stand alone at the top of a page */
+  if (end + 2 < n && same_table (s, end, end + 1) && !same_table (s, end + 1, end + 2))
+    need += s->heights[++end];
+  else if (end + 2 == n && same_table (s, end, end + 1))
+    need += s->heights[++end];
   /* a heading takes more than one row of its section along */
   if (hl_note_row (s->rows, i)->kind == HL_SHEET_HEADING)
     for (extra = 1; extra < HEADING_KEEPS && end + 1 < n && hl_note_row (s->rows, end + 1)->kind != HL_SHEET_HEADING;
