@@ -123,11 +123,12 @@ page_sizes (const char *pdf,
 }
 
 static void
-export_demo (const char *path,
-             HlProject  *demo,
-             gboolean    one_shell,
-             HlPaper     paper,
-             HlUnitSystem units)
+export_demo_full (const char  *path,
+                  HlProject   *demo,
+                  gboolean     one_shell,
+                  HlPaper      paper,
+                  HlUnitSystem units,
+                  gboolean     figure_only)
 {
   g_autoptr(GList) shells = NULL;
   g_autoptr(GError) error = NULL;
@@ -142,8 +143,19 @@ export_demo (const char *path,
   req.points = 11;
   req.shell_given = one_shell;
   req.paper = paper;
+  req.figure_only = figure_only;
   g_assert_true (hl_export_run (&req, &error));
   g_assert_no_error (error);
+}
+
+static void
+export_demo (const char  *path,
+             HlProject   *demo,
+             gboolean     one_shell,
+             HlPaper     paper,
+             HlUnitSystem units)
+{
+  export_demo_full (path, demo, one_shell, paper, units, FALSE);
 }
 
 /* the "page N of M" label of @text, or FALSE */
@@ -161,6 +173,31 @@ page_label (const char *text,
       p = strstr (p + 1, "page ");
     }
   return FALSE;
+}
+
+/* figure only: one landscape figure page per shell, no summary, no sheet */
+static void
+test_figure_only (Out          *o,
+                  gconstpointer data)
+{
+  g_autoptr(HlProject) demo = hl_rt_load_demo ();
+  g_autoptr(GArray) sizes = g_array_new (FALSE, FALSE, sizeof (double));
+  guint pages;
+
+  if (!have_poppler ())
+    return;
+  export_demo_full (o->pdf, demo, FALSE, HL_PAPER_LETTER, HL_UNIT_SYSTEM_SI, TRUE);
+  pages = page_sizes (o->pdf, sizes);
+  g_assert_cmpuint (pages, ==, hl_project_n_shells (demo));
+  for (guint p = 0; p < pages; p++)
+    {
+      g_autofree char *text = page_text (o->pdf, p + 1);
+      guint n, m;
+
+      g_assert_false (page_label (text, &n, &m));
+      g_assert_cmpfloat_with_epsilon (g_array_index (sizes, double, 2 * p), 792, 0.01);
+      g_assert_cmpfloat_with_epsilon (g_array_index (sizes, double, 2 * p + 1), 612, 0.01);
+    }
 }
 
 static void
@@ -402,6 +439,7 @@ main (int    argc,
   g_test_add ("/note-pdf/page-labels", Out, NULL, out_setup, test_labels, out_teardown);
   g_test_add ("/note-pdf/one-shell", Out, NULL, out_setup, test_one_shell, out_teardown);
   g_test_add ("/note-pdf/paper", Out, NULL, out_setup, test_paper, out_teardown);
+  g_test_add ("/note-pdf/figure-only", Out, NULL, out_setup, test_figure_only, out_teardown);
   g_test_add ("/note-pdf/summary-page", Out, NULL, out_setup, test_summary_page, out_teardown);
   g_test_add ("/note-pdf/last-page", Out, NULL, out_setup, test_last_page, out_teardown);
   g_test_add_func ("/note-pdf/same-rows", test_same_rows);
