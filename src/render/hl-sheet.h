@@ -47,8 +47,8 @@ void  hl_sheet_draw_page_numbered (cairo_t                *cr,
                                    const HlSheetNumbering *numbering);
 
 /* The project summary that opens a whole-project report: @contexts holds
- * one HlFigureContext * per shell (each with a solution); @first's
- * project, units and date are the report's. */
+ * one HlFigureContext * per shell (each with a solution); the first
+ * context's project, units, number format and date are the report's. */
 guint hl_sheet_summary_page_count (double      width,
                                    double      height,
                                    GPtrArray  *contexts);
