@@ -61,7 +61,15 @@ hl_note_results (GArray          *rows,
       if (rc->kind == HL_ROW_WORD && i < 4)
         continue;
       vc = value_text (ctx, rc);
-      src = source_text (rc);
+      /* the core words the undertolerance in mm: the note says it in its units */
+      if (g_strcmp0 (rc->key, "available_thickness") == 0)
+        {
+          g_autofree char *mill = hl_note_quantity (ctx, ctx->s->check.mill, HL_ROW_LENGTH, 4);
+
+          src = g_strdup_printf (_("mill undertolerance %s"), mill);
+        }
+      else
+        src = source_text (rc);
       if (nw != NULL)
         {
           g_autofree char *vn = value_text (ctx, &g_array_index (nw, HlResultRow, i));

@@ -161,6 +161,8 @@ test_us_inputs (void)
   guint i;
   static const char *const si_units[] = { "mm", "MPa", "GPa", "kPa", "bar", "°C", " m" };
   gboolean saw_modulus = FALSE;
+  /* the SI units a US sheet must not show, as whole words */
+  g_autoptr(GRegex) si = g_regex_new ("\\b(mm|MPa|GPa|kPa|bar)\\b", 0, 0, NULL);
 
   in.size_kind = HL_SIZE_INNER_DIAMETER;
   in.size = hl_quantity_make (48, "in");
@@ -171,6 +173,9 @@ test_us_inputs (void)
   in.material.yield_strength = hl_quantity_make (38, "ksi");
   in.material.allowable_stress = hl_quantity_make (20, "ksi");
   in.design_temperature = hl_quantity_make (100, "°F");
+  in.mill_tolerance = hl_quantity_make (0, "in");
+  in.external_pressure = hl_quantity_make (0, "psi");
+  in.test_ps = hl_quantity_make (0, "psi");
   rows = note_of (project, &in, HL_UNIT_SYSTEM_US, NULL);
   i = after_heading (rows, "Inputs");
   g_assert_cmpuint (i, <, rows->len);
@@ -196,6 +201,16 @@ test_us_inputs (void)
         }
     }
   g_assert_true (saw_modulus);
+  /* and nowhere else in the note: every number in US units, but for the
+   * inputs as the user typed them (all in US units here too) */
+  for (i = 0; i < rows->len; i++)
+    {
+      const HlNoteRow *row = hl_note_row (rows, i);
+
+      for (guint c = 0; c < row->n_cells; c++)
+        if (g_regex_match (si, row->cells[c], 0, NULL))
+          g_error ("US note row %u cell %u shows an SI unit: %s", i, c, row->cells[c]);
+    }
 }
 
 /* what the text report prints of each check is what the PDF lays out:
