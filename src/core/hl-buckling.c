@@ -111,6 +111,19 @@ hl_buckling_viii2_factor (double Fic,
   return 1.667;
 }
 
+/* 4.4.2: the design factor on the predicted stress, and the pressure
+ * the allowable hoop stress carries across a wall of radius @radius */
+static void
+allowable_from (HlVessel2External *out,
+                double             Sy,
+                double             t,
+                double             radius)
+{
+  out->FS = hl_buckling_viii2_factor (out->Fic, Sy);
+  out->Fha = out->Fic / out->FS;
+  out->Pa = 2 * out->Fha * t / radius;
+}
+
 void
 hl_buckling_viii2_cylinder (double             Do,
                             double             t,
@@ -139,9 +152,7 @@ hl_buckling_viii2_cylinder (double             Do,
     out->Fic = 0.7 * Sy * pow (ratio, 0.4);
   else
     out->Fic = Sy;
-  out->FS = hl_buckling_viii2_factor (out->Fic, Sy);
-  out->Fha = out->Fic / out->FS;
-  out->Pa = 2 * out->Fha * t / Do;
+  allowable_from (out, Sy, t, Do);
 }
 
 void
@@ -165,9 +176,7 @@ hl_buckling_viii2_sphere (double             Ro,
     out->Fic = 1.31 * Sy / (1.15 + Sy / out->Fhe);
   else
     out->Fic = Sy;
-  out->FS = hl_buckling_viii2_factor (out->Fic, Sy);
-  out->Fha = out->Fic / out->FS;
-  out->Pa = 2 * out->Fha * t / Ro;
+  allowable_from (out, Sy, t, Ro);
 }
 
 double
