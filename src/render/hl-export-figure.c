@@ -9,6 +9,7 @@
 
 #include "hl-export.h"
 #include "hl-atomic-file.h"
+#include "hl-export-pdf.h"
 #include "hl-sheet.h"
 
 #include <cairo-pdf.h>
@@ -86,14 +87,15 @@ png_scale (guint width,
   return MAX (1.0, MIN ((double) width / HL_EXPORT_DEFAULT_WIDTH, (double) height / HL_EXPORT_DEFAULT_HEIGHT));
 }
 
+/* the title names the shell when the file holds one (@ctx), else the project */
 static void
 set_pdf_metadata (cairo_surface_t       *surface,
-                  const HlFigureContext *ctx)
+                  const HlFigureContext *ctx,
+                  const HlProject       *pr)
 {
-  const HlProject *pr = ctx->project;
   g_autofree char *title = NULL;
 
-  if (ctx->solution != NULL)
+  if (ctx != NULL && ctx->solution != NULL)
     title = g_strdup_printf ("%s — %s", pr != NULL && pr->title != NULL ? pr->title : "Hoopline",
                              ctx->solution->inputs.name);
   else
@@ -179,7 +181,7 @@ write_to (const char            *temp,
       surface = cairo_pdf_surface_create (temp, width, height);
       if (!check (cairo_surface_status (surface), path, error))
         break;
-      set_pdf_metadata (surface, ctx);
+      set_pdf_metadata (surface, ctx, ctx->project);
       if (check (draw_pdf (surface, width, height, ctx, figure_only), path, error))
         {
           cairo_surface_finish (surface);
@@ -199,6 +201,50 @@ write_to (const char            *temp,
   return error == NULL || *error == NULL;
 }
 
+/* a temporary beside @path, created: cairo reports a folder that takes
+ * no files only as a write error; making it first gives the reason in
+ * the system's words */
+static char *
+make_temp (const char *path,
+           GError    **error)
+{
+  g_autofree char *temp = NULL;
+  int fd;
+
+  if (!hl_atomic_check_target (path, error))
+    return NULL;
+  temp = hl_atomic_temp_name (path);
+  fd = g_open (temp, O_WRONLY | O_CREAT | O_EXCL, 0644);
+  if (fd < 0)
+    {
+      int saved = errno;
+
+      g_set_error (error, G_FILE_ERROR, g_file_error_from_errno (saved), "cannot write “%s”: %s", path,
+                   g_strerror (saved));
+      return NULL;
+    }
+  close (fd);
+  return g_steal_pointer (&temp);
+}
+
+static gboolean
+finish (char       *temp,
+        const char *path,
+        gboolean    written,
+        GError     *local,
+        GError    **error)
+{
+  g_autofree char *owned = temp;
+
+  if (!written)
+    {
+      hl_atomic_abandon (owned);
+      g_propagate_error (error, local);
+      return FALSE;
+    }
+  return hl_atomic_commit (owned, path, error);
+}
+
 gboolean
 hl_export_figure_file (const char            *path,
                        HlExportFormat         format,
@@ -208,35 +254,148 @@ hl_export_figure_file (const char            *path,
                        gboolean               figure_only,
                        GError               **error)
 {
-  g_autofree char *temp = NULL;
-  g_autoptr(GError) local = NULL;
+  char *temp;
+  GError *local = NULL;
+  gboolean ok;
 
   g_return_val_if_fail (ctx != NULL, FALSE);
   g_return_val_if_fail (format == HL_EXPORT_SVG || format == HL_EXPORT_PDF || format == HL_EXPORT_PNG, FALSE);
 
-  if (!hl_atomic_check_target (path, error))
+  temp = make_temp (path, error);
+  if (temp == NULL)
     return FALSE;
-  temp = hl_atomic_temp_name (path);
-  /* cairo reports a folder that takes no files only as a write error;
-   * making the temporary first gives the reason in the system's words */
-  {
-    int fd = g_open (temp, O_WRONLY | O_CREAT | O_EXCL, 0644);
+  ok = write_to (temp, path, format, width, height, ctx, figure_only, &local);
+  return finish (temp, path, ok, local, error);
+}
 
-    if (fd < 0)
-      {
-        int saved = errno;
+/* ---- the whole report ---------------------------------------------------- */
 
-        g_set_error (error, G_FILE_ERROR, g_file_error_from_errno (saved), "cannot write “%s”: %s", path,
-                     g_strerror (saved));
-        return FALSE;
-      }
-    close (fd);
-  }
-  if (!write_to (temp, path, format, width, height, ctx, figure_only, &local))
+void
+hl_paper_size (HlPaper paper,
+               double *width,
+               double *height)
+{
+  *width = paper == HL_PAPER_LETTER ? HL_PAPER_LETTER_WIDTH : HL_PAPER_A4_WIDTH;
+  *height = paper == HL_PAPER_LETTER ? HL_PAPER_LETTER_HEIGHT : HL_PAPER_A4_HEIGHT;
+}
+
+static void
+figure_size (const HlPdfReport *report,
+             double            *width,
+             double            *height)
+{
+  double pw, ph;
+
+  if (report->figure_width > 0 && report->figure_height > 0)
     {
-      hl_atomic_abandon (temp);
-      g_propagate_error (error, g_steal_pointer (&local));
-      return FALSE;
+      *width = report->figure_width;
+      *height = report->figure_height;
+      return;
     }
-  return hl_atomic_commit (temp, path, error);
+  /* the same paper turned: the figure is wider than high */
+  hl_paper_size (report->paper, &pw, &ph);
+  *width = ph;
+  *height = pw;
+}
+
+static guint
+summary_pages (const HlPdfReport *report,
+               double             w,
+               double             h)
+{
+  return report->summary && !report->figure_only ? hl_sheet_summary_page_count (w, h, report->contexts) : 0;
+}
+
+static guint
+shell_pages (const HlPdfReport     *report,
+             const HlFigureContext *ctx,
+             double                 w,
+             double                 h)
+{
+  return 1 + (report->figure_only ? 0 : hl_sheet_page_count (w, h, ctx));
+}
+
+guint
+hl_pdf_report_pages (const HlPdfReport *report)
+{
+  double w, h;
+  guint n;
+
+  g_return_val_if_fail (report != NULL && report->contexts != NULL, 0);
+  hl_paper_size (report->paper, &w, &h);
+  n = summary_pages (report, w, h);
+  for (guint i = 0; i < report->contexts->len; i++)
+    n += shell_pages (report, g_ptr_array_index (report->contexts, i), w, h);
+  return n;
+}
+
+static cairo_status_t
+draw_report (cairo_surface_t   *surface,
+             const HlPdfReport *report)
+{
+  cairo_t *cr = cairo_create (surface);
+  cairo_status_t status;
+  double w, h, fw, fh;
+  HlSheetNumbering num = { 0, hl_pdf_report_pages (report) };
+  guint n;
+
+  hl_paper_size (report->paper, &w, &h);
+  figure_size (report, &fw, &fh);
+  n = summary_pages (report, w, h);
+  for (guint p = 0; p < n; p++)
+    {
+      cairo_pdf_surface_set_size (surface, w, h);
+      hl_sheet_summary_draw_page (cr, w, h, p, report->contexts, &num);
+      cairo_show_page (cr);
+    }
+  num.first += n;
+  for (guint i = 0; i < report->contexts->len; i++)
+    {
+      const HlFigureContext *ctx = g_ptr_array_index (report->contexts, i);
+
+      cairo_pdf_surface_set_size (surface, fw, fh);
+      hl_figure_draw (cr, fw, fh, ctx);
+      cairo_show_page (cr);
+      num.first++;
+      n = report->figure_only ? 0 : hl_sheet_page_count (w, h, ctx);
+      for (guint p = 0; p < n; p++)
+        {
+          cairo_pdf_surface_set_size (surface, w, h);
+          hl_sheet_draw_page_numbered (cr, w, h, p, ctx, &num);
+          cairo_show_page (cr);
+        }
+      num.first += n;
+    }
+  status = cairo_status (cr);
+  cairo_destroy (cr);
+  return status;
+}
+
+gboolean
+hl_export_pdf_report (const char        *path,
+                      const HlPdfReport *report,
+                      GError           **error)
+{
+  const HlFigureContext *first;
+  cairo_surface_t *surface;
+  GError *local = NULL;
+  char *temp;
+  gboolean ok;
+
+  g_return_val_if_fail (report != NULL && report->contexts != NULL && report->contexts->len > 0, FALSE);
+  first = g_ptr_array_index (report->contexts, 0);
+  temp = make_temp (path, error);
+  if (temp == NULL)
+    return FALSE;
+  surface = cairo_pdf_surface_create (temp, HL_PAPER_A4_WIDTH, HL_PAPER_A4_HEIGHT);
+  ok = check (cairo_surface_status (surface), path, &local);
+  if (ok)
+    {
+      set_pdf_metadata (surface, report->contexts->len == 1 ? first : NULL, first->project);
+      ok = check (draw_report (surface, report), path, &local);
+      cairo_surface_finish (surface);
+      ok = ok && check (cairo_surface_status (surface), path, &local);
+    }
+  cairo_surface_destroy (surface);
+  return finish (temp, path, ok, local, error);
 }

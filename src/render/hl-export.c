@@ -5,9 +5,11 @@
 #define G_LOG_DOMAIN "hl-export"
 
 #include "hl-export.h"
+#include "hl-export-pdf.h"
 #include "hl-export-private.h"
 #include "hl-atomic-file.h"
 #include "hl-figure.h"
+#include "hl-note.h"
 #include "hl-report.h"
 #include "hl-solution.h"
 
@@ -31,15 +33,17 @@ hl_export_format_for_path (const char *path)
   return HL_EXPORT_UNKNOWN;
 }
 
+/* the report of @shell after @out; its analysis joins @analyses */
 static gboolean
 append_report (GString             *out,
                HlProject           *project,
                const HlShellInputs *shell,
                HlUnitSystem         units,
+               GPtrArray           *analyses,
                GError             **error)
 {
   g_autoptr(HlSolution) fresh = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, error);
-  g_autoptr(HlSolution) corroded = NULL;
+  HlSolution *corroded = NULL;
   g_autofree char *text = NULL;
 
   if (fresh == NULL)
@@ -47,6 +51,7 @@ append_report (GString             *out,
   corroded = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, error);
   if (corroded == NULL)
     return FALSE;
+  g_ptr_array_add (analyses, corroded);
   text = hl_report_text (project, fresh, corroded, units);
   if (out->len > 0)
     g_string_append (out, "\n\f\n");
@@ -60,55 +65,95 @@ export_text (const HlExportRequest *req,
 {
   g_autoptr(GString) out = g_string_new (NULL);
   g_autoptr(GError) local = NULL;
+  g_autoptr(GPtrArray) analyses = g_ptr_array_new_with_free_func ((GDestroyNotify) hl_solution_free);
 
   /* without --shell the report covers every shell, one after another */
   for (GList *l = req->shells; l != NULL; l = l->next)
-    if (!append_report (out, req->project, l->data, req->units, &local))
+    if (!append_report (out, req->project, l->data, req->units, analyses, &local))
       {
         g_set_error (error, local->domain, local->code, "shell %s: %s",
                      ((HlShellInputs *) l->data)->id, local->message);
         return FALSE;
       }
+  /* ... after the project summary, as the PDF */
+  if (!req->shell_given)
+    {
+      g_autoptr(GArray) rows = hl_note_project_summary (req->project, analyses, req->units, FALSE, NULL);
+      g_autofree char *summary = hl_note_to_text (rows, HL_REPORT_TEXT_WIDTH);
+
+      g_string_prepend (out, "\n\f\n");
+      g_string_prepend (out, summary);
+    }
   if (!hl_atomic_write (req->path, out->str, out->len, error))
     return FALSE;
   return TRUE;
 }
 
-static gboolean
-export_figure (const HlExportRequest *req,
-               HlExportFormat         format,
-               GError               **error)
+/* one context per shell of @req, each with its analysis and new wall
+ * (solved once here for every page); NULL with @error set when a shell
+ * cannot be solved */
+static GPtrArray *
+solve_shells (const HlExportRequest *req,
+              GPtrArray             *keep,
+              GError               **error)
 {
-  const HlShellInputs *shell = req->shells->data;
-  g_autoptr(HlSolution) sol = NULL;
-  g_autoptr(HlSolution) new_wall = NULL;
-  g_autoptr(GError) local = NULL;
-  HlFigureContext ctx = { 0 };
-  guint width, height;
+  g_autoptr(GPtrArray) contexts = g_ptr_array_new_with_free_func (g_free);
 
-  if (!hl_export_parse_size (req->size, format, &width, &height, &local))
+  for (GList *l = req->shells; l != NULL; l = l->next)
+    {
+      const HlShellInputs *shell = l->data;
+      g_autoptr(GError) local = NULL;
+      HlSolution *sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
+      HlSolution *new_wall;
+      HlFigureContext *ctx;
+
+      if (sol == NULL)
+        {
+          g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
+          return NULL;
+        }
+      new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
+      g_ptr_array_add (keep, sol);
+      if (new_wall != NULL)
+        g_ptr_array_add (keep, new_wall);
+      ctx = g_new0 (HlFigureContext, 1);
+      hl_figure_context_init (ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
+      ctx->units = req->units;
+      ctx->panels = req->panels;
+      ctx->locale_numbers = req->locale_numbers;
+      g_ptr_array_add (contexts, ctx);
+    }
+  return g_steal_pointer (&contexts);
+}
+
+/* the design note: the project summary (without --shell), then each
+ * shell's figure and calculation sheet */
+static gboolean
+export_pdf (const HlExportRequest *req,
+            GError               **error)
+{
+  g_autoptr(GPtrArray) keep = g_ptr_array_new_with_free_func ((GDestroyNotify) hl_solution_free);
+  g_autoptr(GPtrArray) contexts = NULL;
+  g_autoptr(GError) local = NULL;
+  guint width = 0, height = 0;
+
+  if (!hl_export_parse_size (req->size, HL_EXPORT_PDF, &width, &height, &local))
     {
       g_set_error_literal (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST, local->message);
       return FALSE;
     }
   if (!hl_atomic_check_target (req->path, error))
     return FALSE;
-  /* without --shell the figure is of the first shell */
-  sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
-  if (sol == NULL)
-    {
-      g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
-      return FALSE;
-    }
-  /* solved once here for every page of the sheet */
-  new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
-  hl_figure_context_init (&ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
-  ctx.units = req->units;
-  ctx.panels = req->panels;
-  ctx.locale_numbers = req->locale_numbers;
-  if (!hl_export_figure_file (req->path, format, width, height, &ctx, req->figure_only, error))
+  contexts = solve_shells (req, keep, error);
+  if (contexts == NULL)
     return FALSE;
-  return TRUE;
+  {
+    /* without --size the figure takes the report's paper, landscape */
+    HlPdfReport report = { contexts, !req->shell_given, req->figure_only, req->paper,
+                           req->size != NULL ? width : 0, req->size != NULL ? height : 0 };
+
+    return hl_export_pdf_report (req->path, &report, error);
+  }
 }
 
 gboolean
@@ -131,7 +176,7 @@ hl_export_run (const HlExportRequest *req,
     case HL_EXPORT_PNG:
       return hl_export_figure_shells (req, format, error);
     case HL_EXPORT_PDF:
-      return export_figure (req, format, error);
+      return export_pdf (req, error);
     case HL_EXPORT_UNKNOWN:
     default:
       g_set_error (error, HL_EXPORT_ERROR, HL_EXPORT_ERROR_BAD_REQUEST,

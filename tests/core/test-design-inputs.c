@@ -213,28 +213,32 @@ test_text_report (void)
   g_autoptr(HlSolution) cor = hlt_solve (&in, 11);
   g_autoptr(HlSolution) neu = hl_solve (&in, 11, FALSE, NULL);
   g_autoptr(HlProject) project = hl_project_new ();
-  g_autofree char *text = NULL;
+  g_autofree char *raw = NULL, *text = NULL, *line = NULL;
+  const char *design_temperature;
 
   hl_project_add_shell (project, &in);
-  text = hl_report_text (project, neu, cor, HL_UNIT_SYSTEM_SI);
-  g_assert_nonnull (strstr (text, "\nDesign check (corroded wall)\n"));
-  g_assert_nonnull (strstr (text, "  Verdict: FAIL\n"));
-  g_assert_nonnull (strstr (text, "Utilisation: 104.9 %"));
-  g_assert_nonnull (strstr (text, "governing: UG-27(c)(1)"));
+  raw = hl_report_text (project, neu, cor, HL_UNIT_SYSTEM_SI);
+  /* the report wraps at 100 columns: phrases are looked for unwrapped */
+  text = hlt_unwrap (raw);
+  g_assert_nonnull (strstr (raw, "\nDesign check (corroded wall)\n"));
+  g_assert_nonnull (strstr (text, "FAIL — utilisation 104.9 % by UG-27(c)(1)"));
   g_assert_nonnull (strstr (text, "ASME VIII-1 UG-27"));
   g_assert_nonnull (strstr (text, "EN 13445-3 7.4"));
   g_assert_nonnull (strstr (text, "Lamé elastic"));
-  g_assert_nonnull (strstr (text, "Warnings\n--------\n  - the design check fails"));
-  g_assert_null (strstr (text, "Warnings\n--------\n  none"));
+  g_assert_nonnull (strstr (raw, "Warnings\n--------\n  - the design check fails"));
+  g_assert_null (strstr (raw, "Warnings\n--------\n  None"));
   g_assert_null (strstr (text, "ADEQUATE"));
-  g_assert_nonnull (strstr (text, "new wall, with no corrosion allowance"));
+  g_assert_null (strstr (text, "adequate for this wall."));
   g_assert_nonnull (strstr (text, "Required thickness, ASME VIII-1 (incl. corrosion allowance)"));
   g_assert_nonnull (strstr (text, "Pressure in the code formulas: internal design pressure alone"));
   /* the default design temperature, 20 °C, as entered and in °C (not
    * as a stress) */
-  g_assert_nonnull (strstr (text, "Design temperature"));
-  g_assert_nonnull (strstr (text, "= " "            20 \xc2\xb0" "C\n"));
-  g_assert_nonnull (strstr (text, "Material specification             (not given)\n"));
+  design_temperature = strstr (raw, "  Design temperature ");
+  g_assert_nonnull (design_temperature);
+  line = g_strndup (design_temperature, strcspn (design_temperature, "\n"));
+  g_assert_nonnull (strstr (line, "20 \xc2\xb0" "C"));
+  g_assert_null (strstr (line, "MPa"));
+  g_assert_true (g_regex_match_simple ("\n  Material specification +\\(not given\\)", raw, 0, 0));
 }
 
 int

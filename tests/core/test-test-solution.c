@@ -204,13 +204,16 @@ static void
 test_report_words (void)
 {
   HlShellInputs in = section_e_shell ();
+  g_autofree char *raw = NULL;
   g_autofree char *text = NULL;
   g_autofree char *pneumatic = NULL;
   g_autofree char *summary = NULL;
 
   g_strlcpy (in.code_edition, "2021", sizeof in.code_edition);
-  text = report_of (&in);
-  g_assert_nonnull (strstr (text, "\nTest pressure (corroded wall)\n"));
+  raw = report_of (&in);
+  g_assert_nonnull (strstr (raw, "\nTest pressure (corroded wall)\n"));
+  /* the report wraps at 100 columns: phrases are looked for unwrapped */
+  text = hlt_unwrap (raw);
   /* each rule's formula with the edition and the LSR */
   g_assert_nonnull (strstr (text, "UG-99(b): PT = 1.3 × MAWP × LSR (2021)"));
   g_assert_nonnull (strstr (text, "UG-100: PT = 1.1 × MAWP × LSR (2021)"));
@@ -227,7 +230,9 @@ test_report_words (void)
 
   /* the pneumatic rule: the hazard, in the block and in the warnings */
   in.test_rule = HL_TEST_UG100_PNEUMATIC;
-  pneumatic = report_of (&in);
+  g_free (raw);
+  raw = report_of (&in);
+  pneumatic = hlt_unwrap (raw);
   g_assert_nonnull (strstr (pneumatic, "HAZARD: a pneumatic test"));
   g_assert_nonnull (strstr (pneumatic, "Chosen rule: ASME VIII-1 UG-100, pneumatic"));
   {
@@ -247,6 +252,7 @@ static void
 test_failing_stress (void)
 {
   HlShellInputs in = section_e_shell ();
+  g_autofree char *raw = NULL;
   g_autofree char *text = NULL;
   g_autofree char *summary = NULL;
   const char *warnings;
@@ -262,14 +268,17 @@ test_failing_stress (void)
     g_assert_nonnull (strstr (summary, "\ncheck_test = fail\n"));
     g_assert_nonnull (strstr (summary, "\nwarning = at the test pressure the general membrane stress exceeds 0.90"));
   }
-  text = report_of (&in);
+  raw = report_of (&in);
+  text = hlt_unwrap (raw);
   g_assert_nonnull (strstr (text, "Result: FAIL"));
   g_assert_nonnull (strstr (text, "of the limit: FAIL"));
   /* 327.3 MPa is above the yield strength itself, 260 MPa */
   g_assert_nonnull (strstr (text, "DANGER: at the test pressure the general membrane stress is above yield"));
-  warnings = strstr (text, "\nWarnings\n");
+  warnings = strstr (raw, "\nWarnings\n");
   g_assert_nonnull (warnings);
-  g_assert_null (strstr (warnings, "  none\n"));
+  g_assert_null (strstr (warnings, "None for this shell."));
+  warnings = strstr (text, " Warnings ");
+  g_assert_nonnull (warnings);
   g_assert_nonnull (strstr (warnings, "at the test pressure the general membrane stress exceeds 0.90 × yield"));
 }
 

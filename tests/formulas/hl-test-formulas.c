@@ -223,3 +223,23 @@ hlt_check_na (const char *file,
                       file, line, what, got.value, got.reason != NULL ? got.reason : "none");
   return FALSE;
 }
+
+char *
+hlt_unwrap (const char *text)
+{
+  GString *out = g_string_new (NULL);
+
+  for (const char *p = text; *p != '\0'; p++)
+    {
+      if (*p != '\n')
+        {
+          g_string_append_c (out, *p);
+          continue;
+        }
+      /* the break, the indent and a table's or a box's margin */
+      while (p[1] == ' ' || p[1] == '|')
+        p++;
+      g_string_append_c (out, ' ');
+    }
+  return g_string_free (out, FALSE);
+}

@@ -98,4 +98,8 @@ gboolean      hlt_check_na       (const char   *file,
 #define hlt_assert_na(got) \
   hlt_check_na (__FILE__, __LINE__, #got, (got))
 
+/* @text with each line break and the indent after it made one space:
+ * the text report wraps at 100 columns, a phrase may span two lines */
+char         *hlt_unwrap         (const char   *text);
+
 G_END_DECLS
