@@ -50,7 +50,8 @@ static char *
 num (const Steps *c,
      double       value)
 {
-  char *text = hl_format_readable (value, 4, c->locale);
+  g_autofree char *plain = hl_format_readable (value, 4, c->locale);
+  char *text = hl_format_grouped (plain);
 
   /* a true minus, as in the formulas */
   if (text[0] == '-')

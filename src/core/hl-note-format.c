@@ -18,7 +18,8 @@ hl_note_sig (double   value,
              int      digits,
              gboolean locale)
 {
-  char *text = hl_format_readable (value, digits, locale);
+  g_autofree char *plain = hl_format_readable (value, digits, locale);
+  char *text = hl_format_grouped (plain);
   char *out;
 
   if (text[0] != '-')

@@ -234,3 +234,34 @@ hl_format_shortest (double   value,
     g_strdelimit (text, ".", ',');
   return text;
 }
+
+char *
+hl_format_grouped (const char *text)
+{
+  GString *out = g_string_new (NULL);
+  const char *p = text, *digits, *end;
+
+  /* the sign, then the run of digits before the decimal mark */
+  while (*p != '\0' && !g_ascii_isdigit (*p))
+    p++;
+  digits = p;
+  while (g_ascii_isdigit (*p))
+    p++;
+  end = p;
+  g_string_append_len (out, text, digits - text);
+  /* no exponent form is grouped, nor a four-digit number (ISO 80000-1
+   * leaves those as they are) */
+  if (end - digits < 5 || strpbrk (end, "eE") != NULL)
+    {
+      g_string_append (out, digits);
+      return g_string_free (out, FALSE);
+    }
+  for (const char *d = digits; d < end; d++)
+    {
+      g_string_append_c (out, *d);
+      if (d + 1 < end && (end - d - 1) % 3 == 0)
+        g_string_append (out, HL_GROUP_SEPARATOR);
+    }
+  g_string_append (out, end);
+  return g_string_free (out, FALSE);
+}

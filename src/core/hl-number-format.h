@@ -49,4 +49,15 @@ char         *hl_format_readable        (double   value,
 char         *hl_format_shortest        (double   value,
                                          gboolean decimal_comma);
 
+/* U+202F NARROW NO-BREAK SPACE: ISO 80000-1 groups digits in threes
+ * with a small space, which reads the same under a decimal point and a
+ * decimal comma (a comma or a point as separator would not). */
+#define HL_GROUP_SEPARATOR "\xe2\x80\xaf"
+
+/* @text (a number as the formatters above print it) with the digits
+ * before the decimal mark grouped in threes for a reader: "29007.5" ->
+ * "29 007.5"; numbers of four digits or fewer and exponent forms are
+ * kept.  Never for files or fields, which read numbers back. */
+char         *hl_format_grouped         (const char *text);
+
 G_END_DECLS

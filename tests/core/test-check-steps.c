@@ -17,6 +17,7 @@
 #include "hl-test-formulas.h"
 #include "hl-check-steps.h"
 #include "hl-project-file.h"
+#include "hl-number-format.h"
 
 #include <locale.h>
 #include <math.h>
@@ -61,7 +62,12 @@ static GArray *
 numbers_of (const char *text)
 {
   GArray *out = g_array_new (FALSE, FALSE, sizeof (double));
-  const char *p = text;
+  g_autoptr(GString) plain = g_string_new (text);
+  const char *p;
+
+  /* digits grouped for a reader (ISO 80000-1) read as one number */
+  g_string_replace (plain, HL_GROUP_SEPARATOR, "", 0);
+  p = plain->str;
 
   while (*p != '\0')
     {

@@ -417,6 +417,30 @@ test_format_round_trip (void)
   g_test_message ("%u values round-tripped", n);
 }
 
+/* ISO 80000-1 7.3.1: digits of five or more grouped in threes with a
+ * small space, on either side of nothing but the integer part here;
+ * four digits and exponent forms stay as they are */
+static void
+test_format_grouped (void)
+{
+  static const struct { const char *in, *out; } cases[] = {
+    { "29007.5", "29" HL_GROUP_SEPARATOR "007.5" },
+    { "-1234567", "-1" HL_GROUP_SEPARATOR "234" HL_GROUP_SEPARATOR "567" },
+    { "21320,5", "21" HL_GROUP_SEPARATOR "320,5" },
+    { "9999", "9999" },
+    { "0.000125", "0.000125" },
+    { "12345e+20", "12345e+20" },
+    { "n/a", "n/a" },
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      g_autofree char *got = hl_format_grouped (cases[i].in);
+
+      g_assert_cmpstr (got, ==, cases[i].out);
+    }
+}
+
 int
 main (int    argc,
       char **argv)
@@ -430,5 +454,6 @@ main (int    argc,
   g_test_add_func ("/units-strict/messages/short", test_messages_are_short);
   g_test_add_func ("/units-strict/format/plain", test_format_plain);
   g_test_add_func ("/units-strict/format/round-trip", test_format_round_trip);
+  g_test_add_func ("/units-strict/format/grouped", test_format_grouped);
   return g_test_run ();
 }

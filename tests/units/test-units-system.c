@@ -17,6 +17,7 @@
 
 #include "hl-material.h"
 #include "hl-note.h"
+#include "hl-number-format.h"
 #include "hl-report.h"
 #include "hl-shell.h"
 #include "hl-units.h"
@@ -139,6 +140,8 @@ test_report_input_column (void)
       /* the note keeps a number and its unit together with a no-break space */
       value = g_string_new (row->cells[2]);
       g_string_replace (value, "\xc2\xa0", " ", 0);
+      /* and groups digits with a narrow one (ISO 80000-1) */
+      g_string_replace (value, HL_GROUP_SEPARATOR, "", 0);
       right = value->str;
       converted++;
       if (!(g_str_has_suffix (right, " in") || g_str_has_suffix (right, " psi") || g_str_has_suffix (right, " ksi")
