@@ -17,6 +17,16 @@ hl_report_text (const HlProject  *project,
                 const HlSolution *corroded,
                 HlUnitSystem      system)
 {
+  return hl_report_text_in (project, new_wall, corroded, system, FALSE);
+}
+
+char *
+hl_report_text_in (const HlProject  *project,
+                   const HlSolution *new_wall,
+                   const HlSolution *corroded,
+                   HlUnitSystem      system,
+                   gboolean          locale_numbers)
+{
   g_autoptr(GArray) rows = NULL;
   double c;
 
@@ -25,6 +35,6 @@ hl_report_text (const HlProject  *project,
    * makes them differ, as on the sheet */
   c = hl_quantity_si (corroded->inputs.corrosion_allowance, HL_KIND_LENGTH);
   rows = hl_note_content (project, corroded, corroded->corroded && c > 0 && new_wall != corroded ? new_wall : NULL,
-                          system, FALSE, NULL);
+                          system, locale_numbers, NULL);
   return hl_note_to_text (rows, HL_REPORT_TEXT_WIDTH);
 }

@@ -55,4 +55,13 @@ char *hl_report_text          (const HlProject  *project,
                                const HlSolution *corroded,
                                HlUnitSystem      system);
 
+/* The same with the user's decimal separator when @locale_numbers (an
+ * export from a decimal-comma window); the words follow the user's
+ * language either way. */
+char *hl_report_text_in       (const HlProject  *project,
+                               const HlSolution *new_wall,
+                               const HlSolution *corroded,
+                               HlUnitSystem      system,
+                               gboolean          locale_numbers);
+
 G_END_DECLS

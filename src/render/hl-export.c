@@ -39,6 +39,7 @@ append_report (GString             *out,
                HlProject           *project,
                const HlShellInputs *shell,
                HlUnitSystem         units,
+               gboolean             locale_numbers,
                GPtrArray           *analyses,
                GError             **error)
 {
@@ -52,7 +53,7 @@ append_report (GString             *out,
   if (corroded == NULL)
     return FALSE;
   g_ptr_array_add (analyses, corroded);
-  text = hl_report_text (project, fresh, corroded, units);
+  text = hl_report_text_in (project, fresh, corroded, units, locale_numbers);
   if (out->len > 0)
     g_string_append (out, "\n\f\n");
   g_string_append (out, text);
@@ -69,7 +70,7 @@ export_text (const HlExportRequest *req,
 
   /* without --shell the report covers every shell, one after another */
   for (GList *l = req->shells; l != NULL; l = l->next)
-    if (!append_report (out, req->project, l->data, req->units, analyses, &local))
+    if (!append_report (out, req->project, l->data, req->units, req->locale_numbers, analyses, &local))
       {
         g_set_error (error, local->domain, local->code, "shell %s: %s",
                      ((HlShellInputs *) l->data)->id, local->message);
@@ -78,7 +79,7 @@ export_text (const HlExportRequest *req,
   /* ... after the project summary, as the PDF */
   if (!req->shell_given)
     {
-      g_autoptr(GArray) rows = hl_note_project_summary (req->project, analyses, req->units, FALSE, NULL);
+      g_autoptr(GArray) rows = hl_note_project_summary (req->project, analyses, req->units, req->locale_numbers, NULL);
       g_autofree char *summary = hl_note_to_text (rows, HL_REPORT_TEXT_WIDTH);
 
       g_string_prepend (out, "\n\f\n");

@@ -383,6 +383,33 @@ test_figure_german_commas (Temp         *t,
   g_assert_null (strstr (out_c, "66,67"));
 }
 
+/* DIN 1333: the text report written in a German locale has decimal
+ * commas and German words, as the sheet; the C locale's has points */
+static void
+test_text_german_commas (Temp         *t,
+                         gconstpointer data)
+{
+  g_autofree char *de = g_build_filename (t->dir, "de.txt", NULL);
+  g_autofree char *c = g_build_filename (t->dir, "c.txt", NULL);
+  g_autofree char *e_de = g_strdup_printf ("--export=%s", de);
+  g_autofree char *e_c = g_strdup_printf ("--export=%s", c);
+  g_autofree char *text_de = NULL, *text_c = NULL;
+
+  (void) data;
+  if (!have_german ())
+    return;
+  expect_ok ("de_DE.UTF-8", (const char *const[]) { e_de, "--shell=press-barrel", t->demo, NULL });
+  expect_ok ("C", (const char *const[]) { e_c, "--shell=press-barrel", t->demo, NULL });
+  text_de = read_text (de);
+  text_c = read_text (c);
+  /* Lamé bore hoop stress 5p/3 = 66.67 MPa at 400 bar, k = 2 (Timoshenko) */
+  g_assert_nonnull (strstr (text_de, "66,67"));
+  g_assert_null (strstr (text_de, "66.67"));
+  g_assert_nonnull (strstr (text_c, "66.67"));
+  g_assert_nonnull (strstr (text_de, "Berechnungsblatt"));
+  g_assert_nonnull (strstr (text_c, "Calculation sheet"));
+}
+
 int
 main (int    argc,
       char **argv)
@@ -398,5 +425,6 @@ main (int    argc,
   g_test_add_func ("/cli/options/help", test_help);
   g_test_add ("/cli/locale/csv-points", Temp, NULL, temp_setup, test_csv_german_points, temp_teardown);
   g_test_add ("/cli/locale/figure-commas", Temp, NULL, temp_setup, test_figure_german_commas, temp_teardown);
+  g_test_add ("/cli/locale/text-commas", Temp, NULL, temp_setup, test_text_german_commas, temp_teardown);
   return g_test_run ();
 }
