@@ -39,6 +39,10 @@ typedef enum
  * fills f->geom->section and draws the ring, its dimensions and the box. */
 gboolean hl_section_needs_detail (HlFigure     *f,
                                   const HlRect *area);
+/* the ring, its dimensions and (without a detail) its key have room */
+gboolean hl_section_fits         (HlFigure     *f,
+                                  const HlRect *area,
+                                  gboolean      with_detail);
 void     hl_section_draw         (HlFigure     *f,
                                   const HlRect *area,
                                   const HlRect *detail,

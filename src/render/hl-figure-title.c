@@ -181,7 +181,7 @@ typedef struct
   char       *value;
 } Cell;
 
-#define N_CELLS 8
+#define N_CELLS 9
 
 static guint
 title_cells (HlFigure *f,
@@ -202,6 +202,11 @@ title_cells (HlFigure *f,
                                                               : g_date_time_format (now, "%Y-%m-%d") };
   cells[6] = (Cell) { _("Design basis"), g_strdup ("—") };
   cells[7] = (Cell) { _("Design load"), g_strdup ("—") };
+  /* what the allowable belongs to: the specification when given */
+  cells[8] = (Cell) { _("Material"), sh == NULL ? g_strdup ("—")
+                                     : sh->material_spec[0] != '\0' ? g_strdup_printf ("%s, %s", sh->material.name,
+                                                                                     sh->material_spec)
+                                                                   : g_strdup (sh->material.name) };
   if (f->sol != NULL)
     {
       g_autofree char *pi = hl_stress_text (f, f->sol->pi, 4);
@@ -235,7 +240,7 @@ static guint
 title_columns (HlFigure *f,
                double    width)
 {
-  static const guint column3[N_CELLS] = { 0, 1, 2, 0, 1, 2, 0, 1 };
+  static const guint column3[N_CELLS] = { 0, 1, 2, 0, 1, 2, 0, 1, 2 };
   Cell cells[N_CELLS];
   guint n = title_cells (f, cells);
   gboolean fit = TRUE;
@@ -292,8 +297,8 @@ hl_title_block_draw (HlFigure     *f,
   double chh = cell_height (f), pad = 0.5 * f->text->base;
   g_autofree char *caution = caution_text ();
   /* reading order in each layout: names first, then who and when */
-  static const guint order3[N_CELLS] = { 0, 1, 2, 3, 4, 5, 6, 7 };
-  static const guint order2[N_CELLS] = { 0, 1, 3, 2, 6, 7, 4, 5 };
+  static const guint order3[N_CELLS] = { 0, 1, 2, 3, 4, 5, 6, 7, 8 };
+  static const guint order2[N_CELLS] = { 0, 1, 3, 2, 6, 7, 8, 4, 5 };
 
   cairo_save (cr);
   hl_palette_set_source (cr, f->pal->ink);

@@ -116,6 +116,47 @@ hl_text_size (HlText     *t,
   return t->base * roles[role].scale;
 }
 
+static gboolean
+overflows (PangoLayout *l,
+           double       wrap)
+{
+  for (GSList *it = pango_layout_get_lines_readonly (l); it != NULL; it = it->next)
+    {
+      PangoRectangle logical;
+
+      pango_layout_line_get_extents (it->data, NULL, &logical);
+      if ((double) logical.width / PANGO_SCALE > wrap + 0.01)
+        return TRUE;
+    }
+  return FALSE;
+}
+
+/* A word wider than the line sticks out of it with PANGO_WRAP_WORD: the
+ * string is set a step smaller until its longest word fits (a long
+ * German compound in a narrow key); past the last step one line cut
+ * with an ellipsis, never a word broken inside. */
+static void
+fit_words (PangoLayout                *l,
+           const PangoFontDescription *font,
+           double                      wrap)
+{
+  g_autoptr(PangoFontDescription) smaller = NULL;
+  double size = (double) pango_font_description_get_size (font);
+
+  if (!overflows (l, wrap))
+    return;
+  smaller = pango_font_description_copy (font);
+  for (int step = 1; step <= 5; step++)
+    {
+      pango_font_description_set_absolute_size (smaller, size * pow (0.9, step));
+      pango_layout_set_font_description (l, smaller);
+      if (!overflows (l, wrap))
+        return;
+    }
+  pango_layout_set_font_description (l, font);
+  pango_layout_set_ellipsize (l, PANGO_ELLIPSIZE_END);
+}
+
 /* the laid-out string: from the cache, or made and kept */
 static PangoLayout *
 prepare (HlText     *t,
@@ -147,10 +188,15 @@ prepare (HlText     *t,
   else if (wrap > 0)
     {
       pango_layout_set_width (l, (int) (wrap * PANGO_SCALE));
-      pango_layout_set_wrap (l, PANGO_WRAP_WORD_CHAR);
+      /* words only: a break between letters needs a hyphen at a point
+       * the language allows, which Pango cannot know (it would write
+       * "Korrosionszuschl-ag") */
+      pango_layout_set_wrap (l, PANGO_WRAP_WORD);
     }
   pango_layout_set_alignment (l, align);
   pango_layout_set_text (l, str, -1);
+  if (ellipsize_width <= 0 && wrap > 0)
+    fit_words (l, t->fonts[role], wrap);
   g_hash_table_insert (c->layouts, g_steal_pointer (&key), l);
   return l;
 }
