@@ -58,6 +58,15 @@ typedef struct
   double   design_x, design_y; /* where this design's point is drawn */
 } HlChartGeometry;
 
+/* the colour key of the shaded wall */
+typedef struct
+{
+  gboolean drawn;
+  guint    n_ticks;            /* values written on the key */
+  gboolean uniform;            /* one colour, one value */
+  char     range[128];         /* stated when the stress varies little, else "" */
+} HlLegendGeometry;
+
 typedef struct
 {
   HlFigureLayout    layout;
@@ -65,6 +74,7 @@ typedef struct
   HlSectionGeometry section;
   HlPlotGeometry    plot;
   HlChartGeometry   chart;
+  HlLegendGeometry  legend;
   GArray           *text_boxes; /* HlRect of every string drawn */
 } HlFigureGeometry;
 

@@ -69,6 +69,12 @@ void     hl_wall_fill            (HlFigure     *f,
 double   hl_wall_scale_position  (const HlSolution *sol,
                                   double            hoop);
 gboolean hl_wall_scale_reversed  (const HlSolution *sol);
+/* the lowest and highest Lamé hoop stress in the wall, SI */
+void     hl_wall_hoop_range      (const HlSolution *sol,
+                                  double           *lo,
+                                  double           *hi);
+/* the same stress all through the wall: one colour, one value */
+gboolean hl_wall_scale_uniform   (const HlSolution *sol);
 /* colour legend for the hoop stress, vertical (at most @room high) or
  * horizontal */
 void     hl_stress_legend_size   (HlFigure     *f,
