@@ -302,7 +302,10 @@ hl_stress_legend_draw (HlFigure     *f,
       bar.height = l.bar_len;
       draw_bar (f, &l, &bar, TRUE);
       if (l.band)
-        hatch_swatch (f, area->x, bar.y + bar.height + l.end_gap, 5.5 * f->text->base);
+        /* the swatch's label is centred on it: its top, not the
+         * swatch's, keeps clear of the bar's last label */
+        hatch_swatch (f, area->x, bar.y + bar.height + l.end_gap + (l.hatch_h - 0.9 * f->text->base) / 2,
+                      5.5 * f->text->base);
     }
   else
     {
