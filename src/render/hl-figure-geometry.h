@@ -39,6 +39,9 @@ typedef struct
   double   detail_angle;       /* where on the ring the detail comes from */
   HlRect   detail_box;         /* the small box on the ring */
   HlRect   detail_frame;       /* the magnified view */
+  gboolean has_peak_leader;    /* the detail's arrow to the peak hoop stress */
+  HlRect   peak_leader;        /* its box, head and shaft */
+  HlRect   peak_label;         /* its text */
 } HlSectionGeometry;
 
 typedef struct

@@ -142,6 +142,7 @@ double   hl_panel_heading_height (HlFigure     *f,
                                   double        width,
                                   const char   *title,
                                   const char   *subtitle);
+double   hl_arrow_head_length    (HlFigure     *f);
 void     hl_arrow_head           (HlFigure     *f,
                                   double        x,
                                   double        y,
