@@ -31,6 +31,14 @@ title (HlFigure *f)
   return f->sol->inputs.form == HL_FORM_SPHERE ? _("σθ Lamé (tangential)") : _("σθ Lamé (hoop)");
 }
 
+/* the swatch's label in a narrow column, but never narrower than its
+ * longest word ("Korrosionszuschlag") */
+static double
+swatch_wrap (HlFigure *f)
+{
+  return MAX (5.5 * f->text->base, hl_text_longest_word (f->text, HL_FONT_TINY, _("corrosion allowance")) + 0.1);
+}
+
 /* "77.39 – 78.4, range 1.4 %": a wall whose hoop stress varies by a few
  * per cent still runs the whole colour scale, so the key says how
  * little that is; NULL when the stress varies by a tenth or more */
@@ -126,7 +134,7 @@ legend_plan (HlFigure *f,
   l->hatch_w = l->hatch_h = 0;
   if (l->band)
     {
-      hl_text_measure (f->text, HL_FONT_TINY, _("corrosion allowance"), vertical ? 5.5 * f->text->base : 0, &w, &h);
+      hl_text_measure (f->text, HL_FONT_TINY, _("corrosion allowance"), vertical ? swatch_wrap (f) : 0, &w, &h);
       l->hatch_w = 1.6 * f->text->base + w;
       l->hatch_h = MAX (h, 0.9 * f->text->base);
     }
@@ -305,7 +313,7 @@ hl_stress_legend_draw (HlFigure     *f,
         /* the swatch's label is centred on it: its top, not the
          * swatch's, keeps clear of the bar's last label */
         hatch_swatch (f, area->x, bar.y + bar.height + l.end_gap + (l.hatch_h - 0.9 * f->text->base) / 2,
-                      5.5 * f->text->base);
+                      swatch_wrap (f));
     }
   else
     {

@@ -218,6 +218,23 @@ hl_text_measure (HlText     *t,
     *height = (double) logical.height / PANGO_SCALE;
 }
 
+double
+hl_text_longest_word (HlText     *t,
+                      HlFontRole  role,
+                      const char *str)
+{
+  g_auto(GStrv) words = g_strsplit_set (str, " \n", -1);
+  double widest = 0, w;
+
+  for (guint i = 0; words[i] != NULL; i++)
+    if (words[i][0] != '\0')
+      {
+        hl_text_measure (t, role, words[i], 0, &w, NULL);
+        widest = MAX (widest, w);
+      }
+  return widest;
+}
+
 static HlRect
 show (HlText      *t,
       PangoLayout *layout,
