@@ -79,6 +79,10 @@ typedef struct
   HlChartGeometry   chart;
   HlLegendGeometry  legend;
   GArray           *text_boxes; /* HlRect of every string drawn */
+  guint             dropped;    /* HlFigurePanels asked for, left out for want of
+                                 * room (the figure says which) */
+  HlRect            title_block; /* zero when not drawn (on screen) */
+  GPtrArray        *wrapped;    /* PangoLayout of every string drawn wrapped */
 } HlFigureGeometry;
 
 /* hl_figure_draw() that also fills @geometry (may be NULL). */

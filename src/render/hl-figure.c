@@ -172,6 +172,18 @@ split_body (HlFigure *f,
     l->chart = rest;
 }
 
+/* the detail is only missed where the section would have needed one,
+ * and it goes with the section: neither is worth a word otherwise */
+static void
+settle_dropped (HlFigure *f,
+                Layout   *l)
+{
+  if (l->dropped & HL_PANEL_SECTION)
+    l->dropped &= ~HL_PANEL_DETAIL;
+  else if ((l->dropped & HL_PANEL_DETAIL) && !needs_detail (f, &l->section))
+    l->dropped &= ~HL_PANEL_DETAIL;
+}
+
 static gboolean
 plan (HlFigure *f,
       double    width,
@@ -213,6 +225,7 @@ plan (HlFigure *f,
       return TRUE;
     }
   split_body (f, l);
+  settle_dropped (f, l);
   return (!(panels & HL_PANEL_SECTION) || hl_section_fits (f, &l->section, l->detail_shown))
          && (!(panels & HL_PANEL_PLOT) || hl_plot_fits (f, &l->plot))
          && (!(panels & HL_PANEL_CHART) || hl_chart_fits (f, &l->chart))
@@ -236,6 +249,7 @@ plan_small (HlFigure *f,
   l->layout = HL_FIGURE_LAYOUT_SMALL;
   l->section = l->body;
   l->detail_shown = FALSE;
+  settle_dropped (f, l);
   if (l->body.height >= 6 * f->text->base && l->body.width >= 8 * f->text->base)
     return TRUE;
   l->title_shown = FALSE;
@@ -324,7 +338,10 @@ hl_figure_draw_full (cairo_t               *cr,
   hl_figure_geometry_clear (f.geom);
   f.text = hl_text_new (cr, start_font (width, height));
   if (geometry != NULL)
-    f.text->boxes = g_array_new (FALSE, FALSE, sizeof (HlRect));
+    {
+      f.text->boxes = g_array_new (FALSE, FALSE, sizeof (HlRect));
+      f.text->wrapped = g_ptr_array_new_with_free_func (g_object_unref);
+    }
 
   want = (ctx->panels & HL_PANELS_ALL) != 0 ? ctx->panels & HL_PANELS_ALL : HL_PANELS_ALL;
   /* the detail magnifies a piece of the section: it comes with it */
@@ -347,6 +364,9 @@ hl_figure_draw_full (cairo_t               *cr,
     }
   f.geom->layout = l.layout;
   f.geom->font_size = f.text->base;
+  f.geom->dropped = body ? l.dropped : 0;
+  if (l.title_shown)
+    f.geom->title_block = l.title;
 
   cairo_save (cr);
   /* a quarter of a device unit keeps curves smooth and flattens the big
@@ -391,7 +411,9 @@ hl_figure_draw_full (cairo_t               *cr,
   if (geometry != NULL)
     {
       geometry->text_boxes = f.text->boxes;
+      geometry->wrapped = f.text->wrapped;
       f.text->boxes = NULL;
+      f.text->wrapped = NULL;
     }
   hl_text_free (f.text);
   g_clear_pointer (&f.hatch_tile, cairo_surface_destroy);
@@ -436,5 +458,7 @@ hl_figure_geometry_clear (HlFigureGeometry *g)
     return;
   if (g->text_boxes != NULL)
     g_array_unref (g->text_boxes);
+  if (g->wrapped != NULL)
+    g_ptr_array_unref (g->wrapped);
   memset (g, 0, sizeof *g);
 }

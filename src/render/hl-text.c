@@ -7,6 +7,7 @@
 #include "hl-text.h"
 
 #include <math.h>
+#include <string.h>
 
 static const struct
 {
@@ -97,6 +98,8 @@ hl_text_free (HlText *t)
     pango_font_description_free (t->fonts[i]);
   if (t->boxes != NULL)
     g_array_unref (t->boxes);
+  if (t->wrapped != NULL)
+    g_ptr_array_unref (t->wrapped);
   g_free (t);
 }
 
@@ -157,6 +160,23 @@ fit_words (PangoLayout                *l,
   pango_layout_set_ellipsize (l, PANGO_ELLIPSIZE_END);
 }
 
+/* Unicode lets a line break after a slash: "R/" and "t" would stand on
+ * two lines.  A word joiner (U+2060, no width) after each slash keeps
+ * "R/t" and "e/De" whole. */
+static char *
+join_slashes (const char *str)
+{
+  GString *s = g_string_new (NULL);
+
+  for (const char *p = str; *p != '\0'; p++)
+    {
+      g_string_append_c (s, *p);
+      if (*p == '/' && p[1] != '\0' && p[1] != ' ')
+        g_string_append (s, "\u2060");
+    }
+  return g_string_free (s, FALSE);
+}
+
 /* the laid-out string: from the cache, or made and kept */
 static PangoLayout *
 prepare (HlText     *t,
@@ -194,7 +214,14 @@ prepare (HlText     *t,
       pango_layout_set_wrap (l, PANGO_WRAP_WORD);
     }
   pango_layout_set_alignment (l, align);
-  pango_layout_set_text (l, str, -1);
+  if (wrap > 0 && strchr (str, '/') != NULL)
+    {
+      g_autofree char *joined = join_slashes (str);
+
+      pango_layout_set_text (l, joined, -1);
+    }
+  else
+    pango_layout_set_text (l, str, -1);
   if (ellipsize_width <= 0 && wrap > 0)
     fit_words (l, t->fonts[role], wrap);
   g_hash_table_insert (c->layouts, g_steal_pointer (&key), l);
@@ -275,7 +302,11 @@ hl_text_draw (HlText     *t,
               double      wrap,
               HlRgb       colour)
 {
-  return show (t, prepare (t, role, str, wrap, ax, 0), x, y, ax, ay, colour);
+  PangoLayout *layout = prepare (t, role, str, wrap, ax, 0);
+
+  if (wrap > 0 && t->wrapped != NULL)
+    g_ptr_array_add (t->wrapped, g_object_ref (layout));
+  return show (t, layout, x, y, ax, ay, colour);
 }
 
 HlRect

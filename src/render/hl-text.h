@@ -39,6 +39,7 @@ typedef struct
   PangoFontDescription *fonts[HL_N_FONTS];
   double                base;
   GArray               *boxes;   /* HlRect of every string drawn, or NULL */
+  GPtrArray            *wrapped; /* with @boxes: the layouts of wrapped strings */
 } HlText;
 
 HlText *hl_text_new      (cairo_t    *cr,
