@@ -367,12 +367,15 @@ draw_labels (HlFigure   *f,
     {
       g_autofree char *c = hl_length_text (f, v->a_cor - v->a_new, 3);
       g_autofree char *c_text = g_strdup_printf (_("corrosion allowance %s"), c);
+      /* a long compound ("Korrosionszuschlag") keeps its size: the
+       * frame, not the wrap, bounds the label */
+      double c_wrap = MAX (wrap, hl_text_longest_word (f->text, HL_FONT_SMALL, c_text) + 0.1);
 
       at (v, u_c, v->a_new, &x0, &y0);
       at (v, u_c, v->a_cor, &x1, &y1);
       hl_dimension (f, x0, y0, x1, y1);
       /* beside the dimension line, which may run out through the text */
-      if (!side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c_text, wrap, 0))
+      if (!side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c_text, c_wrap, 0))
         side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c, wrap, 0);
     }
 
