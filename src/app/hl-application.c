@@ -128,7 +128,7 @@ static void
 hl_application_startup (GApplication *application)
 {
   HlApplication *self = HL_APPLICATION (application);
-  static const struct { const char *action; const char *accels[3]; } accels[] = {
+  static const struct { const char *action; const char *accels[4]; } accels[] = {
     { "app.quit", { "<Control>q", NULL } },
     { "app.preferences", { "<Control>comma", NULL } },
     { "win.new", { "<Control>n", NULL } },
@@ -146,6 +146,9 @@ hl_application_startup (GApplication *application)
     { "win.shell-add", { "<Control><Shift>n", NULL } },
     { "win.shell-rename", { "F2", NULL } },
     { "window.close", { "<Control>w", NULL } },
+    { "win.zoom-in", { "<Control>plus", "<Control>equal", "<Control>KP_Add" } },
+    { "win.zoom-out", { "<Control>minus", "<Control>KP_Subtract", NULL } },
+    { "win.zoom-fit", { "<Control>0", "<Control>KP_0", NULL } },
   };
 
   G_APPLICATION_CLASS (hl_application_parent_class)->startup (application);

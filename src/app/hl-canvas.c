@@ -3,28 +3,21 @@
  * The render layer draws everything; this widget only hands it the
  * document's one solution and the style.  GTK gives the draw function a
  * cairo context already scaled for the monitor, so HiDPI stays sharp.
+ * Zoomed in (hl-canvas-zoom.c), the figure laid out for the view is
+ * drawn larger inside the scrolled window around the canvas.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
 #define G_LOG_DOMAIN "hl-canvas"
 
 #include "hl-config.h"
-#include "hl-canvas.h"
+#include "hl-canvas-private.h"
 #include "hl-document-follower.h"
 #include "hl-startup-trace.h"
 #include "hl-figure.h"
 
 #include <adwaita.h>
 #include <stdio.h>
-
-struct _HlCanvas
-{
-  GtkDrawingArea parent_instance;
-
-  HlDocument    *document;
-  GSignalGroup  *follower;      /* calls on_document_changed_cb */
-  guint          n_draws;
-};
 
 G_DEFINE_FINAL_TYPE (HlCanvas, hl_canvas, GTK_TYPE_DRAWING_AREA)
 
@@ -64,7 +57,10 @@ draw_cb (GtkDrawingArea *area,
   if (self->document == NULL)
     return;
   hl_canvas_build_context (self, &ctx);
-  hl_figure_draw (cr, width, height, &ctx);
+  /* the layout of the view's size, magnified: zooming shows the same
+   * figure larger, it does not lay it out again */
+  cairo_scale (cr, self->zoom, self->zoom);
+  hl_figure_draw (cr, width / self->zoom, height / self->zoom, &ctx);
 
   if (self->n_draws++ == 0)
     hl_startup_trace_first_frame ();
@@ -110,12 +106,28 @@ hl_canvas_dispose (GObject *object)
 }
 
 static void
+hl_canvas_get_property (GObject    *object,
+                        guint       prop_id,
+                        GValue     *value,
+                        GParamSpec *pspec)
+{
+  HlCanvas *self = HL_CANVAS (object);
+
+  if (prop_id == HL_CANVAS_PROP_ZOOM)
+    g_value_set_double (value, self->zoom);
+  else
+    G_OBJECT_WARN_INVALID_PROPERTY_ID (object, prop_id, pspec);
+}
+
+static void
 hl_canvas_class_init (HlCanvasClass *klass)
 {
   GObjectClass *object_class = G_OBJECT_CLASS (klass);
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
 
   object_class->dispose = hl_canvas_dispose;
+  object_class->get_property = hl_canvas_get_property;
+  hl_canvas_zoom_class_init (klass);
   widget_class->realize = hl_canvas_realize;
   gtk_widget_class_set_css_name (widget_class, "hl-canvas");
   gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_IMG);
@@ -129,6 +141,7 @@ hl_canvas_init (HlCanvas *self)
   gtk_widget_set_vexpand (GTK_WIDGET (self), TRUE);
   gtk_widget_set_size_request (GTK_WIDGET (self), 360, 240);
   self->follower = hl_document_follower_new ((HlDocumentRefresh) on_document_changed_cb, self);
+  hl_canvas_zoom_init (self);
 }
 
 void

@@ -19,6 +19,13 @@ void     hl_canvas_set_document (HlCanvas   *self,
 /* frames drawn so far, for tests */
 guint    hl_canvas_get_n_draws  (HlCanvas   *self);
 gboolean hl_canvas_get_dark     (HlCanvas   *self);
+/* hl-canvas-zoom.c: the figure magnified inside the scrolled window
+ * around the canvas; 1 fits it to the view.  "zoom" notifies. */
+double   hl_canvas_get_zoom     (HlCanvas   *self);
+void     hl_canvas_zoom_in      (HlCanvas   *self);
+void     hl_canvas_zoom_out     (HlCanvas   *self);
+void     hl_canvas_zoom_fit     (HlCanvas   *self);
+gboolean hl_canvas_can_zoom_in  (HlCanvas   *self);
 /* the context the canvas draws with (hl_figure_context_init) */
 void     hl_canvas_build_context (HlCanvas        *self,
                                   HlFigureContext *ctx);

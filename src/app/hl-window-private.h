@@ -66,6 +66,9 @@ void        hl_window_set_document     (HlWindow       *self,
                                         HlDocument     *document);
 HlDocument *hl_window_new_document     (HlWindow       *self);
 
+/* hl-window-zoom.c: win.zoom-in, win.zoom-out, win.zoom-fit */
+void        hl_window_add_zoom_actions (HlWindow       *self);
+
 /* hl-window-files.c: new, open, save */
 void        hl_window_add_file_actions (HlWindow       *self);
 /* saves to the document's file, or asks for one first */

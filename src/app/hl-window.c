@@ -518,6 +518,7 @@ hl_window_init (HlWindow *self)
   hl_window_autosave_init (self);
   g_action_map_add_action_entries (G_ACTION_MAP (self), win_entries, G_N_ELEMENTS (win_entries), self);
   hl_window_add_file_actions (self);
+  hl_window_add_zoom_actions (self);
   gtk_label_set_text (self->caution_label, _(HL_CAUTION));
 
   drop = gtk_drop_target_new (GDK_TYPE_FILE_LIST, GDK_ACTION_COPY);

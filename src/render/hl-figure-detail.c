@@ -241,7 +241,8 @@ typedef struct
 
 /* text in the bore (@side < 0) or outside (@side > 0), next to the wall
  * surface at radius @rho, at along-wall @u; left out when it would
- * leave the frame or cover a text placed before it */
+ * leave the frame or cover a text placed before it; @lift moves it
+ * that much further from the wall */
 static gboolean
 side_text (HlFigure   *f,
            const View *v,
@@ -251,10 +252,11 @@ side_text (HlFigure   *f,
            int         side,
            double      ax_along,
            const char *text,
-           double      wrap)
+           double      wrap,
+           double      lift)
 {
   HlRect *fr = &f->geom->section.detail_frame;
-  double x, y, gap = 0.35 * f->text->base;
+  double x, y, gap = 0.35 * f->text->base + lift;
   double ax, ay, w, h;
   HlRect r;
 
@@ -285,6 +287,49 @@ side_text (HlFigure   *f,
   return TRUE;
 }
 
+/* where the hoop stress peaks: an arrow onto that surface from its
+ * label, which stands beyond the arrow's tail so the head never runs
+ * into the number */
+static void
+peak_leader (HlFigure   *f,
+             const View *v,
+             Placed     *placed,
+             double      u,
+             gboolean    inner,
+             const char *text,
+             double      wrap)
+{
+  HlSectionGeometry *g = &f->geom->section;
+  const HlSolution *sol = f->sol;
+  double r_peak = inner ? sol->a : sol->b, r_label = inner ? v->a_new : v->b;
+  double head = hl_arrow_head_length (f), dir = inner ? 1 : -1;
+  double depth = fabs (r_peak - r_label) * v->s;   /* tip below the label's surface */
+  double lift = MAX (0, head + 0.8 * f->text->base - depth);
+  double reach = depth + 0.35 * f->text->base + lift - 0.3 * f->text->base;
+  double x0, y0, x1, y1, half = head / 3;
+
+  if (!side_text (f, v, placed, u, r_label, inner ? -1 : 1, 0.5, text, wrap, lift))
+    return;
+  g->peak_label = placed->placed[placed->n - 1];
+  at (v, u, r_peak, &x0, &y0);
+  x1 = x0 - dir * reach * v->ex;
+  y1 = y0 - dir * reach * v->ey;
+  cairo_save (f->cr);
+  hl_palette_set_source (f->cr, f->pal->ink);
+  cairo_set_line_width (f->cr, 0.7 * f->lw);
+  cairo_move_to (f->cr, x1, y1);
+  cairo_line_to (f->cr, x0 - dir * head * v->ex, y0 - dir * head * v->ey);
+  cairo_stroke (f->cr);
+  hl_arrow_head (f, x0, y0, dir * v->ex, dir * v->ey);
+  cairo_restore (f->cr);
+  /* the leader's box, for the texts placed after it and for tests */
+  g->peak_leader = (HlRect) { MIN (x0, x1) - half, MIN (y0, y1) - half, fabs (x1 - x0) + 2 * half,
+                              fabs (y1 - y0) + 2 * half };
+  g->has_peak_leader = TRUE;
+  if (placed->n < G_N_ELEMENTS (placed->placed))
+    placed->placed[placed->n++] = g->peak_leader;
+}
+
 static void
 draw_labels (HlFigure   *f,
              const View *v)
@@ -295,7 +340,6 @@ draw_labels (HlFigure   *f,
   double wrap = MAX (flat ? 0.5 * v->U : 0.8 * (v->V - wall / 2), 4 * f->text->base);
   double x0, y0, x1, y1;
   gboolean peak_inner = fabs (sol->points[0].hoop) >= fabs (sol->points[sol->n_points - 1].hoop);
-  double r_peak = peak_inner ? sol->a : sol->b;
   g_autofree char *t_new = hl_length_text (f, v->b - v->a_new, 4);
   g_autofree char *t_cor = hl_length_text (f, sol->b - sol->a, 4);
   g_autofree char *peak = hl_stress_text (f, peak_inner ? sol->points[0].hoop : sol->points[sol->n_points - 1].hoop, 4);
@@ -316,34 +360,31 @@ draw_labels (HlFigure   *f,
     }
   else
     t_text = g_strdup_printf ("t" HL_NBSP "=" HL_NBSP "%s", t_new);
-  if (!side_text (f, v, &placed, u_t, v->b, 1, 0.5, t_text, flat ? 0.62 * v->U : wrap))
-    side_text (f, v, &placed, u_t, v->b, 1, 0.5, t_new, flat ? 0.62 * v->U : wrap);
+  if (!side_text (f, v, &placed, u_t, v->b, 1, 0.5, t_text, flat ? 0.62 * v->U : wrap, 0))
+    side_text (f, v, &placed, u_t, v->b, 1, 0.5, t_new, flat ? 0.62 * v->U : wrap, 0);
 
   if (v->a_cor > v->a_new)
     {
       g_autofree char *c = hl_length_text (f, v->a_cor - v->a_new, 3);
       g_autofree char *c_text = g_strdup_printf (_("corrosion allowance %s"), c);
+      /* a long compound ("Korrosionszuschlag") keeps its size: the
+       * frame, not the wrap, bounds the label */
+      double c_wrap = MAX (wrap, hl_text_longest_word (f->text, HL_FONT_SMALL, c_text) + 0.1);
 
       at (v, u_c, v->a_new, &x0, &y0);
       at (v, u_c, v->a_cor, &x1, &y1);
       hl_dimension (f, x0, y0, x1, y1);
       /* beside the dimension line, which may run out through the text */
-      if (!side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c_text, wrap))
-        side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c, wrap);
+      if (!side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c_text, c_wrap, 0))
+        side_text (f, v, &placed, u_c + 0.6 * f->text->base, v->a_new, -1, 0, c, wrap, 0);
     }
 
-  /* where the hoop stress peaks: a mark on that surface */
-  at (v, u_p, r_peak, &x0, &y0);
-  cairo_save (f->cr);
-  hl_palette_set_source (f->cr, f->pal->ink);
-  hl_arrow_head (f, x0, y0, (peak_inner ? 1 : -1) * v->ex, (peak_inner ? 1 : -1) * v->ey);
-  cairo_restore (f->cr);
   p_text = g_strdup_printf (_("peak σθ %s"), peak);
-  side_text (f, v, &placed, u_p, peak_inner ? v->a_new : v->b, peak_inner ? -1 : 1, 0.5, p_text, wrap);
+  peak_leader (f, v, &placed, u_p, peak_inner, p_text, wrap);
 
   /* bore and outside named at the start of the frame */
-  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->a_new, -1, 0, _("bore"), 0);
-  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->b, 1, 0, _("outside"), 0);
+  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->a_new, -1, 0, _("bore"), 0, 0);
+  side_text (f, v, &placed, -v->U + 0.3 * f->text->base, v->b, 1, 0, _("outside"), 0, 0);
 }
 
 static void

@@ -39,6 +39,9 @@ typedef struct
   double   detail_angle;       /* where on the ring the detail comes from */
   HlRect   detail_box;         /* the small box on the ring */
   HlRect   detail_frame;       /* the magnified view */
+  gboolean has_peak_leader;    /* the detail's arrow to the peak hoop stress */
+  HlRect   peak_leader;        /* its box, head and shaft */
+  HlRect   peak_label;         /* its text */
 } HlSectionGeometry;
 
 typedef struct
@@ -58,6 +61,15 @@ typedef struct
   double   design_x, design_y; /* where this design's point is drawn */
 } HlChartGeometry;
 
+/* the colour key of the shaded wall */
+typedef struct
+{
+  gboolean drawn;
+  guint    n_ticks;            /* values written on the key */
+  gboolean uniform;            /* one colour, one value */
+  char     range[128];         /* stated when the stress varies little, else "" */
+} HlLegendGeometry;
+
 typedef struct
 {
   HlFigureLayout    layout;
@@ -65,7 +77,12 @@ typedef struct
   HlSectionGeometry section;
   HlPlotGeometry    plot;
   HlChartGeometry   chart;
+  HlLegendGeometry  legend;
   GArray           *text_boxes; /* HlRect of every string drawn */
+  guint             dropped;    /* HlFigurePanels asked for, left out for want of
+                                 * room (the figure says which) */
+  HlRect            title_block; /* zero when not drawn (on screen) */
+  GPtrArray        *wrapped;    /* PangoLayout of every string drawn wrapped */
 } HlFigureGeometry;
 
 /* hl_figure_draw() that also fills @geometry (may be NULL). */

@@ -10,20 +10,7 @@
 #include "hl-figure-private.h"
 
 #include <math.h>
-
-static void
-hoop_range (const HlSolution *sol,
-            double           *lo,
-            double           *hi)
-{
-  *lo = INFINITY;
-  *hi = -INFINITY;
-  for (guint i = 0; i < sol->n_points; i++)
-    {
-      *lo = MIN (*lo, sol->points[i].hoop);
-      *hi = MAX (*hi, sol->points[i].hoop);
-    }
-}
+#include <string.h>
 
 typedef struct
 {
@@ -33,12 +20,94 @@ typedef struct
   double hatch_w, hatch_h;
   double end_gap;
   gboolean band;
+  gboolean uniform;
+  char *heading;     /* name, unit and, when the stress varies little, its range */
+  char *range;
 } Legend;
 
 static const char *
 title (HlFigure *f)
 {
   return f->sol->inputs.form == HL_FORM_SPHERE ? _("σθ Lamé (tangential)") : _("σθ Lamé (hoop)");
+}
+
+/* the swatch's label in a narrow column, but never narrower than its
+ * longest word ("Korrosionszuschlag") */
+static double
+swatch_wrap (HlFigure *f)
+{
+  return MAX (5.5 * f->text->base, hl_text_longest_word (f->text, HL_FONT_TINY, _("corrosion allowance")) + 0.1);
+}
+
+/* "77.39 – 78.4, range 1.4 %": a wall whose hoop stress varies by a few
+ * per cent still runs the whole colour scale, so the key says how
+ * little that is; NULL when the stress varies by a tenth or more */
+static char *
+range_text (HlFigure *f,
+            double    lo,
+            double    hi)
+{
+  double big = MAX (fabs (lo), fabs (hi)), rel = 100 * (hi - lo) / big;
+  /* enough digits to tell the ends apart */
+  int digits = CLAMP ((int) ceil (log10 (big / (hi - lo))) + 2, 3, 8);
+  g_autofree char *a = NULL, *b = NULL, *r = NULL, *r_pct = NULL;
+
+  if (!(rel < 10))
+    return NULL;
+  a = hl_figure_format_sig (hl_stress_value (f, lo), digits, f->locale);
+  b = hl_figure_format_sig (hl_stress_value (f, hi), digits, f->locale);
+  r = hl_figure_format_sig (rel, 2, f->locale);
+  r_pct = g_strdup_printf ("%s" HL_NBSP "%%", r);
+  /* TRANSLATORS: lowest and highest hoop stress in the wall, their difference in percent */
+  return g_strdup_printf (_("%s – %s, range %s"), a, b, r_pct);
+}
+
+/* nice values at least a label apart: as many as fit, three or more
+ * when the bar has the length */
+static void
+choose_ticks (HlFigure *f,
+              Legend   *l,
+              double    lo,
+              double    hi,
+              gboolean  vertical)
+{
+  for (guint target = 8; target >= 2; target--)
+    {
+      double widest = 0, w, spacing;
+
+      hl_axis_linear (&l->axis, lo, hi, target, FALSE);
+      for (guint i = 0; i < l->axis.n_ticks; i++)
+        {
+          g_autofree char *s = hl_axis_label (&l->axis, l->axis.ticks[i], f->locale);
+
+          hl_text_measure (f->text, HL_FONT_TINY, s, 0, &w, NULL);
+          widest = MAX (widest, w);
+        }
+      spacing = l->bar_len * l->axis.step / (hi - lo);
+      if (spacing >= (vertical ? 1.3 * l->label_h : widest + 0.8 * f->text->base))
+        return;
+    }
+}
+
+static void
+legend_clear (Legend *l)
+{
+  g_free (l->heading);
+  g_free (l->range);
+}
+
+/* the one value of a uniform field, with its unit: the key's only label */
+static char *
+tick_text (HlFigure *f,
+           Legend   *l,
+           guint     i)
+{
+  double lo, hi;
+
+  if (!l->uniform)
+    return hl_axis_label (&l->axis, l->axis.ticks[i], f->locale);
+  hl_wall_hoop_range (f->sol, &lo, &hi);
+  return hl_figure_format_sig (hl_stress_value (f, lo), 4, f->locale);
 }
 
 /* @room: the height a vertical legend may take; the bar shrinks to fit */
@@ -51,35 +120,21 @@ legend_plan (HlFigure *f,
   double lo, hi, w, h;
   double a_new, a_cor, dummy;
 
-  hoop_range (f->sol, &lo, &hi);
-  hl_axis_linear (&l->axis, hl_stress_value (f, lo), hl_stress_value (f, hi), vertical ? 4 : 3, FALSE);
-  /* one stress all through the wall (no load): one colour, one value */
-  if (!(hi > lo))
-    {
-      l->axis.n_ticks = 1;
-      l->axis.ticks[0] = hl_stress_value (f, lo);
-    }
-  l->label_w = l->label_h = 0;
-  for (guint i = 0; i < l->axis.n_ticks; i++)
-    {
-      g_autofree char *s = hl_axis_label (&l->axis, l->axis.ticks[i], f->locale);
-
-      hl_text_measure (f->text, HL_FONT_TINY, s, 0, &w, &h);
-      l->label_w = MAX (l->label_w, w);
-      l->label_h = MAX (l->label_h, h);
-    }
-  {
-    g_autofree char *t = g_strdup_printf ("%s, %s", title (f), hl_stress_unit (f));
-
-    hl_text_measure (f->text, HL_FONT_TINY, t, vertical ? 7 * f->text->base : 0, &l->title_w, &l->title_h);
-  }
+  memset (l, 0, sizeof *l);
+  hl_wall_hoop_range (f->sol, &lo, &hi);
+  l->uniform = hl_wall_scale_uniform (f->sol);
+  l->range = l->uniform ? NULL : range_text (f, lo, hi);
+  l->heading = l->range != NULL ? g_strdup_printf ("%s, %s\n%s", title (f), hl_stress_unit (f), l->range)
+                                : g_strdup_printf ("%s, %s", title (f), hl_stress_unit (f));
+  hl_text_measure (f->text, HL_FONT_TINY, "0", 0, NULL, &l->label_h);
+  hl_text_measure (f->text, HL_FONT_TINY, l->heading, vertical ? 7 * f->text->base : 0, &l->title_w, &l->title_h);
   hl_shell_inputs_radii (&f->sol->inputs, FALSE, &a_new, &dummy);
   hl_shell_inputs_radii (&f->sol->inputs, TRUE, &a_cor, &dummy);
   l->band = a_cor > a_new;
   l->hatch_w = l->hatch_h = 0;
   if (l->band)
     {
-      hl_text_measure (f->text, HL_FONT_TINY, _("corrosion allowance"), vertical ? 5.5 * f->text->base : 0, &w, &h);
+      hl_text_measure (f->text, HL_FONT_TINY, _("corrosion allowance"), vertical ? swatch_wrap (f) : 0, &w, &h);
       l->hatch_w = 1.6 * f->text->base + w;
       l->hatch_h = MAX (h, 0.9 * f->text->base);
     }
@@ -90,6 +145,19 @@ legend_plan (HlFigure *f,
   if (vertical)
     l->bar_len = CLAMP (room - l->title_h - 2 * l->end_gap - (l->band ? l->hatch_h : 0), 3 * f->text->base,
                         l->bar_len);
+  if (l->uniform)
+    l->axis.n_ticks = 1;
+  else
+    choose_ticks (f, l, hl_stress_value (f, lo), hl_stress_value (f, hi), vertical);
+  l->label_w = 0;
+  for (guint i = 0; i < l->axis.n_ticks; i++)
+    {
+      g_autofree char *s = tick_text (f, l, i);
+
+      hl_text_measure (f->text, HL_FONT_TINY, s, 0, &w, &h);
+      l->label_w = MAX (l->label_w, w);
+      l->label_h = MAX (l->label_h, h);
+    }
 }
 
 void
@@ -103,6 +171,7 @@ hl_stress_legend_size (HlFigure *f,
   double tick = 0.3 * f->text->base;
 
   legend_plan (f, &l, vertical, room);
+  legend_clear (&l);
   if (vertical)
     {
       *width = MAX (MAX (l.title_w, l.bar_thick + tick + l.label_w + 0.3 * f->text->base), l.hatch_w);
@@ -143,17 +212,23 @@ draw_bar (HlFigure     *f,
           gboolean      vertical)
 {
   cairo_t *cr = f->cr;
-  double lo = l->axis.v0, hi = l->axis.v1;
   double tick = 0.3 * f->text->base;
   cairo_pattern_t *pat;
   const int steps = 12;
 
-  /* the bar's own gradient runs lowest to highest stress */
-  if (vertical)
+  /* the bar's own gradient runs lowest to highest stress; one stress
+   * all through the wall is the one colour the wall is painted in */
+  if (l->uniform)
+    {
+      HlRgb c = hl_palette_scale (0.5);
+
+      pat = cairo_pattern_create_rgb (c.r, c.g, c.b);
+    }
+  else if (vertical)
     pat = cairo_pattern_create_linear (0, bar->y + bar->height, 0, bar->y);
   else
     pat = cairo_pattern_create_linear (bar->x, 0, bar->x + bar->width, 0);
-  for (int i = 0; i <= steps; i++)
+  for (int i = 0; i <= steps && !l->uniform; i++)
     {
       HlRgb c = hl_palette_scale ((double) i / steps);
 
@@ -175,7 +250,14 @@ draw_bar (HlFigure     *f,
     double light = vertical ? bar->y + bar->height : bar->x;
     double dark = vertical ? bar->y : bar->x + bar->width;
 
-    if (hl_wall_scale_reversed (f->sol))
+    if (l->uniform)
+      {
+        /* the one value in the middle of the bar */
+        l->axis.v0 = l->axis.ticks[0] - 1;
+        l->axis.v1 = l->axis.ticks[0] + 1;
+        hl_axis_place (&l->axis, light, dark);
+      }
+    else if (hl_wall_scale_reversed (f->sol))
       hl_axis_place (&l->axis, dark, light);
     else
       hl_axis_place (&l->axis, light, dark);
@@ -183,7 +265,7 @@ draw_bar (HlFigure     *f,
   for (guint i = 0; i < l->axis.n_ticks; i++)
     {
       double p = hl_axis_map (&l->axis, l->axis.ticks[i]);
-      g_autofree char *s = hl_axis_label (&l->axis, l->axis.ticks[i], f->locale);
+      g_autofree char *s = tick_text (f, l, i);
 
       if (vertical)
         {
@@ -201,8 +283,6 @@ draw_bar (HlFigure     *f,
     }
   cairo_stroke (cr);
   cairo_restore (cr);
-  (void) lo;
-  (void) hi;
 }
 
 void
@@ -210,15 +290,19 @@ hl_stress_legend_draw (HlFigure     *f,
                        const HlRect *area,
                        gboolean      vertical)
 {
+  HlLegendGeometry *g = &f->geom->legend;
   Legend l;
-  g_autofree char *t = NULL;
   HlRect bar;
 
   legend_plan (f, &l, vertical, area->height);
-  t = g_strdup_printf ("%s, %s", title (f), hl_stress_unit (f));
+  g->drawn = TRUE;
+  g->n_ticks = l.axis.n_ticks;
+  g->uniform = l.uniform;
+  g_strlcpy (g->range, l.range != NULL ? l.range : "", sizeof g->range);
   if (vertical)
     {
-      HlRect r = hl_text_draw (f->text, HL_FONT_TINY, t, area->x, area->y, 0, 0, 7 * f->text->base, f->pal->ink);
+      HlRect r = hl_text_draw (f->text, HL_FONT_TINY, l.heading, area->x, area->y, 0, 0, 7 * f->text->base,
+                               f->pal->ink);
 
       bar.x = area->x;
       bar.y = r.y + r.height + l.end_gap;
@@ -226,21 +310,29 @@ hl_stress_legend_draw (HlFigure     *f,
       bar.height = l.bar_len;
       draw_bar (f, &l, &bar, TRUE);
       if (l.band)
-        hatch_swatch (f, area->x, bar.y + bar.height + l.end_gap, 5.5 * f->text->base);
+        /* the swatch's label is centred on it: its top, not the
+         * swatch's, keeps clear of the bar's last label */
+        hatch_swatch (f, area->x, bar.y + bar.height + l.end_gap + (l.hatch_h - 0.9 * f->text->base) / 2,
+                      swatch_wrap (f));
     }
   else
     {
-      double x = area->x;
+      double x = area->x, ticked = l.bar_thick + 0.3 * f->text->base + l.label_h;
+      /* a heading of two lines (with the range) is as tall as the bar
+       * with its labels: both centred in the row */
+      double bar_y = area->y + MAX (0, (l.title_h - ticked) / 2);
+      double title_y = MAX (area->y, bar_y + l.bar_thick / 2 - l.title_h / 2);
 
-      hl_text_draw (f->text, HL_FONT_TINY, t, x, area->y + l.bar_thick / 2, 0, 0.5, 0, f->pal->ink);
+      hl_text_draw (f->text, HL_FONT_TINY, l.heading, x, title_y, 0, 0, 0, f->pal->ink);
       x += l.title_w + f->gap + l.label_w / 2;
       bar.x = x;
-      bar.y = area->y;
+      bar.y = bar_y;
       bar.width = l.bar_len;
       bar.height = l.bar_thick;
       draw_bar (f, &l, &bar, FALSE);
       x += l.bar_len + l.label_w / 2 + 2 * f->gap;
       if (l.band)
-        hatch_swatch (f, x, area->y, 0);
+        hatch_swatch (f, x, bar_y, 0);
     }
+  legend_clear (&l);
 }

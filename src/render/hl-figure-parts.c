@@ -37,6 +37,12 @@ hl_panel_heading (HlFigure     *f,
   return h + f->gap;
 }
 
+double
+hl_arrow_head_length (HlFigure *f)
+{
+  return MAX (4.0, 0.62 * f->text->base);
+}
+
 void
 hl_arrow_head (HlFigure *f,
                double    x,
@@ -44,7 +50,7 @@ hl_arrow_head (HlFigure *f,
                double    dx,
                double    dy)
 {
-  double len = MAX (4.0, 0.62 * f->text->base);
+  double len = hl_arrow_head_length (f);
   double n = hypot (dx, dy);
   double ux, uy;
 

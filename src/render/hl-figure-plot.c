@@ -20,6 +20,8 @@ typedef enum
   CURVE_THIN_RADIAL,
   CURVE_AXIAL,
   CURVE_VON_MISES,
+  CURVE_THIN_VON_MISES,
+  CURVE_TRESCA,
   N_CURVES,
 } Curve;
 
@@ -58,6 +60,16 @@ value_of (const HlWallPoint *p,
       return p->axial;
     case CURVE_VON_MISES:
       return p->von_mises;
+    case CURVE_THIN_VON_MISES:
+      {
+        /* the membrane state's equivalent stress, radial stress zero:
+         * what the equivalent thin-wall verdict compares with Lamé */
+        HlStress thin = { 0.0, p->thin_hoop, p->thin_axial };
+
+        return hl_equivalent (thin, HL_CRITERION_VON_MISES);
+      }
+    case CURVE_TRESCA:
+      return p->tresca;
     case CURVE_THIN_RADIAL:
     case N_CURVES:
     default:
@@ -93,6 +105,15 @@ plan_curves (HlFigure *f,
                                           f->pal->axial, HL_DASH_DASH_DOT, 1.3 };
   p->curves[CURVE_VON_MISES] = (CurveStyle) { TRUE, g_strdup (_("σeq von Mises, Lamé")), f->pal->von_mises, HL_DASH_LONG,
                                               1.3 };
+  /* the thin-wall line the verdict compares when it measures the
+   * equivalent stress, dashed like the thin hoop */
+  p->curves[CURVE_THIN_VON_MISES] = (CurveStyle) { in->verdict_measure != HL_MEASURE_HOOP,
+                                                   g_strdup (_("σeq von Mises, thin wall")), f->pal->von_mises,
+                                                   HL_DASH_DASHED, 1.8 };
+  /* the criterion the wall is sized and checked by */
+  p->curves[CURVE_TRESCA] = (CurveStyle) { in->sizing_criterion == HL_CRITERION_TRESCA,
+                                           g_strdup (_("σeq Tresca, Lamé (criterion)")), f->pal->tresca,
+                                           HL_DASH_DASH_DOT, 1.5 };
   hl_shell_inputs_radii (in, FALSE, &p->a_new, &dummy);
   hl_shell_inputs_radii (in, TRUE, &p->a_cor, &dummy);
   p->band = p->a_cor > p->a_new;
@@ -347,8 +368,8 @@ draw_curves (HlFigure       *f,
   cairo_set_line_join (cr, CAIRO_LINE_JOIN_ROUND);
   /* thin-wall lines first so the exact curves stay on top where they
    * coincide; dashes then show through as breaks in the colour */
-  static const Curve order[] = { CURVE_VON_MISES, CURVE_AXIAL, CURVE_RADIAL, CURVE_HOOP, CURVE_THIN_RADIAL,
-                                 CURVE_THIN_HOOP };
+  static const Curve order[] = { CURVE_TRESCA, CURVE_VON_MISES, CURVE_AXIAL, CURVE_RADIAL, CURVE_HOOP,
+                                 CURVE_THIN_RADIAL, CURVE_THIN_VON_MISES, CURVE_THIN_HOOP };
   for (guint k = 0; k < G_N_ELEMENTS (order); k++)
     {
       Curve c = order[k];

@@ -39,6 +39,10 @@ typedef enum
  * fills f->geom->section and draws the ring, its dimensions and the box. */
 gboolean hl_section_needs_detail (HlFigure     *f,
                                   const HlRect *area);
+/* the ring, its dimensions and (without a detail) its key have room */
+gboolean hl_section_fits         (HlFigure     *f,
+                                  const HlRect *area,
+                                  gboolean      with_detail);
 void     hl_section_draw         (HlFigure     *f,
                                   const HlRect *area,
                                   const HlRect *detail,
@@ -65,6 +69,12 @@ void     hl_wall_fill            (HlFigure     *f,
 double   hl_wall_scale_position  (const HlSolution *sol,
                                   double            hoop);
 gboolean hl_wall_scale_reversed  (const HlSolution *sol);
+/* the lowest and highest Lamé hoop stress in the wall, SI */
+void     hl_wall_hoop_range      (const HlSolution *sol,
+                                  double           *lo,
+                                  double           *hi);
+/* the same stress all through the wall: one colour, one value */
+gboolean hl_wall_scale_uniform   (const HlSolution *sol);
 /* colour legend for the hoop stress, vertical (at most @room high) or
  * horizontal */
 void     hl_stress_legend_size   (HlFigure     *f,
@@ -132,6 +142,7 @@ double   hl_panel_heading_height (HlFigure     *f,
                                   double        width,
                                   const char   *title,
                                   const char   *subtitle);
+double   hl_arrow_head_length    (HlFigure     *f);
 void     hl_arrow_head           (HlFigure     *f,
                                   double        x,
                                   double        y,

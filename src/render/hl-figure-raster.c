@@ -97,10 +97,10 @@ set_pixel_source (cairo_t         *cr,
   cairo_pattern_destroy (pat);
 }
 
-static void
-hoop_range (const HlSolution *sol,
-            double           *lo,
-            double           *hi)
+void
+hl_wall_hoop_range (const HlSolution *sol,
+                    double           *lo,
+                    double           *hi)
 {
   *lo = INFINITY;
   *hi = -INFINITY;
@@ -135,12 +135,31 @@ reversed_range (double lo,
   return hi <= 0 && lo < 0;
 }
 
+/* one stress all through the wall, to the rounding of the solution
+ * (no load, or equal pressures inside and out): one colour, not stripes
+ * of rounding noise stretched over the scale */
+static gboolean
+uniform_range (double lo,
+               double hi)
+{
+  return !(hi - lo > 1e-9 * MAX (fabs (lo), fabs (hi)));
+}
+
+gboolean
+hl_wall_scale_uniform (const HlSolution *sol)
+{
+  double lo, hi;
+
+  hl_wall_hoop_range (sol, &lo, &hi);
+  return uniform_range (lo, hi);
+}
+
 static double
 position_in (double hoop,
              double lo,
              double hi)
 {
-  double t = hi > lo ? (hoop - lo) / (hi - lo) : 0.5;
+  double t = !uniform_range (lo, hi) ? (hoop - lo) / (hi - lo) : 0.5;
 
   return reversed_range (lo, hi) ? 1 - t : t;
 }
@@ -150,7 +169,7 @@ hl_wall_scale_reversed (const HlSolution *sol)
 {
   double lo, hi;
 
-  hoop_range (sol, &lo, &hi);
+  hl_wall_hoop_range (sol, &lo, &hi);
   return reversed_range (lo, hi);
 }
 
@@ -160,7 +179,7 @@ hl_wall_scale_position (const HlSolution *sol,
 {
   double lo, hi;
 
-  hoop_range (sol, &lo, &hi);
+  hl_wall_hoop_range (sol, &lo, &hi);
   return position_in (hoop, lo, hi);
 }
 
@@ -220,7 +239,7 @@ wall_pixels (HlFigure *f,
   /* a circle stays a circle in pixels only under a uniform scale */
   if (!raster_of (cr, &r) || fabs (r.sx - r.sy) > 1e-9 || !pixel_box (cr, &r, &x0, &y0, &w, &h))
     return FALSE;
-  hoop_range (sol, &lo, &hi);
+  hl_wall_hoop_range (sol, &lo, &hi);
   for (int k = 0; k < LUT_SIZE; k++)
     {
       double r2 = sol->a * sol->a + (sol->b * sol->b - sol->a * sol->a) * k / (LUT_SIZE - 1);

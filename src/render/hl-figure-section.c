@@ -380,6 +380,36 @@ hl_section_needs_detail (HlFigure     *f,
   return wall_px < MAX (14.0, 1.6 * f->text->base);
 }
 
+gboolean
+hl_section_fits (HlFigure     *f,
+                 const HlRect *area,
+                 gboolean      with_detail)
+{
+  Plan p = { 0 };
+  double left, top, head_h;
+  const char *sub = f->sol->inputs.form == HL_FORM_SPHERE ? _("sphere: section through the centre")
+                                                           : _("cylinder: ring cross-section");
+  gboolean ok;
+
+  if (area->width < 12 * f->text->base || area->height < 12 * f->text->base)
+    return FALSE;
+  plan_texts (f, &p, !with_detail);
+  head_h = hl_panel_heading_height (f, area->width / 2, _("Section to scale"), sub);
+  p.content = *area;
+  p.content.y += head_h;
+  p.content.height -= head_h;
+  if (!with_detail)
+    {
+      hl_stress_legend_size (f, FALSE, 0, &p.legend_w, &p.legend_h);
+      p.content.height -= p.legend_h + f->gap;
+    }
+  /* the dimensions' texts beside a ring big enough to read, and the
+   * key under it */
+  ok = fits (f, &p, 3 * f->text->base, &left, &top) && (with_detail || p.legend_w <= area->width);
+  plan_clear (&p);
+  return ok;
+}
+
 void
 hl_section_draw (HlFigure     *f,
                  const HlRect *area,

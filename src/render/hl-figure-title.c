@@ -181,7 +181,7 @@ typedef struct
   char       *value;
 } Cell;
 
-#define N_CELLS 8
+#define N_CELLS 9
 
 static guint
 title_cells (HlFigure *f,
@@ -202,6 +202,11 @@ title_cells (HlFigure *f,
                                                               : g_date_time_format (now, "%Y-%m-%d") };
   cells[6] = (Cell) { _("Design basis"), g_strdup ("—") };
   cells[7] = (Cell) { _("Design load"), g_strdup ("—") };
+  /* what the allowable belongs to: the specification when given */
+  cells[8] = (Cell) { _("Material"), sh == NULL ? g_strdup ("—")
+                                     : sh->material_spec[0] != '\0' ? g_strdup_printf ("%s, %s", sh->material.name,
+                                                                                     sh->material_spec)
+                                                                   : g_strdup (sh->material.name) };
   if (f->sol != NULL)
     {
       g_autofree char *pi = hl_stress_text (f, f->sol->pi, 4);
@@ -235,7 +240,7 @@ static guint
 title_columns (HlFigure *f,
                double    width)
 {
-  static const guint column3[N_CELLS] = { 0, 1, 2, 0, 1, 2, 0, 1 };
+  static const guint column3[N_CELLS] = { 0, 1, 2, 0, 1, 2, 0, 1, 2 };
   Cell cells[N_CELLS];
   guint n = title_cells (f, cells);
   gboolean fit = TRUE;
@@ -268,6 +273,37 @@ caution_text (void)
   return hl_figure_caution ();
 }
 
+/* three columns: three full rows; two columns: the last two cells
+ * (units and date, both short) share the right-hand cell of the fourth
+ * row, so the material costs no fifth */
+static guint
+title_rows (guint cols)
+{
+  return (N_CELLS + cols - 2) / cols;
+}
+
+static void
+cell_place (guint   k,
+            guint   cols,
+            double  w0,
+            double  wi,
+            guint  *row,
+            double *x,
+            double *width)
+{
+  guint c = k % cols;
+
+  *row = k / cols;
+  *x = c == 0 ? 0 : w0 + (c - 1) * wi;
+  *width = c == 0 ? w0 : wi;
+  if (cols == 2 && k >= N_CELLS - 2)
+    {
+      *row = title_rows (cols) - 1;
+      *width = wi / 2;
+      *x = w0 + (k == N_CELLS - 1 ? wi / 2 : 0);
+    }
+}
+
 double
 hl_title_block_height (HlFigure *f,
                        double    width)
@@ -277,7 +313,7 @@ hl_title_block_height (HlFigure *f,
   double ch;
 
   hl_text_measure (f->text, HL_FONT_SMALL, c, width - f->text->base, NULL, &ch);
-  return ((N_CELLS + cols - 1) / cols) * cell_height (f) + ch + 0.6 * f->text->base;
+  return title_rows (cols) * cell_height (f) + ch + 0.6 * f->text->base;
 }
 
 void
@@ -286,14 +322,14 @@ hl_title_block_draw (HlFigure     *f,
 {
   cairo_t *cr = f->cr;
   Cell cells[N_CELLS];
-  guint n = title_cells (f, cells), cols = title_columns (f, area->width), rows = (n + cols - 1) / cols;
+  guint n = title_cells (f, cells), cols = title_columns (f, area->width), rows = title_rows (cols);
   double w0 = first_column (cols, area->width);
   double wi = (area->width - w0) / (cols - 1);
   double chh = cell_height (f), pad = 0.5 * f->text->base;
   g_autofree char *caution = caution_text ();
   /* reading order in each layout: names first, then who and when */
-  static const guint order3[N_CELLS] = { 0, 1, 2, 3, 4, 5, 6, 7 };
-  static const guint order2[N_CELLS] = { 0, 1, 3, 2, 6, 7, 4, 5 };
+  static const guint order3[N_CELLS] = { 0, 1, 2, 3, 4, 5, 6, 7, 8 };
+  static const guint order2[N_CELLS] = { 0, 1, 3, 2, 6, 7, 8, 4, 5 };
 
   cairo_save (cr);
   hl_palette_set_source (cr, f->pal->ink);
@@ -313,17 +349,26 @@ hl_title_block_draw (HlFigure     *f,
       cairo_move_to (cr, x, area->y);
       cairo_line_to (cr, x, area->y + rows * chh);
     }
+  if (cols == 2)
+    {
+      cairo_move_to (cr, area->x + w0 + wi / 2, area->y + (rows - 1) * chh);
+      cairo_line_to (cr, area->x + w0 + wi / 2, area->y + rows * chh);
+    }
   cairo_stroke (cr);
   cairo_restore (cr);
 
   for (guint k = 0; k < n; k++)
     {
       const Cell *cell = &cells[cols == 3 ? order3[k] : order2[k]];
-      guint r = k / cols, c = k % cols;
-      double x = area->x + (c == 0 ? 0 : w0 + (c - 1) * wi) + pad;
-      double cw = (c == 0 ? w0 : wi) - 2 * pad;
-      HlRect lab = hl_text_draw_line (f->text, HL_FONT_TINY, cell->label, x, area->y + r * chh + 0.25 * f->text->base,
-                                      cw, f->pal->muted);
+      guint r;
+      double x, cw;
+      HlRect lab;
+
+      cell_place (k, cols, w0, wi, &r, &x, &cw);
+      x += area->x + pad;
+      cw -= 2 * pad;
+      lab = hl_text_draw_line (f->text, HL_FONT_TINY, cell->label, x, area->y + r * chh + 0.25 * f->text->base, cw,
+                               f->pal->muted);
 
       hl_text_draw_line (f->text, HL_FONT_VALUE, cell->value, x, lab.y + lab.height, cw, f->pal->ink);
     }

@@ -2,9 +2,12 @@
  *
  * Landscape sizes get two columns (section and its detail on the left,
  * plot and chart on the right); tall or narrow sizes stack the panels.
- * The base font shrinks within limits until every panel has the room it
- * needs; below that only the section, the verdict and the title block
- * are drawn, so nothing ever overlaps.
+ * The base font shrinks within limits until every panel asked for has
+ * the room it needs; below that the chart, the detail and the section
+ * are left out in turn (the figure says so) to keep the stress plot, and
+ * below that only the section, the verdict and the title block are
+ * drawn, so nothing ever overlaps.  On screen the window shows the title
+ * block and the caution itself: the figure leaves them out.
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -18,13 +21,17 @@
 
 #define FONT_MAX 13.0
 #define FONT_MIN 7.0
+/* on screen the smallest role (0.78 of the base) stays at 9 px */
+#define FONT_MIN_SCREEN 11.6
 #define FONT_TINY 4.0   /* only for the caution on a postage-stamp figure */
 
 typedef struct
 {
   HlFigureLayout layout;
-  HlRect verdict, title, body;
+  HlRect verdict, title, body, note;
   HlRect section, detail, plot, chart;
+  guint shown;      /* HlFigurePanels laid out */
+  guint dropped;    /* asked for, left out for want of room: said in the note */
   gboolean detail_shown;
   HlSide detail_side;
   gboolean verdict_shown, title_shown, caution_only;
@@ -62,24 +69,153 @@ set_font (HlFigure *f,
   f->gap = 0.45 * size;
 }
 
+/* "thinness chart left out: figure too small": what the reader would
+ * otherwise look for */
+static char *
+note_text (guint dropped)
+{
+  static const struct
+  {
+    guint       panel;
+    const char *name;
+  } names[] = {
+    { HL_PANEL_SECTION, N_("section") },
+    { HL_PANEL_DETAIL, N_("wall detail") },
+    { HL_PANEL_PLOT, N_("stress plot") },
+    { HL_PANEL_CHART, N_("thinness chart") },
+  };
+  g_autoptr(GString) list = g_string_new (NULL);
+
+  if (dropped == 0)
+    return NULL;
+  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
+    if (dropped & names[i].panel)
+      g_string_append_printf (list, "%s%s", list->len > 0 ? ", " : "", _(names[i].name));
+  /* TRANSLATORS: %s lists panels of the figure ("stress plot, thinness chart") */
+  return g_strdup_printf (_("%s left out: figure too small"), list->str);
+}
+
+/* the body split among the panels of @l->shown: the section (and its
+ * detail) on the left or on top, the plot and the chart beside or under it */
+static void
+split_body (HlFigure *f,
+            Layout   *l)
+{
+  double fs = f->text->base, gap = 1.2 * fs, colgap = 2.0 * fs;
+  const HlRect *b = &l->body;
+  gboolean sec = (l->shown & HL_PANEL_SECTION) != 0, want_detail = (l->shown & HL_PANEL_DETAIL) != 0;
+  gboolean plot = (l->shown & HL_PANEL_PLOT) != 0, chart = (l->shown & HL_PANEL_CHART) != 0;
+  guint n_right = (plot ? 1 : 0) + (chart ? 1 : 0);
+  gboolean wide = b->width >= 1.15 * b->height;
+  HlRect rest = *b;
+
+  l->layout = wide ? HL_FIGURE_LAYOUT_WIDE : HL_FIGURE_LAYOUT_TALL;
+  l->detail_shown = FALSE;
+  if (sec)
+    {
+      /* the section's share: a column when wide, a row when tall; all
+       * of the body when it is the only panel */
+      HlRect s = *b;
+
+      if (n_right > 0 && wide)
+        {
+          s.width = 0.44 * (b->width - colgap);
+          rest = rect (b->x + s.width + colgap, b->y, b->width - s.width - colgap, b->height);
+        }
+      else if (n_right > 0)
+        {
+          s.height = (n_right == 2 ? 0.38 : 0.5) * (b->height - n_right * gap);
+          rest = rect (b->x, b->y + s.height + gap, b->width, b->height - s.height - gap);
+        }
+      l->section = s;
+      if (want_detail && needs_detail (f, &s))
+        {
+          /* the detail under a column, beside a row */
+          gboolean below = n_right > 0 ? wide : !wide;
+
+          l->detail_shown = TRUE;
+          l->detail_side = below ? HL_SIDE_BELOW : HL_SIDE_RIGHT;
+          if (below)
+            {
+              l->section.height = 0.52 * (s.height - gap);
+              l->detail = rect (s.x, s.y + l->section.height + gap, s.width, s.height - l->section.height - gap);
+            }
+          else
+            {
+              l->section.width = 0.46 * (s.width - colgap);
+              l->detail = rect (s.x + l->section.width + colgap, s.y, s.width - l->section.width - colgap, s.height);
+            }
+        }
+    }
+  if (n_right == 2)
+    {
+      /* stacked in a column or under the section; side by side when
+       * they have the body to themselves and it is wide */
+      if (!sec && wide)
+        {
+          double w = (rest.width - colgap) / 2;
+
+          l->plot = rect (rest.x, rest.y, w, rest.height);
+          l->chart = rect (rest.x + w + colgap, rest.y, rest.width - w - colgap, rest.height);
+        }
+      else
+        {
+          double ph = (sec && !wide ? 0.31 / 0.62 : 0.5) * (rest.height - gap);
+
+          l->plot = rect (rest.x, rest.y, rest.width, ph);
+          l->chart = rect (rest.x, rest.y + ph + gap, rest.width, rest.height - ph - gap);
+        }
+    }
+  else if (plot)
+    l->plot = rest;
+  else if (chart)
+    l->chart = rest;
+}
+
+/* the detail is only missed where the section would have needed one,
+ * and it goes with the section: neither is worth a word otherwise */
+static void
+settle_dropped (HlFigure *f,
+                Layout   *l)
+{
+  if (l->dropped & HL_PANEL_SECTION)
+    l->dropped &= ~HL_PANEL_DETAIL;
+  else if ((l->dropped & HL_PANEL_DETAIL) && !needs_detail (f, &l->section))
+    l->dropped &= ~HL_PANEL_DETAIL;
+}
+
 static gboolean
 plan (HlFigure *f,
       double    width,
       double    height,
+      guint     panels,
+      guint     dropped,
       Layout   *l)
 {
-  double fs = f->text->base, m = 0.9 * fs, gap = 1.2 * fs, colgap = 2.0 * fs;
+  double fs = f->text->base, m = 0.9 * fs, gap = 1.2 * fs;
   double inner_w = width - 2 * m;
   double vh = f->sol != NULL ? hl_verdict_height (f, inner_w) : 0;
-  double th = hl_title_block_height (f, inner_w);
+  gboolean screen = f->ctx->screen;
+  double th = screen ? 0 : hl_title_block_height (f, inner_w);
+  double nh = 0, bottom;
+  g_autofree char *note = f->sol != NULL ? note_text (dropped) : NULL;
   HlRect *b = &l->body;
 
   l->verdict = rect (m, m, inner_w, vh);
   l->title = rect (m, height - m - th, inner_w, th);
   l->verdict_shown = f->sol != NULL;
-  l->title_shown = TRUE;
+  l->title_shown = !screen;
   l->caution_only = FALSE;
-  *b = rect (m, m + (vh > 0 ? vh + gap : 0), inner_w, height - 2 * m - th - gap - (vh > 0 ? vh + gap : 0));
+  l->shown = panels;
+  l->dropped = f->sol != NULL ? dropped : 0;
+  bottom = height - m - (th > 0 ? th + gap : 0);
+  if (note != NULL)
+    {
+      hl_text_measure (f->text, HL_FONT_SMALL, note, inner_w, NULL, &nh);
+      l->note = rect (m, bottom - nh, inner_w, nh);
+      bottom -= nh + f->gap;
+    }
+  *b = rect (m, m + (vh > 0 ? vh + gap : 0), inner_w, bottom - m - (vh > 0 ? vh + gap : 0));
   l->detail_shown = FALSE;
   if (b->height < 4 * fs || b->width < 10 * fs)
     return FALSE;
@@ -88,78 +224,46 @@ plan (HlFigure *f,
       l->layout = HL_FIGURE_LAYOUT_PROBLEM;
       return TRUE;
     }
-
-  if (b->width >= 1.15 * b->height)
-    {
-      double lw = 0.44 * (b->width - colgap), rw = b->width - colgap - lw;
-      double ph = (b->height - gap) / 2;
-      HlRect left = rect (b->x, b->y, lw, b->height);
-
-      l->layout = HL_FIGURE_LAYOUT_WIDE;
-      l->plot = rect (b->x + lw + colgap, b->y, rw, ph);
-      l->chart = rect (b->x + lw + colgap, b->y + ph + gap, rw, b->height - ph - gap);
-      l->section = left;
-      if (needs_detail (f, &left))
-        {
-          double sh = 0.52 * (b->height - gap);
-
-          l->section = rect (b->x, b->y, lw, sh);
-          l->detail = rect (b->x, b->y + sh + gap, lw, b->height - sh - gap);
-          l->detail_shown = TRUE;
-          l->detail_side = HL_SIDE_BELOW;
-        }
-    }
-  else
-    {
-      double avail = b->height - 2 * gap;
-      double sh = 0.38 * avail, ph = 0.31 * avail;
-      HlRect row = rect (b->x, b->y, b->width, sh);
-
-      l->layout = HL_FIGURE_LAYOUT_TALL;
-      l->section = row;
-      l->plot = rect (b->x, b->y + sh + gap, b->width, ph);
-      l->chart = rect (b->x, b->y + sh + ph + 2 * gap, b->width, avail - sh - ph);
-      if (needs_detail (f, &row))
-        {
-          double sw = 0.46 * (b->width - colgap);
-
-          l->section = rect (b->x, b->y, sw, sh);
-          l->detail = rect (b->x + sw + colgap, b->y, b->width - sw - colgap, sh);
-          l->detail_shown = TRUE;
-          l->detail_side = HL_SIDE_RIGHT;
-        }
-    }
-  return l->section.width >= 12 * fs && l->section.height >= 12 * fs && hl_plot_fits (f, &l->plot)
-         && hl_chart_fits (f, &l->chart) && (!l->detail_shown || hl_detail_fits (f, &l->detail));
+  split_body (f, l);
+  settle_dropped (f, l);
+  return (!(panels & HL_PANEL_SECTION) || hl_section_fits (f, &l->section, l->detail_shown))
+         && (!(panels & HL_PANEL_PLOT) || hl_plot_fits (f, &l->plot))
+         && (!(panels & HL_PANEL_CHART) || hl_chart_fits (f, &l->chart))
+         && (!l->detail_shown || hl_detail_fits (f, &l->detail));
 }
 
-/* too small for the panels: the section alone fills the body; smaller
+/* too small for the plot: the section alone fills the body; smaller
  * still, the verdict and the caution; at the very least the caution */
 static gboolean
 plan_small (HlFigure *f,
             double    width,
             double    height,
+            guint     panels,
             Layout   *l)
 {
   double m = 0.9 * f->text->base, inner_w = width - 2 * m;
   double vh, ch;
   g_autofree char *caution = NULL;
 
-  plan (f, width, height, l);
+  plan (f, width, height, panels & HL_PANEL_SECTION, panels & ~HL_PANEL_SECTION, l);
   l->layout = HL_FIGURE_LAYOUT_SMALL;
   l->section = l->body;
   l->detail_shown = FALSE;
+  settle_dropped (f, l);
   if (l->body.height >= 6 * f->text->base && l->body.width >= 8 * f->text->base)
     return TRUE;
   l->title_shown = FALSE;
-  l->caution_only = TRUE;
+  l->caution_only = !f->ctx->screen;
+  l->dropped = 0;
   caution = hl_figure_caution ();
   for (double fs = f->text->base; fs >= FONT_TINY; fs *= 0.9)
     {
       set_font (f, fs);
       m = 0.9 * fs;
       inner_w = width - 2 * m;
-      hl_text_measure (f->text, HL_FONT_SMALL, caution, inner_w, NULL, &ch);
+      ch = 0;
+      if (l->caution_only)
+        hl_text_measure (f->text, HL_FONT_SMALL, caution, inner_w, NULL, &ch);
       vh = f->sol != NULL ? hl_verdict_height (f, inner_w) : 0;
       l->title = rect (m, height - m - ch, inner_w, ch);
       l->verdict = rect (m, m, inner_w, vh);
@@ -177,6 +281,38 @@ start_font (double width,
   return CLAMP (MIN (width, height) / 56.0, FONT_MIN, FONT_MAX);
 }
 
+/* every panel asked for at the largest font that holds them, down to
+ * @lo; then, at @lo, fewer panels: the chart goes first, then the
+ * detail, then the section, so the stress plot stays longest */
+static gboolean
+plan_fonts (HlFigure *f,
+            double    width,
+            double    height,
+            guint     want,
+            double    lo,
+            Layout   *l)
+{
+  const guint drops[] = { HL_PANEL_CHART, HL_PANEL_CHART | HL_PANEL_DETAIL,
+                          HL_PANEL_CHART | HL_PANEL_DETAIL | HL_PANEL_SECTION };
+
+  for (double fs = MAX (start_font (width, height), lo); fs >= lo - 1e-9; fs *= 0.92)
+    {
+      set_font (f, fs);
+      if (plan (f, width, height, want, 0, l))
+        return TRUE;
+    }
+  set_font (f, lo);
+  for (guint i = 0; i < G_N_ELEMENTS (drops); i++)
+    {
+      guint keep = want & ~drops[i];
+
+      if (keep != want && (keep & (HL_PANEL_SECTION | HL_PANEL_PLOT | HL_PANEL_CHART)) != 0
+          && plan (f, width, height, keep, want & ~keep, l))
+        return TRUE;
+    }
+  return FALSE;
+}
+
 void
 hl_figure_draw_full (cairo_t               *cr,
                      double                 width,
@@ -188,6 +324,7 @@ hl_figure_draw_full (cairo_t               *cr,
   HlFigure f = { 0 };
   Layout l = { 0 };
   gboolean ok = FALSE, body = TRUE;
+  guint want;
 
   g_return_if_fail (cr != NULL && ctx != NULL);
 
@@ -201,22 +338,35 @@ hl_figure_draw_full (cairo_t               *cr,
   hl_figure_geometry_clear (f.geom);
   f.text = hl_text_new (cr, start_font (width, height));
   if (geometry != NULL)
-    f.text->boxes = g_array_new (FALSE, FALSE, sizeof (HlRect));
-
-  for (double fs = start_font (width, height); fs >= FONT_MIN - 1e-9 && !ok; fs *= 0.92)
     {
-      set_font (&f, fs);
-      ok = plan (&f, width, height, &l);
+      f.text->boxes = g_array_new (FALSE, FALSE, sizeof (HlRect));
+      f.text->wrapped = g_ptr_array_new_with_free_func (g_object_unref);
     }
+
+  want = (ctx->panels & HL_PANELS_ALL) != 0 ? ctx->panels & HL_PANELS_ALL : HL_PANELS_ALL;
+  /* the detail magnifies a piece of the section: it comes with it */
+  if (!(want & HL_PANEL_SECTION))
+    want &= ~HL_PANEL_DETAIL;
+  if (want == 0)
+    want = HL_PANEL_SECTION;
+  /* on screen, readable text first; smaller text only when even the
+   * stress plot alone does not fit at 9 px */
+  if (ctx->screen)
+    ok = plan_fonts (&f, width, height, want, FONT_MIN_SCREEN, &l);
+  if (!ok)
+    ok = plan_fonts (&f, width, height, want, FONT_MIN, &l);
   if (!ok)
     {
       set_font (&f, FONT_MIN);
-      body = plan_small (&f, width, height, &l);
+      body = plan_small (&f, width, height, want, &l);
       if (f.sol == NULL)
         l.layout = HL_FIGURE_LAYOUT_PROBLEM;
     }
   f.geom->layout = l.layout;
   f.geom->font_size = f.text->base;
+  f.geom->dropped = body ? l.dropped : 0;
+  if (l.title_shown)
+    f.geom->title_block = l.title;
 
   cairo_save (cr);
   /* a quarter of a device unit keeps curves smooth and flattens the big
@@ -237,25 +387,33 @@ hl_figure_draw_full (cairo_t               *cr,
 
       hl_text_draw (f.text, HL_FONT_SMALL, caution, l.title.x, l.title.y, 0, 0, l.title.width, f.pal->ink);
     }
+  if (body && l.dropped != 0)
+    {
+      g_autofree char *note = note_text (l.dropped);
+
+      hl_text_draw (f.text, HL_FONT_SMALL, note, l.note.x, l.note.y, 0, 0, l.note.width, f.pal->muted);
+    }
   if (body && f.sol == NULL)
     hl_problem_draw (&f, &l.body);
   else if (body)
     {
-      hl_section_draw (&f, &l.section, l.detail_shown ? &l.detail : NULL, l.detail_side);
+      if (l.shown & HL_PANEL_SECTION)
+        hl_section_draw (&f, &l.section, l.detail_shown ? &l.detail : NULL, l.detail_side);
       if (l.detail_shown)
         hl_detail_draw (&f, &l.detail);
-      if (l.layout != HL_FIGURE_LAYOUT_SMALL)
-        {
-          hl_plot_draw (&f, &l.plot);
-          hl_chart_draw (&f, &l.chart);
-        }
+      if (l.layout != HL_FIGURE_LAYOUT_SMALL && (l.shown & HL_PANEL_PLOT))
+        hl_plot_draw (&f, &l.plot);
+      if (l.layout != HL_FIGURE_LAYOUT_SMALL && (l.shown & HL_PANEL_CHART))
+        hl_chart_draw (&f, &l.chart);
     }
   cairo_restore (cr);
 
   if (geometry != NULL)
     {
       geometry->text_boxes = f.text->boxes;
+      geometry->wrapped = f.text->wrapped;
       f.text->boxes = NULL;
+      f.text->wrapped = NULL;
     }
   hl_text_free (f.text);
   g_clear_pointer (&f.hatch_tile, cairo_surface_destroy);
@@ -281,6 +439,7 @@ hl_figure_context_init (HlFigureContext     *ctx,
   ctx->units = project != NULL ? project->display_units : HL_UNIT_SYSTEM_SI;
   ctx->style = HL_FIGURE_STYLE_LIGHT;
   ctx->locale_numbers = target == HL_FIGURE_TARGET_SCREEN;
+  ctx->screen = target == HL_FIGURE_TARGET_SCREEN;
 }
 
 void
@@ -299,5 +458,7 @@ hl_figure_geometry_clear (HlFigureGeometry *g)
     return;
   if (g->text_boxes != NULL)
     g_array_unref (g->text_boxes);
+  if (g->wrapped != NULL)
+    g_ptr_array_unref (g->wrapped);
   memset (g, 0, sizeof *g);
 }

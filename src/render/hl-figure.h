@@ -47,6 +47,9 @@ typedef struct
                                    * corroded @solution, for the sheet; the
                                    * sheet solves it itself when NULL */
   guint             panels;       /* HlFigurePanels to draw; 0: all */
+  gboolean          screen;       /* the window's canvas: no title block
+                                   * or caution (the window shows both),
+                                   * the plots get the room */
 } HlFigureContext;
 
 typedef enum

@@ -32,7 +32,7 @@ typedef enum
 typedef struct
 {
   HlRgb paper, ink, muted, grid, frame;
-  HlRgb hoop, thin_hoop, radial, axial, von_mises;
+  HlRgb hoop, thin_hoop, radial, axial, von_mises, tresca;
   HlRgb band, rule, marker, marker_edge;
   HlRgb corrosion, corrosion_hatch;
   HlRgb problem_fill, problem_edge;

@@ -7,6 +7,7 @@
 #include "hl-text.h"
 
 #include <math.h>
+#include <string.h>
 
 static const struct
 {
@@ -97,6 +98,8 @@ hl_text_free (HlText *t)
     pango_font_description_free (t->fonts[i]);
   if (t->boxes != NULL)
     g_array_unref (t->boxes);
+  if (t->wrapped != NULL)
+    g_ptr_array_unref (t->wrapped);
   g_free (t);
 }
 
@@ -114,6 +117,64 @@ hl_text_size (HlText     *t,
               HlFontRole  role)
 {
   return t->base * roles[role].scale;
+}
+
+static gboolean
+overflows (PangoLayout *l,
+           double       wrap)
+{
+  for (GSList *it = pango_layout_get_lines_readonly (l); it != NULL; it = it->next)
+    {
+      PangoRectangle logical;
+
+      pango_layout_line_get_extents (it->data, NULL, &logical);
+      if ((double) logical.width / PANGO_SCALE > wrap + 0.01)
+        return TRUE;
+    }
+  return FALSE;
+}
+
+/* A word wider than the line sticks out of it with PANGO_WRAP_WORD: the
+ * string is set a step smaller until its longest word fits (a long
+ * German compound in a narrow key); past the last step one line cut
+ * with an ellipsis, never a word broken inside. */
+static void
+fit_words (PangoLayout                *l,
+           const PangoFontDescription *font,
+           double                      wrap)
+{
+  g_autoptr(PangoFontDescription) smaller = NULL;
+  double size = (double) pango_font_description_get_size (font);
+
+  if (!overflows (l, wrap))
+    return;
+  smaller = pango_font_description_copy (font);
+  for (int step = 1; step <= 5; step++)
+    {
+      pango_font_description_set_absolute_size (smaller, size * pow (0.9, step));
+      pango_layout_set_font_description (l, smaller);
+      if (!overflows (l, wrap))
+        return;
+    }
+  pango_layout_set_font_description (l, font);
+  pango_layout_set_ellipsize (l, PANGO_ELLIPSIZE_END);
+}
+
+/* Unicode lets a line break after a slash: "R/" and "t" would stand on
+ * two lines.  A word joiner (U+2060, no width) after each slash keeps
+ * "R/t" and "e/De" whole. */
+static char *
+join_slashes (const char *str)
+{
+  GString *s = g_string_new (NULL);
+
+  for (const char *p = str; *p != '\0'; p++)
+    {
+      g_string_append_c (s, *p);
+      if (*p == '/' && p[1] != '\0' && p[1] != ' ')
+        g_string_append (s, "\u2060");
+    }
+  return g_string_free (s, FALSE);
 }
 
 /* the laid-out string: from the cache, or made and kept */
@@ -147,10 +208,22 @@ prepare (HlText     *t,
   else if (wrap > 0)
     {
       pango_layout_set_width (l, (int) (wrap * PANGO_SCALE));
-      pango_layout_set_wrap (l, PANGO_WRAP_WORD_CHAR);
+      /* words only: a break between letters needs a hyphen at a point
+       * the language allows, which Pango cannot know (it would write
+       * "Korrosionszuschl-ag") */
+      pango_layout_set_wrap (l, PANGO_WRAP_WORD);
     }
   pango_layout_set_alignment (l, align);
-  pango_layout_set_text (l, str, -1);
+  if (wrap > 0 && strchr (str, '/') != NULL)
+    {
+      g_autofree char *joined = join_slashes (str);
+
+      pango_layout_set_text (l, joined, -1);
+    }
+  else
+    pango_layout_set_text (l, str, -1);
+  if (ellipsize_width <= 0 && wrap > 0)
+    fit_words (l, t->fonts[role], wrap);
   g_hash_table_insert (c->layouts, g_steal_pointer (&key), l);
   return l;
 }
@@ -170,6 +243,23 @@ hl_text_measure (HlText     *t,
     *width = (double) logical.width / PANGO_SCALE;
   if (height != NULL)
     *height = (double) logical.height / PANGO_SCALE;
+}
+
+double
+hl_text_longest_word (HlText     *t,
+                      HlFontRole  role,
+                      const char *str)
+{
+  g_auto(GStrv) words = g_strsplit_set (str, " \n", -1);
+  double widest = 0, w;
+
+  for (guint i = 0; words[i] != NULL; i++)
+    if (words[i][0] != '\0')
+      {
+        hl_text_measure (t, role, words[i], 0, &w, NULL);
+        widest = MAX (widest, w);
+      }
+  return widest;
 }
 
 static HlRect
@@ -212,7 +302,11 @@ hl_text_draw (HlText     *t,
               double      wrap,
               HlRgb       colour)
 {
-  return show (t, prepare (t, role, str, wrap, ax, 0), x, y, ax, ay, colour);
+  PangoLayout *layout = prepare (t, role, str, wrap, ax, 0);
+
+  if (wrap > 0 && t->wrapped != NULL)
+    g_ptr_array_add (t->wrapped, g_object_ref (layout));
+  return show (t, layout, x, y, ax, ay, colour);
 }
 
 HlRect

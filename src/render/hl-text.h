@@ -39,6 +39,7 @@ typedef struct
   PangoFontDescription *fonts[HL_N_FONTS];
   double                base;
   GArray               *boxes;   /* HlRect of every string drawn, or NULL */
+  GPtrArray            *wrapped; /* with @boxes: the layouts of wrapped strings */
 } HlText;
 
 HlText *hl_text_new      (cairo_t    *cr,
@@ -56,6 +57,12 @@ void    hl_text_measure  (HlText     *text,
                           double      wrap,
                           double     *width,
                           double     *height);
+
+/* width of the widest word of @str in @role: the narrowest wrap that
+ * keeps every word whole at this size */
+double  hl_text_longest_word (HlText     *text,
+                              HlFontRole  role,
+                              const char *str);
 
 /* Draws @str with its box anchored at (@x, @y): @ax, @ay in [0, 1] pick
  * the anchor inside the box (0, 0 top left; 0.5, 0.5 centre).  Wrapped

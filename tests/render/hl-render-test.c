@@ -61,6 +61,37 @@ hl_rt_solve (const HlShellInputs *in)
   return sol;
 }
 
+HlFigureContext
+hl_rt_context (const HlProject  *project,
+               const HlSolution *sol,
+               HlFigureStyle     style)
+{
+  HlFigureContext ctx = { 0 };
+
+  ctx.project = project;
+  ctx.solution = sol;
+  ctx.units = HL_UNIT_SYSTEM_SI;
+  ctx.style = style;
+  ctx.export_date = "2026-12-01";
+  return ctx;
+}
+
+cairo_surface_t *
+hl_rt_render_context (const HlFigureContext *ctx,
+                      int                    width,
+                      int                    height,
+                      HlFigureGeometry      *geometry)
+{
+  cairo_surface_t *s = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, width, height);
+  cairo_t *cr = cairo_create (s);
+
+  hl_figure_draw_full (cr, width, height, ctx, geometry);
+  g_assert_cmpint (cairo_status (cr), ==, CAIRO_STATUS_SUCCESS);
+  cairo_destroy (cr);
+  cairo_surface_flush (s);
+  return s;
+}
+
 cairo_surface_t *
 hl_rt_render (const HlProject  *project,
               const HlSolution *sol,
@@ -69,20 +100,9 @@ hl_rt_render (const HlProject  *project,
               HlFigureStyle     style,
               HlFigureGeometry *geometry)
 {
-  cairo_surface_t *s = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, width, height);
-  cairo_t *cr = cairo_create (s);
-  HlFigureContext ctx = { 0 };
+  HlFigureContext ctx = hl_rt_context (project, sol, style);
 
-  ctx.project = project;
-  ctx.solution = sol;
-  ctx.units = HL_UNIT_SYSTEM_SI;
-  ctx.style = style;
-  ctx.export_date = "2026-12-01";
-  hl_figure_draw_full (cr, width, height, &ctx, geometry);
-  g_assert_cmpint (cairo_status (cr), ==, CAIRO_STATUS_SUCCESS);
-  cairo_destroy (cr);
-  cairo_surface_flush (s);
-  return s;
+  return hl_rt_render_context (&ctx, width, height, geometry);
 }
 
 HlRgb

@@ -33,6 +33,15 @@ cairo_surface_t *hl_rt_render      (const HlProject  *project,
                                     HlFigureStyle     style,
                                     HlFigureGeometry *geometry);
 
+/* the context hl_rt_render() draws with: SI, a fixed date, paper */
+HlFigureContext  hl_rt_context     (const HlProject  *project,
+                                    const HlSolution *sol,
+                                    HlFigureStyle     style);
+cairo_surface_t *hl_rt_render_context (const HlFigureContext *ctx,
+                                       int                    width,
+                                       int                    height,
+                                       HlFigureGeometry      *geometry);
+
 /* colour at a pixel, 0..1 */
 HlRgb            hl_rt_pixel       (cairo_surface_t  *surface,
                                     int               x,

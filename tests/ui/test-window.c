@@ -554,6 +554,145 @@ test_title_and_revisions (void)
   discard_window (window);
 }
 
+/* ---- the canvas: zoom, panning room, no title block (issue 11) ----
+ * Ctrl+plus, Ctrl+minus and Ctrl+0 are the desktop's zoom keys (GNOME
+ * Human Interface Guidelines, keyboard: standard shortcuts); the window
+ * offers them as actions, lists them in its shortcuts window and zooms
+ * inside a scrolled window, so a zoomed figure pans.  The canvas leaves
+ * out the title block and the caution the window shows itself, while
+ * the printout keeps them. */
+
+static void
+zoom (HlWindow   *window,
+      const char *action)
+{
+  activate (window, action, NULL);
+  /* the new size request is laid out and the view scrolled */
+  hl_ui_run_for (150);
+}
+
+static gboolean
+enabled (HlWindow   *window,
+         const char *action)
+{
+  return g_action_group_get_action_enabled (G_ACTION_GROUP (window), action);
+}
+
+static GtkScrolledWindow *
+scroller (HlCanvas *canvas)
+{
+  GtkWidget *sw = gtk_widget_get_ancestor (GTK_WIDGET (canvas), GTK_TYPE_SCROLLED_WINDOW);
+
+  g_assert_nonnull (sw);
+  return GTK_SCROLLED_WINDOW (sw);
+}
+
+static void
+test_zoom_actions (void)
+{
+  HlWindow *window = open_demo ();
+  HlCanvas *canvas = hl_window_get_canvas (window);
+  GtkScrolledWindow *sw = scroller (canvas);
+  int fit_w, fit_h, view_w;
+  double upper;
+
+  hl_ui_run_for (300);
+  fit_w = gtk_widget_get_width (GTK_WIDGET (canvas));
+  fit_h = gtk_widget_get_height (GTK_WIDGET (canvas));
+  view_w = gtk_widget_get_width (GTK_WIDGET (sw));
+  g_assert_cmpint (fit_w, >, 300);
+  /* fitted: the figure fills the view, nothing to zoom out of */
+  g_assert_cmpfloat (hl_canvas_get_zoom (canvas), ==, 1.0);
+  g_assert_cmpint (fit_w, ==, view_w);
+  g_assert_false (enabled (window, "zoom-out"));
+  g_assert_false (enabled (window, "zoom-fit"));
+
+  /* zoomed in twice by 1.25: the canvas grows past the view and the
+   * view can scroll over it */
+  zoom (window, "zoom-in");
+  zoom (window, "zoom-in");
+  g_assert_cmpfloat_with_epsilon (hl_canvas_get_zoom (canvas), 1.5625, 1e-9);
+  g_assert_cmpint (gtk_widget_get_width (GTK_WIDGET (canvas)), >=, (int) (1.5 * fit_w));
+  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (canvas)), >=, (int) (1.5 * fit_h));
+  g_assert_cmpint (gtk_widget_get_width (GTK_WIDGET (sw)), ==, view_w);
+  upper = gtk_adjustment_get_upper (gtk_scrolled_window_get_hadjustment (sw));
+  g_assert_cmpfloat (upper, >, gtk_adjustment_get_page_size (gtk_scrolled_window_get_hadjustment (sw)));
+  /* zoomed about the view's centre: the view has scrolled into the figure */
+  g_assert_cmpfloat (gtk_adjustment_get_value (gtk_scrolled_window_get_hadjustment (sw)), >, 0);
+  g_assert_true (enabled (window, "zoom-out"));
+
+  zoom (window, "zoom-out");
+  g_assert_cmpfloat_with_epsilon (hl_canvas_get_zoom (canvas), 1.25, 1e-9);
+  zoom (window, "zoom-fit");
+  g_assert_cmpfloat (hl_canvas_get_zoom (canvas), ==, 1.0);
+  g_assert_cmpint (gtk_widget_get_width (GTK_WIDGET (canvas)), ==, view_w);
+  g_assert_false (enabled (window, "zoom-fit"));
+
+  /* the zoom stops somewhere: a figure magnified without end is no use */
+  for (int i = 0; i < 40 && enabled (window, "zoom-in"); i++)
+    zoom (window, "zoom-in");
+  g_assert_false (enabled (window, "zoom-in"));
+  zoom (window, "zoom-fit");
+  discard_window (window);
+}
+
+static void
+test_zoom_keys (void)
+{
+  static const struct
+  {
+    const char *action, *accel;
+  } keys[] = {
+    { "win.zoom-in", "<Control>plus" },
+    { "win.zoom-out", "<Control>minus" },
+    { "win.zoom-fit", "<Control>0" },
+  };
+  g_autoptr(GtkBuilder) builder = gtk_builder_new_from_resource ("/org/hoopline/Hoopline/gtk/help-overlay.ui");
+  GSList *objects = gtk_builder_get_objects (builder);
+
+  for (guint i = 0; i < G_N_ELEMENTS (keys); i++)
+    {
+      g_auto(GStrv) accels = gtk_application_get_accels_for_action (GTK_APPLICATION (app), keys[i].action);
+      gboolean listed = FALSE;
+      guint key, want_key;
+      GdkModifierType mods, want_mods;
+
+      g_assert_true (gtk_accelerator_parse (keys[i].accel, &want_key, &want_mods));
+      g_assert_nonnull (accels);
+      g_assert_nonnull (accels[0]);
+      g_assert_true (gtk_accelerator_parse (accels[0], &key, &mods));
+      g_assert_cmpuint (key, ==, want_key);
+      g_assert_cmpuint (mods, ==, want_mods);
+      /* and the shortcuts window lists the action, so the keys show */
+      for (GSList *it = objects; it != NULL; it = it->next)
+        if (GTK_IS_SHORTCUTS_SHORTCUT (it->data))
+          {
+            g_autofree char *name = NULL;
+
+            g_object_get (it->data, "action-name", &name, NULL);
+            listed = listed || g_strcmp0 (name, keys[i].action) == 0;
+          }
+      g_assert_true (listed);
+    }
+  g_slist_free (objects);
+}
+
+static void
+test_screen_context (void)
+{
+  HlWindow *window = open_demo ();
+  HlFigureContext ctx;
+
+  hl_ui_run_for (200);
+  /* the window shows the caution and the project itself: its figure
+   * leaves out the title block; print and export keep it */
+  hl_canvas_build_context (hl_window_get_canvas (window), &ctx);
+  g_assert_true (ctx.screen);
+  hl_figure_context_init (&ctx, NULL, NULL, NULL, NULL, "x", HL_FIGURE_TARGET_PAPER);
+  g_assert_false (ctx.screen);
+  discard_window (window);
+}
+
 int
 main (int    argc,
       char **argv)
@@ -589,6 +728,9 @@ main (int    argc,
   g_test_add_func ("/window/open-twice-reuses-window", test_open_twice_reuses_window);
   g_test_add_func ("/window/copy-results", test_copy_results);
   g_test_add_func ("/window/title-and-revisions", test_title_and_revisions);
+  g_test_add_func ("/window/canvas/zoom-actions", test_zoom_actions);
+  g_test_add_func ("/window/canvas/zoom-keys", test_zoom_keys);
+  g_test_add_func ("/window/canvas/screen-context", test_screen_context);
   status = g_test_run ();
   g_clear_object (&app);
   return status;
