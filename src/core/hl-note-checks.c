@@ -17,6 +17,26 @@
 
 static const double cols_check[] = { 0.31, 0.25, 0.25, 0.19 };
 static const double cols_summary[] = { 0.58, 0.16, 0.13, 0.13 };
+
+/* The method and its governing clause without saying a word twice:
+ * "Lamé, von Mises = S Ej" (not "Lamé elastic, Lamé, …"), "ASME VIII-1
+ * UG-27(c)(1)" (not "ASME VIII-1 UG-27, UG-27(c)(1)"). */
+static char *
+method_label (const char *name,
+              const char *clause)
+{
+  const char *last = strrchr (name, ' ');
+  g_autofree char *first = g_strndup (name, strcspn (name, " "));
+
+  if (clause == NULL || strcmp (clause, name) == 0)
+    return g_strdup (name);
+  if (g_str_has_prefix (clause, first))
+    return g_strdup (clause);
+  if (last != NULL && g_str_has_prefix (clause, last + 1))
+    return g_strdup_printf ("%.*s %s", (int) (last - name), name, clause);
+  return g_strdup_printf ("%s, %s", name, clause);
+}
+
 static const double cols_step[] = { 0.26, 0.74 };
 
 /* Does the wall pass: the verdict in words first, then every method */
@@ -72,8 +92,9 @@ hl_note_design_check (GArray          *rows,
       g_autofree char *mawp = hl_note_quantity (ctx, mc->mawp, HL_ROW_STRESS, 4);
       g_autofree char *design = hl_note_quantity (ctx, mc->design_pressure, HL_ROW_STRESS, 4);
       g_autofree char *um = hl_note_percent (ctx, mc->utilisation_pressure);
-      g_autofree char *name = m == (guint) c->basis ? g_strdup_printf (_("%s (design basis), %s"), mc->name, mc->clause)
-                                                    : g_strdup_printf ("%s, %s", mc->name, mc->clause);
+      g_autofree char *label = method_label (mc->name, mc->clause);
+      g_autofree char *name = m == (guint) c->basis ? g_strdup_printf (_("%s (design basis)"), label)
+                                                    : g_strdup (label);
       g_autofree char *t = g_strdup_printf ("%s / %s", req, avail);
       g_autofree char *p = g_strdup_printf ("%s / %s", mawp, design);
       g_autofree char *r = g_strdup_printf ("%s, %s", um, hl_note_check_word (mc->result));
