@@ -63,7 +63,7 @@ header (GArray          *rows,
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Design basis"), basis);
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Revision"), revision);
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Units"),
-               ctx->units == HL_UNIT_SYSTEM_US ? _("US customary (in, psi)") : _("SI (mm, MPa)"));
+               _(hl_unit_system_words (ctx->units)));
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Exported"), ctx->date);
   hl_note_add (rows, HL_NOTE_BOX, NULL, FALSE, 1, caution);
 }

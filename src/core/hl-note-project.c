@@ -97,7 +97,7 @@ hl_note_project_summary (const HlProject *project,
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Revision"), revision);
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Shells"), count);
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Units"),
-               units == HL_UNIT_SYSTEM_US ? _("US customary (in, psi)") : _("SI (mm, MPa)"));
+               _(hl_unit_system_words (units)));
   hl_note_add (rows, HL_NOTE_TABLE, cols_pair, FALSE, 2, _("Exported"), export_date);
   if (project != NULL && project->description != NULL && project->description[0])
     hl_note_add (rows, HL_NOTE_PARAGRAPH, NULL, FALSE, 1, project->description);

@@ -197,7 +197,7 @@ title_cells (HlFigure *f,
                                                                                                       : _("(not given)")) };
   cells[2] = (Cell) { _("Revision"), rev != NULL ? g_strdup_printf ("%u, %s", rev->number, rev->date) : g_strdup (_("none")) };
   cells[3] = (Cell) { _("Shell"), sh != NULL ? g_strdup_printf (_("%s (id %s)"), sh->name, sh->id) : g_strdup ("—") };
-  cells[4] = (Cell) { _("Units"), g_strdup (f->units == HL_UNIT_SYSTEM_US ? "in, psi" : "mm, MPa") };
+  cells[4] = (Cell) { _("Units"), g_strdup (_(hl_unit_system_words (f->units))) };
   cells[5] = (Cell) { _("Exported"), f->ctx->export_date != NULL ? g_strdup (f->ctx->export_date)
                                                               : g_date_time_format (now, "%Y-%m-%d") };
   cells[6] = (Cell) { _("Design basis"), g_strdup ("—") };
