@@ -141,7 +141,10 @@ block_height (Sheet *s,
   guint n = s->rows->len, end = i, extra = 0;
   double need = s->heights[i];
 
-  while (end + 1 < n && keeps_with_next (hl_note_row (s->rows, end)))
+  /* the boxes of the sign-off block stand together: a checker signs
+   * one block, not two halves on two pages */
+  while (end + 1 < n && (keeps_with_next (hl_note_row (s->rows, end))
+                         || (hl_note_row (s->rows, end)->boxed && hl_note_row (s->rows, end + 1)->boxed)))
     {
       end++;
       need += s->heights[end];
