@@ -144,7 +144,7 @@ show_method (HlChecksTable      *self,
   g_autofree char *reason = hl_figure_check_reason (mc, units, TRUE);
 
   /* the design basis is the method that decides */
-  name = m == (guint) sol->check.basis ? g_strdup_printf (_("%s (design basis)"), mc->name) : g_strdup (mc->name);
+  name = m == (guint) sol->check.basis ? g_strdup_printf (_("%s (design basis)"), _(mc->name)) : g_strdup (_(mc->name));
   set_cell (self, row, 0, name, mc->clause);
   set_cell (self, row, 1, required, _("nominal thickness needed, corrosion allowance and mill undertolerance included"));
   set_cell (self, row, 2, available, sol->check.mill_text[0] != '\0' ? sol->check.mill_text : NULL);
@@ -198,13 +198,13 @@ show_verdicts (HlChecksTable    *self,
   set_badge (self->design_badge, result_word (c->verdict), result_kind (c->verdict));
   if (c->bursts || c->yields)
     /* TRANSLATORS: %s is the design basis ("ASME VIII-1 UG-27") */
-    design = g_strdup_printf (_("Fails whatever the basis (%s): see below"), b->name);
+    design = g_strdup_printf (_("Fails whatever the basis (%s): see below"), _(b->name));
   else if (b->result == HL_CHECK_NOT_APPLICABLE)
     /* TRANSLATORS: %s is the design basis ("ASME VIII-1 UG-27") */
-    design = g_strdup_printf (_("Not shown to pass: the design basis %s does not apply"), b->name);
+    design = g_strdup_printf (_("Not shown to pass: the design basis %s does not apply"), _(b->name));
   else
     /* TRANSLATORS: utilisation in percent, the governing clause, the design basis */
-    design = g_strdup_printf (_("Utilisation %s by %s (design basis %s)"), u, c->governing, b->name);
+    design = g_strdup_printf (_("Utilisation %s by %s (design basis %s)"), u, c->governing, _(b->name));
   gtk_label_set_text (GTK_LABEL (self->design_text), design);
 
   if (c->bursts)

@@ -11,7 +11,10 @@
  */
 #define G_LOG_DOMAIN "hl-design-check"
 
+#include "hl-config.h"
 #include "hl-design-check.h"
+
+#include <glib/gi18n-lib.h>
 #include "hl-number-format.h"
 
 #include <math.h>
@@ -21,10 +24,10 @@ static const struct
   const char *key;
   const char *name;
 } method_names[HL_N_METHODS] = {
-  [HL_METHOD_UG27] = { "ug27", "ASME VIII-1 UG-27" },
-  [HL_METHOD_EN13445] = { "en13445", "EN 13445-3 7.4" },
-  [HL_METHOD_LAME] = { "lame", "Lamé elastic" },
-  [HL_METHOD_THIN] = { "thin", "thin wall" },
+  [HL_METHOD_UG27] = { "ug27", N_ ("ASME VIII-1 UG-27") },
+  [HL_METHOD_EN13445] = { "en13445", N_ ("EN 13445-3 7.4") },
+  [HL_METHOD_LAME] = { "lame", N_ ("Lamé elastic") },
+  [HL_METHOD_THIN] = { "thin", N_ ("thin wall") },
 };
 
 const char *
