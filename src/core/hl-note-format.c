@@ -74,9 +74,22 @@ char *
 hl_note_check_reason (const HlNoteCtx     *ctx,
                       const HlMethodCheck *check)
 {
+  return hl_note_method_reason (check, ctx->units, ctx->loc);
+}
+
+char *
+hl_note_method_reason (const HlMethodCheck *check,
+                       HlUnitSystem         units,
+                       gboolean             locale_numbers)
+{
+  HlNoteCtx numbers = { 0 };
+  const HlNoteCtx *ctx = &numbers;
   g_autofree char *need = NULL, *have = NULL, *allow = NULL, *design = NULL;
   gboolean short_wall, over_pressure;
 
+  g_return_val_if_fail (check != NULL, NULL);
+  numbers.units = units;
+  numbers.loc = locale_numbers;
   if (check->result == HL_CHECK_PASS)
     return NULL;
   /* the core's reason for an out-of-range method is a fixed, marked text */

@@ -40,17 +40,11 @@ char       *hl_note_quantity       (const HlNoteCtx *ctx,
 /* "104.9 %", or "—" */
 char       *hl_note_percent        (const HlNoteCtx *ctx,
                                     double           fraction);
-/* the core's N_() text in the user's language */
-const char *hl_note_core_text      (const char      *text);
 /* "PASS", "FAIL", "NOT APPLICABLE": a verdict */
 const char *hl_note_check_word     (HlCheckResult    result);
 /* why a method fails or does not apply; NULL when it passes */
 char       *hl_note_check_reason   (const HlNoteCtx     *ctx,
                                     const HlMethodCheck *check);
-/* "Caution: " and HL_CAUTION in the user's language */
-char       *hl_note_caution        (void);
-/* "sphere", "cylinder, closed ends", ... */
-const char *hl_note_form_text      (const HlShellInputs *inputs);
 
 /* the sections, in hl-note-*.c */
 void        hl_note_checks_summary (GArray *rows, const HlNoteCtx *ctx);

@@ -103,4 +103,18 @@ char    *hl_note_to_text    (GArray         *rows,
 /* "Rev. 3", or "no revision recorded": the label of every page */
 char    *hl_note_revision_label (const HlProject *project);
 
+/* Words the note shares with the figure and the window, so they read
+ * the same everywhere: */
+/* the core's N_() text in the user's language ("" for NULL) */
+const char *hl_note_core_text      (const char          *text);
+/* "Caution: " and HL_CAUTION in the user's language */
+char       *hl_note_caution        (void);
+/* "sphere", "cylinder, closed ends", ... */
+const char *hl_note_form_text      (const HlShellInputs *inputs);
+/* why a method of the design check fails or does not apply, with its
+ * numbers in @units; NULL when it passes */
+char       *hl_note_method_reason  (const HlMethodCheck *check,
+                                    HlUnitSystem         units,
+                                    gboolean             locale_numbers);
+
 G_END_DECLS

@@ -5,6 +5,7 @@
 #define G_LOG_DOMAIN "hl-figure-format"
 
 #include "hl-figure-format.h"
+#include "hl-note.h"
 #include "hl-report.h"
 
 #include <math.h>
@@ -75,33 +76,24 @@ hl_figure_format_input (double         si,
   return g_strconcat (number, HL_NBSP, unit, NULL);
 }
 
+/* the words below are the design note's (core), so the figure, the
+ * window and the sheet say the same */
 char *
 hl_figure_caution (void)
 {
-  return g_strdup_printf (_("Caution: %s"), _(HL_CAUTION));
+  return hl_note_caution ();
 }
 
 const char *
 hl_figure_form_text (const HlShellInputs *in)
 {
-  if (in->form == HL_FORM_SPHERE)
-    return _("sphere");
-  switch (in->ends)
-    {
-    case HL_ENDS_OPEN:
-      return _("cylinder, open ends");
-    case HL_ENDS_PLANE_STRAIN:
-      return _("cylinder, plane-strain ends");
-    case HL_ENDS_CLOSED:
-    default:
-      return _("cylinder, closed ends");
-    }
+  return hl_note_form_text (in);
 }
 
 const char *
 hl_figure_core_text (const char *text)
 {
-  return text != NULL && text[0] != '\0' ? g_dgettext (GETTEXT_PACKAGE, text) : text;
+  return text != NULL ? hl_note_core_text (text) : NULL;
 }
 
 char *
@@ -109,27 +101,5 @@ hl_figure_check_reason (const HlMethodCheck *check,
                         HlUnitSystem         system,
                         gboolean             locale)
 {
-  g_autofree char *need = NULL, *have = NULL, *allow = NULL, *design = NULL;
-  gboolean short_wall, over_pressure;
-
-  g_return_val_if_fail (check != NULL, NULL);
-
-  if (check->result == HL_CHECK_PASS)
-    return NULL;
-  /* the core's reason for an out-of-range method is a fixed, marked text */
-  if (check->result == HL_CHECK_NOT_APPLICABLE)
-    return g_strdup (hl_figure_core_text (check->reason));
-  short_wall = check->required > check->nominal;
-  over_pressure = check->design_pressure > check->mawp;
-  need = hl_figure_format_quantity (check->required, HL_ROW_LENGTH, system, 4, locale);
-  have = hl_figure_format_quantity (check->nominal, HL_ROW_LENGTH, system, 4, locale);
-  allow = hl_figure_format_quantity (check->mawp, HL_ROW_STRESS, system, 4, locale);
-  design = hl_figure_format_quantity (check->design_pressure, HL_ROW_STRESS, system, 4, locale);
-  if (short_wall && over_pressure)
-    /* TRANSLATORS: required and nominal thickness, allowable and design pressure */
-    return g_strdup_printf (_("needs %s nominal, has %s; allows %s, below the design pressure %s"), need, have,
-                            allow, design);
-  if (short_wall)
-    return g_strdup_printf (_("needs %s nominal, has %s"), need, have);
-  return g_strdup_printf (_("allows %s, below the design pressure %s"), allow, design);
+  return hl_note_method_reason (check, system, locale);
 }
