@@ -258,9 +258,9 @@ make_context (Options *o)
                                     "shell, OUT's name with \"-ID\" before the extension (plan.svg: plan-shell-1.svg,\n"
                                     "plan-shell-2.svg ...). With --shell=ID every format holds that shell, in OUT.\n"
                                     "\n"
-                                    "Numbers: .svg, .pdf and .png are written with the decimal mark of the locale,\n"
-                                    "as the window shows them (LC_ALL=de_DE.UTF-8: 12,5; LC_NUMERIC=C for 12.5);\n"
-                                    ".csv, .txt and --summary use the C locale: a decimal point, and in a .csv\n"
+                                    "Numbers: .svg, .pdf, .png and .txt are written with the decimal mark of the\n"
+                                    "locale, as the window shows them (LC_ALL=de_DE.UTF-8: 12,5; LC_NUMERIC=C for\n"
+                                    "12.5); .csv and --summary use the C locale: a decimal point, and in a .csv\n"
                                     "fields separated by commas (RFC 4180).\n"
                                     "\n"
                                     "Caution: " HL_CAUTION);
