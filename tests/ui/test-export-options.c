@@ -212,7 +212,11 @@ test_this_shell_pdf (void)
   g_assert_true (g_str_has_prefix (head, "%PDF-"));
   g_assert_cmpuint (count_files (dir), ==, 1);
   g_assert_true (g_settings_get_boolean (settings, "export-figure-only"));
-  g_assert_cmpstr (g_settings_get_string (settings, "export-paper"), ==, "letter");
+  {
+    g_autofree char *paper = g_settings_get_string (settings, "export-paper");
+
+    g_assert_cmpstr (paper, ==, "letter");
+  }
   {
     g_auto(GStrv) panels = g_settings_get_strv (settings, "export-panels");
 
