@@ -1,4 +1,11 @@
-/* main.c — decides: headless command (no display needed) or the window
+/* main.c — hoopline: the headless commands, or the window program
+ *
+ * The commands (--check, --summary, --export, --help, --version) need
+ * no display and link no GTK: loading and relocating the toolkit cost
+ * them most of their time.  Anything else is the window's, so this
+ * program replaces itself with hoopline-window (execv: the same process
+ * and PID, so a desktop launcher, a signal or a test that waits on it
+ * reaches the window).
  *
  * SPDX-License-Identifier: GPL-3.0-or-later
  */
@@ -6,40 +13,36 @@
 
 #include "hl-config.h"
 #include "hl-command-line.h"
-#include "hl-application.h"
+#include "hl-program-setup.h"
 
-#include <locale.h>
+#include <errno.h>
+#include <stdio.h>
+#include <string.h>
+#include <unistd.h>
 #include <glib/gi18n.h>
 
-/* Installed, the catalogues are under the prefix; run from the build
- * tree (the README's demo command), they are the ones just built. */
-static const char *
-locale_dir (void)
+/* installed in the libexec folder; beside this one in the build tree */
+static char *
+window_program (void)
 {
-  g_autofree char *self = g_file_read_link ("/proc/self/exe", NULL);
-  static char *build_po;
-
-  if (self != NULL && g_str_has_prefix (self, HL_BUILD_ROOT G_DIR_SEPARATOR_S))
-    {
-      if (build_po == NULL)
-        build_po = g_build_filename (HL_BUILD_ROOT, "po", NULL);
-      return build_po;
-    }
-  return HL_LOCALEDIR;
+  if (hl_program_in_build_tree ())
+    return g_build_filename (HL_BUILD_ROOT, "src", HL_WINDOW_PROGRAM, NULL);
+  return g_build_filename (HL_LIBEXECDIR, HL_WINDOW_PROGRAM, NULL);
 }
 
 int
 main (int    argc,
       char **argv)
 {
-  setlocale (LC_ALL, "");
-  bindtextdomain (GETTEXT_PACKAGE, locale_dir ());
-  bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
-  textdomain (GETTEXT_PACKAGE);
+  g_autofree char *window = NULL;
 
+  hl_program_setup_locale ();
   if (hl_command_line_is_headless (argc, argv))
     return hl_command_line_run (argc, argv);
 
-  /* GTK is touched only from here on, so headless commands need no display */
-  return hl_application_main (argc, argv);
+  window = window_program ();
+  execv (window, argv);
+  /* TRANSLATORS: the window program's path, then the system's reason */
+  fprintf (stderr, _("hoopline: cannot start the window (%s): %s\n"), window, g_strerror (errno));
+  return 2;
 }

@@ -91,13 +91,15 @@ test_tree (void)
   g_autofree char *icon_installed = installed_path ("HL_DATADIR", "icons", "hicolor", "scalable", "apps", icon, NULL);
   const char *paths[][2] = {
     { "HL_BINDIR", dt_env ("HL_PROGRAM_NAME") },
+    /* the window program hoopline starts (src/main.c) */
+    { "HL_LIBEXECDIR", dt_env ("HL_WINDOW_PROGRAM_NAME") },
     { "HL_DATADIR", "applications" },
     { "HL_DATADIR", "metainfo" },
     { "HL_DATADIR", "mime/packages" },
     { "HL_DATADIR", "icons/hicolor/symbolic/apps" },
     { "HL_LOCALEDIR", "de/LC_MESSAGES/hoopline.mo" },
   };
-  const char *names[] = { NULL, desktop, metainfo, mime, symbolic, NULL };
+  const char *names[] = { NULL, NULL, desktop, metainfo, mime, symbolic, NULL };
 
   for (gsize i = 0; i < G_N_ELEMENTS (paths); i++)
     {
