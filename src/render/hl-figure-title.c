@@ -211,7 +211,9 @@ title_cells (HlFigure *f,
     {
       g_autofree char *pi = hl_stress_text (f, f->sol->pi, 4);
       g_autofree char *po = hl_stress_text (f, f->sol->po, 4);
-      g_autofree char *temp = hl_figure_format_sig (sh->design_temperature.value, 4, f->locale);
+      /* in the figure's unit system, as every other number of it */
+      g_autofree char *temp = hl_figure_format_input (hl_quantity_si (sh->design_temperature, HL_KIND_TEMPERATURE),
+                                                      HL_KIND_TEMPERATURE, f->units, 4, f->locale);
 
       g_free (cells[6].value);
       g_free (cells[7].value);
@@ -220,8 +222,7 @@ title_cells (HlFigure *f,
                          ? g_strdup_printf ("%s, %s", hl_design_basis_name (sh->design_basis), sh->code_edition)
                          : g_strdup (hl_design_basis_name (sh->design_basis));
       /* TRANSLATORS: internal and external design pressure, design temperature with its unit */
-      cells[7].value = g_strdup_printf (_("%s inside, %s outside, at %s %s"), pi, po, temp,
-                                        sh->design_temperature.unit);
+      cells[7].value = g_strdup_printf (_("%s inside, %s outside, at %s"), pi, po, temp);
     }
   return N_CELLS;
 }
