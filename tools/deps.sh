@@ -8,7 +8,7 @@ packages=(
   # build
   meson ninja-build pkg-config gcc clang gettext
   libglib2.0-dev libglib2.0-bin libxml2-dev libxml2-utils
-  libgtk-4-dev libadwaita-1-dev libcairo2-dev libpango1.0-dev libgsl-dev
+  libgtk-4-dev libadwaita-1-dev libcairo2-dev libpango1.0-dev libgsl-dev libpng-dev zlib1g-dev
   # tests: virtual display, validators, locales, figure checks
   xvfb xauth desktop-file-utils appstream locales poppler-utils
   imagemagick librsvg2-bin librsvg2-common shared-mime-info valgrind libclang-rt-14-dev

@@ -8,6 +8,7 @@
 #define G_LOG_DOMAIN "hl-export-figure"
 
 #include "hl-export.h"
+#include "hl-png.h"
 #include "hl-atomic-file.h"
 #include "hl-export-pdf.h"
 #include "hl-sheet.h"
@@ -194,7 +195,12 @@ write_to (const char            *temp,
       if (!check (cairo_surface_status (surface), path, error))
         break;
       if (check (draw_figure (surface, width, height, png_scale (width, height), ctx), path, error))
-        check (cairo_surface_write_to_png (surface, temp), path, error);
+        {
+          g_autoptr(GError) local = NULL;
+
+          if (!hl_png_write (surface, temp, &local))
+            g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, "cannot write “%s”: %s", path, local->message);
+        }
       break;
     }
   cairo_surface_destroy (surface);
