@@ -50,18 +50,8 @@ static char *
 num (const Steps *c,
      double       value)
 {
-  g_autofree char *plain = hl_format_readable (value, 4, c->locale);
-  char *text = hl_format_grouped (plain);
-
-  /* a true minus, as in the formulas */
-  if (text[0] == '-')
-    {
-      char *signed_text = g_strconcat (MINUS, text + 1, NULL);
-
-      g_free (text);
-      return signed_text;
-    }
-  return text;
+  /* grouped, with a true minus, as in the formulas */
+  return hl_format_for_reading (value, 4, c->locale);
 }
 
 static char *

@@ -11,22 +11,12 @@
 #include <math.h>
 #include <string.h>
 
-#define MINUS "\xe2\x88\x92"
-
 char *
 hl_note_sig (double   value,
              int      digits,
              gboolean locale)
 {
-  g_autofree char *plain = hl_format_readable (value, digits, locale);
-  char *text = hl_format_grouped (plain);
-  char *out;
-
-  if (text[0] != '-')
-    return text;
-  out = g_strconcat (MINUS, text + 1, NULL);
-  g_free (text);
-  return out;
+  return hl_format_for_reading (value, digits, locale);
 }
 
 char *

@@ -321,3 +321,25 @@ hl_format_grouped (const char *text)
   g_string_append (out, end);
   return g_string_free (out, FALSE);
 }
+
+char *
+hl_format_true_minus (char *text)
+{
+  char *out;
+
+  if (text == NULL || text[0] != '-')
+    return text;
+  out = g_strconcat ("\xe2\x88\x92", text + 1, NULL);
+  g_free (text);
+  return out;
+}
+
+char *
+hl_format_for_reading (double   value,
+                       int      digits,
+                       gboolean locale)
+{
+  g_autofree char *plain = hl_format_readable (value, digits, locale);
+
+  return hl_format_true_minus (hl_format_grouped (plain));
+}

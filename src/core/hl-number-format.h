@@ -60,4 +60,14 @@ char         *hl_format_shortest        (double   value,
  * kept.  Never for files or fields, which read numbers back. */
 char         *hl_format_grouped         (const char *text);
 
+/* @text (owned, freed) with a leading "-" made the true minus U+2212,
+ * as a reader's text prints it */
+char         *hl_format_true_minus      (char       *text);
+
+/* A number for a reader of the sheet or the text report:
+ * hl_format_readable, digits grouped (hl_format_grouped), a true minus. */
+char         *hl_format_for_reading     (double      value,
+                                         int         digits,
+                                         gboolean    locale);
+
 G_END_DECLS

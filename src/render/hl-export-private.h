@@ -18,4 +18,13 @@ gboolean hl_export_figure_shells (const HlExportRequest *req,
                                   HlExportFormat         format,
                                   GError               **error);
 
+/* Solves @shell (the analysis and the new wall) and fills @ctx for paper
+ * as @req asks (units, panels, decimal mark); the solutions join @keep,
+ * which must outlive @ctx.  FALSE with "shell ID: reason" in @error. */
+gboolean hl_export_shell_context (const HlExportRequest *req,
+                                  const HlShellInputs   *shell,
+                                  GPtrArray             *keep,
+                                  HlFigureContext       *ctx,
+                                  GError               **error);
+
 G_END_DECLS

@@ -106,22 +106,11 @@ write_figure (const HlExportRequest *req,
               const char            *target,
               GError               **error)
 {
-  g_autoptr(HlSolution) sol = NULL;
-  g_autoptr(HlSolution) new_wall = NULL;
-  g_autoptr(GError) local = NULL;
+  g_autoptr(GPtrArray) keep = g_ptr_array_new_with_free_func ((GDestroyNotify) hl_solution_free);
   HlFigureContext ctx = { 0 };
 
-  sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
-  if (sol == NULL)
-    {
-      set_shell_error (error, shell, local);
-      return FALSE;
-    }
-  new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
-  hl_figure_context_init (&ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
-  ctx.units = req->units;
-  ctx.panels = req->panels;
-  ctx.locale_numbers = req->locale_numbers;
+  if (!hl_export_shell_context (req, shell, keep, &ctx, error))
+    return FALSE;
   return hl_export_figure_file (target, format, width, height, &ctx, TRUE, error);
 }
 

@@ -93,6 +93,33 @@ export_text (const HlExportRequest *req,
 /* one context per shell of @req, each with its analysis and new wall
  * (solved once here for every page); NULL with @error set when a shell
  * cannot be solved */
+gboolean
+hl_export_shell_context (const HlExportRequest *req,
+                         const HlShellInputs   *shell,
+                         GPtrArray             *keep,
+                         HlFigureContext       *ctx,
+                         GError               **error)
+{
+  g_autoptr(GError) local = NULL;
+  HlSolution *sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
+  HlSolution *new_wall;
+
+  if (sol == NULL)
+    {
+      g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
+      return FALSE;
+    }
+  new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
+  g_ptr_array_add (keep, sol);
+  if (new_wall != NULL)
+    g_ptr_array_add (keep, new_wall);
+  hl_figure_context_init (ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
+  ctx->units = req->units;
+  ctx->panels = req->panels;
+  ctx->locale_numbers = req->locale_numbers;
+  return TRUE;
+}
+
 static GPtrArray *
 solve_shells (const HlExportRequest *req,
               GPtrArray             *keep,
@@ -102,27 +129,11 @@ solve_shells (const HlExportRequest *req,
 
   for (GList *l = req->shells; l != NULL; l = l->next)
     {
-      const HlShellInputs *shell = l->data;
-      g_autoptr(GError) local = NULL;
-      HlSolution *sol = hl_solve (shell, HL_DEFAULT_POINTS, TRUE, &local);
-      HlSolution *new_wall;
-      HlFigureContext *ctx;
+      HlFigureContext *ctx = g_new0 (HlFigureContext, 1);
 
-      if (sol == NULL)
-        {
-          g_set_error (error, local->domain, local->code, "shell %s: %s", shell->id, local->message);
-          return NULL;
-        }
-      new_wall = hl_solve (shell, HL_DEFAULT_POINTS, FALSE, NULL);
-      g_ptr_array_add (keep, sol);
-      if (new_wall != NULL)
-        g_ptr_array_add (keep, new_wall);
-      ctx = g_new0 (HlFigureContext, 1);
-      hl_figure_context_init (ctx, req->project, shell, sol, new_wall, NULL, HL_FIGURE_TARGET_PAPER);
-      ctx->units = req->units;
-      ctx->panels = req->panels;
-      ctx->locale_numbers = req->locale_numbers;
       g_ptr_array_add (contexts, ctx);
+      if (!hl_export_shell_context (req, l->data, keep, ctx, error))
+        return NULL;
     }
   return g_steal_pointer (&contexts);
 }

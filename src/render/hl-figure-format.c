@@ -11,20 +11,6 @@
 #include <math.h>
 #include <string.h>
 
-#define MINUS "\xe2\x88\x92"
-
-static char *
-true_minus (char *text)
-{
-  char *out;
-
-  if (text[0] != '-')
-    return text;
-  out = g_strconcat (MINUS, text + 1, NULL);
-  g_free (text);
-  return out;
-}
-
 char *
 hl_figure_format_fixed (double   value,
                         int      decimals,
@@ -32,7 +18,7 @@ hl_figure_format_fixed (double   value,
 {
   if (!isfinite (value))
     return g_strdup (_("n/a"));
-  return true_minus (hl_format_fixed (value, decimals, locale));
+  return hl_format_true_minus (hl_format_fixed (value, decimals, locale));
 }
 
 char *
@@ -40,7 +26,7 @@ hl_figure_format_sig (double   value,
                       int      digits,
                       gboolean locale)
 {
-  return true_minus (hl_format_readable (value, digits, locale));
+  return hl_format_true_minus (hl_format_readable (value, digits, locale));
 }
 
 char *
